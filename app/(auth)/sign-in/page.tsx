@@ -1,0 +1,51 @@
+import type { Metadata } from "next";
+import { SignInForm } from "@/components/auth/sign-in-form";
+import { Card, CardBody, Table, TBody, Td, Th, THead, Tr } from "@/components/ui";
+import { demoMembers } from "@/db/seed/demo-garden";
+import { safeNextPath } from "@/lib/auth/page-session";
+import { getEnv } from "@/lib/env";
+
+export const metadata: Metadata = { title: "Sign in" };
+export const dynamic = "force-dynamic";
+
+export default async function SignInPage({ searchParams }: { searchParams: Promise<Record<string, string | string[]>> }) {
+  const next = safeNextPath((await searchParams).next);
+  // Demo passwords are public by design and shown only when the demo garden is loaded.
+  const demo = getEnv().CASTLINE_DEMO;
+  return (
+    <>
+      <h1 className="text-3xl">Sign in</h1>
+      <Card>
+        <CardBody>
+          <SignInForm next={next} />
+        </CardBody>
+      </Card>
+      {demo ? (
+        <Card>
+          <CardBody>
+            <Table caption="Demo accounts for the Hollis Street Garden">
+              <THead>
+                <Tr>
+                  <Th>Role</Th>
+                  <Th>E-mail</Th>
+                  <Th>Password</Th>
+                </Tr>
+              </THead>
+              <TBody>
+                {demoMembers.map((m) => (
+                  <Tr key={m.email}>
+                    <Td>{m.role}</Td>
+                    <Td>{m.email}</Td>
+                    <Td>
+                      <code>{m.password}</code>
+                    </Td>
+                  </Tr>
+                ))}
+              </TBody>
+            </Table>
+          </CardBody>
+        </Card>
+      ) : null}
+    </>
+  );
+}

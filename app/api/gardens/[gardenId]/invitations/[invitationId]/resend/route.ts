@@ -1,0 +1,22 @@
+import { z } from "zod";
+import { getInvitation, renewInvitationToken } from "@/db/queries/invitations";
+import { requireRole } from "@/lib/auth/require-role";
+import { createLinkToken } from "@/lib/auth/tokens";
+import { appBaseUrl } from "@/lib/app-url";
+import { AppError } from "@/lib/errors";
+import { parseParams, route } from "@/lib/http";
+import { deliverInvitation } from "@/lib/invitations";
+
+const paramsSchema = z.object({ gardenId: z.uuid(), invitationId: z.uuid() });
+
+export const POST = route<z.infer<typeof paramsSchema>>(async (request, { params }) => {
+  const { gardenId, invitationId } = await parseParams(params, paramsSchema);
+  const member = await requireRole(request, gardenId, "owner");
+  const existing = await getInvitation({ gardenId, invitationId });
+  if (!existing || existing.acceptedAt || existing.revokedAt) throw new AppError("not_found:invitation");
+  const { token, tokenHash } = createLinkToken();
+  await renewInvitationToken({ invitationId, tokenHash });
+  const invitation = (await getInvitation({ gardenId, invitationId }))!;
+  const mailSent = await deliverInvitation({ invitation, token, inviter: member.user, baseUrl: appBaseUrl(request) });
+  return Response.json({ mailSent, invitation: { ...invitation, mailStatus: mailSent ? "sent" : "failed" } });
+});

@@ -1,0 +1,36 @@
+import { z } from "zod";
+import { createInvitation, listOpenInvitations } from "@/db/queries/invitations";
+import { requireRole } from "@/lib/auth/require-role";
+import { createLinkToken } from "@/lib/auth/tokens";
+import { appBaseUrl } from "@/lib/app-url";
+import { parseJson, parseParams, route } from "@/lib/http";
+import { deliverInvitation } from "@/lib/invitations";
+import { inviteSchema } from "@/lib/validation/garden";
+
+const paramsSchema = z.object({ gardenId: z.uuid() });
+type Params = z.infer<typeof paramsSchema>;
+
+export const GET = route<Params>(async (request, { params }) => {
+  const { gardenId } = await parseParams(params, paramsSchema);
+  await requireRole(request, gardenId, "owner");
+  return Response.json({ invitations: await listOpenInvitations({ gardenId }) });
+});
+
+export const POST = route<Params>(async (request, { params }) => {
+  const { gardenId } = await parseParams(params, paramsSchema);
+  const member = await requireRole(request, gardenId, "owner");
+  const input = await parseJson(request, inviteSchema);
+  const { token, tokenHash } = createLinkToken();
+  const invitation = await createInvitation({ gardenId, ...input, tokenHash, invitedBy: member.user.id });
+  const mailSent = await deliverInvitation({ invitation, token, inviter: member.user, baseUrl: appBaseUrl(request) });
+  return Response.json(
+    {
+      invitation: { ...invitation, mailStatus: mailSent ? "sent" : "failed" },
+      mailSent,
+      message: mailSent
+        ? `Invitation sent to ${invitation.email}.`
+        : `The invitation is saved, but the e-mail to ${invitation.email} could not be sent. Try "Resend" in a moment.`,
+    },
+    { status: 201 },
+  );
+});

@@ -1,0 +1,45 @@
+import { z } from "zod";
+import { deleteGarden, getGardenById, updateGarden } from "@/db/queries/gardens";
+import { requireRole } from "@/lib/auth/require-role";
+import { AppError } from "@/lib/errors";
+import { parseJson, parseParams, parseWith, route } from "@/lib/http";
+import { createGardenSchema, deleteGardenSchema, updateGardenSchema } from "@/lib/validation/garden";
+
+const paramsSchema = z.object({ gardenId: z.uuid() });
+type Params = z.infer<typeof paramsSchema>;
+
+export const GET = route<Params>(async (request, { params }) => {
+  const { gardenId } = await parseParams(params, paramsSchema);
+  const member = await requireRole(request, gardenId, "viewer");
+  const garden = await getGardenById({ gardenId });
+  if (!garden) throw new AppError("not_found:garden");
+  return Response.json({ garden, role: member.role });
+});
+
+export const PATCH = route<Params>(async (request, { params }) => {
+  const { gardenId } = await parseParams(params, paramsSchema);
+  await requireRole(request, gardenId, "owner");
+  const input = await parseJson(request, updateGardenSchema);
+  const current = await getGardenById({ gardenId });
+  if (!current) throw new AppError("not_found:garden");
+  // Check the merged result, so changing one frost date cannot put them out of order.
+  parseWith(createGardenSchema, { ...current, ...input });
+  const garden = await updateGarden({ gardenId, input });
+  return Response.json({ garden });
+});
+
+// Deleting needs the owner to type the garden's name: it takes every bed, bin and log with it.
+export const DELETE = route<Params>(async (request, { params }) => {
+  const { gardenId } = await parseParams(params, paramsSchema);
+  await requireRole(request, gardenId, "owner");
+  const { confirmName } = await parseJson(request, deleteGardenSchema);
+  const garden = await getGardenById({ gardenId });
+  if (!garden) throw new AppError("not_found:garden");
+  if (confirmName.trim() !== garden.name) {
+    throw new AppError("validation:confirm", "The name typed does not match the garden's name.", {
+      confirmName: `Type "${garden.name}" exactly to delete it.`,
+    });
+  }
+  await deleteGarden({ gardenId });
+  return Response.json({ ok: true });
+});

@@ -1,0 +1,15 @@
+import { acceptInvitation } from "@/db/queries/invitations";
+import { requireUser } from "@/lib/auth/session";
+import { hashLinkToken } from "@/lib/auth/tokens";
+import { AppError } from "@/lib/errors";
+import { parseJson, route } from "@/lib/http";
+import { invitationProblems } from "@/lib/messages";
+import { acceptInvitationSchema } from "@/lib/validation/garden";
+
+export const POST = route(async (request) => {
+  const user = await requireUser(request);
+  const { token } = await parseJson(request, acceptInvitationSchema);
+  const outcome = await acceptInvitation({ tokenHash: hashLinkToken(token), userId: user.id });
+  if (!outcome.ok) throw new AppError(`gone:invitation_${outcome.reason}`, invitationProblems[outcome.reason]);
+  return Response.json({ gardenId: outcome.gardenId, role: outcome.role });
+});

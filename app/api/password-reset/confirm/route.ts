@@ -1,0 +1,17 @@
+import { consumePasswordReset } from "@/db/queries/password-resets";
+import { hashPassword } from "@/lib/auth/password";
+import { hashLinkToken } from "@/lib/auth/tokens";
+import { AppError } from "@/lib/errors";
+import { parseJson, route } from "@/lib/http";
+import { resetProblems } from "@/lib/messages";
+import { confirmResetSchema } from "@/lib/validation/auth";
+
+export const POST = route(async (request) => {
+  const input = await parseJson(request, confirmResetSchema);
+  const outcome = await consumePasswordReset({
+    tokenHash: hashLinkToken(input.token),
+    newPasswordHash: await hashPassword(input.newPassword),
+  });
+  if (!outcome.ok) throw new AppError(`gone:reset_${outcome.reason}`, resetProblems[outcome.reason]);
+  return Response.json({ ok: true, message: "Your password is changed. Sign in with the new one." });
+});

@@ -1,0 +1,22 @@
+import type { Metadata, Viewport } from "next";
+import type { ReactNode } from "react";
+import { Providers } from "@/components/providers";
+import { bodyFont, displayFont } from "./fonts";
+import "./globals.css";
+
+export const metadata: Metadata = {
+  title: { default: "Castline", template: "%s · Castline" },
+  description: "Plans a garden's feeding around what its worm bins actually make.",
+};
+
+export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: "#2e6b3a" };
+
+export default function RootLayout({ children }: { children: ReactNode }) {
+  return (
+    <html lang="en" className={`${bodyFont.variable} ${displayFont.variable}`}>
+      <body>
+        <Providers>{children}</Providers>
+      </body>
+    </html>
+  );
+}

@@ -1,0 +1,45 @@
+"use client";
+
+import Link from "next/link";
+import { useRouter } from "next/navigation";
+import { FormMessage } from "@/components/forms/form-message";
+import { useApiForm } from "@/components/forms/use-api-form";
+import { Button, Field, Input } from "@/components/ui";
+import { apiFetch } from "@/lib/api-client";
+import { signInSchema } from "@/lib/validation/auth";
+
+export function SignInForm({ next }: { next: string }) {
+  const router = useRouter();
+  const { form, formError, submit } = useApiForm(signInSchema, { email: "", password: "" });
+  const { register, formState } = form;
+
+  const onSubmit = submit(async (values) => {
+    await apiFetch("/api/session", { body: values });
+    router.replace(next);
+    router.refresh();
+  });
+
+  return (
+    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4" aria-label="Sign in">
+      <FormMessage message={formError} />
+      <Field label="E-mail" error={formState.errors.email?.message}>
+        <Input type="email" autoComplete="email" inputMode="email" {...register("email")} />
+      </Field>
+      <Field label="Password" error={formState.errors.password?.message}>
+        <Input type="password" autoComplete="current-password" {...register("password")} />
+      </Field>
+      <Button type="submit" pending={formState.isSubmitting}>
+        Sign in
+      </Button>
+      <p className="text-sm text-soil-700">
+        <Link className="underline" href="/forgot-password">
+          Forgot your password?
+        </Link>{" "}
+        · New here?{" "}
+        <Link className="underline" href={`/sign-up?next=${encodeURIComponent(next)}`}>
+          Make an account
+        </Link>
+      </p>
+    </form>
+  );
+}

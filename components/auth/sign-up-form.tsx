@@ -1,0 +1,50 @@
+"use client";
+
+import Link from "next/link";
+import { useRouter } from "next/navigation";
+import { FormMessage } from "@/components/forms/form-message";
+import { useApiForm } from "@/components/forms/use-api-form";
+import { Button, Field, Input } from "@/components/ui";
+import { apiFetch } from "@/lib/api-client";
+import { signUpSchema } from "@/lib/validation/auth";
+import { PASSWORD_MIN } from "@/lib/validation/password";
+
+export function SignUpForm({ next }: { next: string }) {
+  const router = useRouter();
+  const { form, formError, submit } = useApiForm(signUpSchema, { name: "", email: "", password: "" });
+  const { register, formState } = form;
+
+  const onSubmit = submit(async (values) => {
+    await apiFetch("/api/account", { body: values });
+    router.replace(next);
+    router.refresh();
+  });
+
+  return (
+    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4" aria-label="Make an account">
+      <FormMessage message={formError} />
+      <Field label="Your name" error={formState.errors.name?.message}>
+        <Input autoComplete="name" {...register("name")} />
+      </Field>
+      <Field label="E-mail" error={formState.errors.email?.message}>
+        <Input type="email" autoComplete="email" inputMode="email" {...register("email")} />
+      </Field>
+      <Field
+        label="Password"
+        hint={`At least ${PASSWORD_MIN} characters. A few unrelated words make a strong one; pasting from a password manager is fine.`}
+        error={formState.errors.password?.message}
+      >
+        <Input type="password" autoComplete="new-password" {...register("password")} />
+      </Field>
+      <Button type="submit" pending={formState.isSubmitting}>
+        Make my account
+      </Button>
+      <p className="text-sm text-soil-700">
+        Already have one?{" "}
+        <Link className="underline" href={`/sign-in?next=${encodeURIComponent(next)}`}>
+          Sign in
+        </Link>
+      </p>
+    </form>
+  );
+}

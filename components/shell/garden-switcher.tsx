@@ -1,0 +1,31 @@
+"use client";
+
+import { useRouter } from "next/navigation";
+import { Select } from "@/components/ui";
+
+type GardenOption = { id: string; name: string };
+
+/** Jumps between the gardens a person belongs to (their plot, a community garden…). */
+export function GardenSwitcher({ gardens, currentId }: { gardens: GardenOption[]; currentId?: string }) {
+  const router = useRouter();
+  if (gardens.length === 0) return null;
+  return (
+    <label className="flex items-center gap-2">
+      <span className="sr-only">Garden</span>
+      <Select
+        value={currentId ?? ""}
+        onChange={(e) => router.push(e.target.value ? `/g/${e.target.value}` : "/gardens")}
+        className="min-w-40"
+        aria-label="Switch garden"
+      >
+        {!currentId ? <option value="">Choose a garden…</option> : null}
+        {gardens.map((g) => (
+          <option key={g.id} value={g.id}>
+            {g.name}
+          </option>
+        ))}
+        <option value="">All gardens…</option>
+      </Select>
+    </label>
+  );
+}

@@ -1,0 +1,67 @@
+import "server-only";
+import { and, eq, isNull, sql } from "drizzle-orm";
+import { getDb } from "@/db";
+import { passwordResetTokens, users } from "@/db/schema";
+
+export const RESET_TTL_MS = 60 * 60 * 1000;
+
+export async function createPasswordReset(input: { userId: string; tokenHash: string; now?: Date }) {
+  const db = await getDb();
+  const now = input.now ?? new Date();
+  await db.transaction(async (tx) => {
+    // Only the newest link works: asking again retires the earlier ones.
+    await tx
+      .update(passwordResetTokens)
+      .set({ usedAt: now })
+      .where(and(eq(passwordResetTokens.userId, input.userId), isNull(passwordResetTokens.usedAt)));
+    await tx.insert(passwordResetTokens).values({
+      userId: input.userId,
+      tokenHash: input.tokenHash,
+      expiresAt: new Date(now.getTime() + RESET_TTL_MS),
+    });
+  });
+}
+
+export type ResetOutcome = { ok: true; userId: string } | { ok: false; reason: "invalid" | "expired" | "used" };
+
+/** Marks the token used, sets the new hash and ends every session, all at once. */
+export async function consumePasswordReset(input: {
+  tokenHash: string;
+  newPasswordHash: string;
+  now?: Date;
+}): Promise<ResetOutcome> {
+  const db = await getDb();
+  const now = input.now ?? new Date();
+  return db.transaction(async (tx) => {
+    const [row] = await tx
+      .select({
+        id: passwordResetTokens.id,
+        userId: passwordResetTokens.userId,
+        expiresAt: passwordResetTokens.expiresAt,
+        usedAt: passwordResetTokens.usedAt,
+      })
+      .from(passwordResetTokens)
+      .where(eq(passwordResetTokens.tokenHash, input.tokenHash))
+      .for("update")
+      .limit(1);
+    if (!row) return { ok: false, reason: "invalid" } as const;
+    if (row.usedAt) return { ok: false, reason: "used" } as const;
+    if (row.expiresAt.getTime() <= now.getTime()) return { ok: false, reason: "expired" } as const;
+    await tx.update(passwordResetTokens).set({ usedAt: now }).where(eq(passwordResetTokens.id, row.id));
+    await tx
+      .update(users)
+      .set({ passwordHash: input.newPasswordHash, sessionVersion: sql`${users.sessionVersion} + 1` })
+      .where(eq(users.id, row.userId));
+    return { ok: true, userId: row.userId } as const;
+  });
+}
+
+export async function setPassword(input: { userId: string; passwordHash: string }): Promise<number> {
+  const db = await getDb();
+  const [row] = await db
+    .update(users)
+    .set({ passwordHash: input.passwordHash, sessionVersion: sql`${users.sessionVersion} + 1` })
+    .where(eq(users.id, input.userId))
+    .returning({ v: users.sessionVersion });
+  return row?.v ?? 0;
+}

@@ -1,0 +1,26 @@
+import { pgEnum } from "drizzle-orm/pg-core";
+
+export const roleEnum = pgEnum("member_role", ["viewer", "helper", "grower", "owner"]);
+export const unitSystemEnum = pgEnum("unit_system", ["us", "metric"]);
+export const bedKindEnum = pgEnum("bed_kind", ["bed", "container"]);
+export const feederClassEnum = pgEnum("feeder_class", ["heavy", "medium", "light"]);
+export const materialEnum = pgEnum("material", ["castings", "leachate", "tea"]);
+export const methodEnum = pgEnum("feeding_method", ["top-dress", "side-dress", "soil-mix", "drench"]);
+export const basisEnum = pgEnum("amount_basis", [
+  "per-plant",
+  "per-area",
+  "per-container-volume",
+  "percent-of-mix",
+]);
+export const binKindEnum = pgEnum("bin_kind", ["stacked-tray", "single"]);
+export const binEventKindEnum = pgEnum("bin_event_kind", [
+  "feeding",
+  "tray-added",
+  "harvest",
+  "liquid-drained",
+  "worms-moved",
+  "observation",
+]);
+export const stockMaterialEnum = pgEnum("stock_material", ["castings", "leachate"]);
+export const siUnitEnum = pgEnum("si_unit", ["kg", "L"]);
+export const mailStatusEnum = pgEnum("mail_status", ["pending", "sent", "failed"]);

@@ -1,0 +1,55 @@
+import { date, index, pgTable, primaryKey, text, timestamp, uuid } from "drizzle-orm/pg-core";
+import { users } from "./accounts";
+import { createdAt, id, quantity } from "./columns";
+import { mailStatusEnum, roleEnum, unitSystemEnum } from "./enums";
+
+export const gardens = pgTable("gardens", {
+  id: id(),
+  name: text("name").notNull(),
+  timeZone: text("time_zone").notNull(),
+  unitSystem: unitSystemEnum("unit_system").notNull().default("us"),
+  lastSpringFrost: date("last_spring_frost").notNull(),
+  firstFallFrost: date("first_fall_frost").notNull(),
+  location: text("location"),
+  // Purchase price of bought castings, used to value surplus (per kg in SI).
+  castingsPricePerKg: quantity("castings_price_per_kg").notNull().default(2.204623),
+  currency: text("currency").notNull().default("USD"),
+  createdAt: createdAt(),
+  updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+});
+
+export const memberships = pgTable(
+  "memberships",
+  {
+    gardenId: uuid("garden_id")
+      .notNull()
+      .references(() => gardens.id, { onDelete: "cascade" }),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    role: roleEnum("role").notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [primaryKey({ columns: [t.gardenId, t.userId] }), index("memberships_user_idx").on(t.userId)],
+);
+
+export const invitations = pgTable(
+  "invitations",
+  {
+    id: id(),
+    gardenId: uuid("garden_id")
+      .notNull()
+      .references(() => gardens.id, { onDelete: "cascade" }),
+    email: text("email").notNull(),
+    role: roleEnum("role").notNull(),
+    tokenHash: text("token_hash").notNull().unique(),
+    invitedBy: uuid("invited_by").references(() => users.id, { onDelete: "set null" }),
+    expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
+    acceptedAt: timestamp("accepted_at", { withTimezone: true }),
+    acceptedBy: uuid("accepted_by").references(() => users.id, { onDelete: "set null" }),
+    revokedAt: timestamp("revoked_at", { withTimezone: true }),
+    mailStatus: mailStatusEnum("mail_status").notNull().default("pending"),
+    createdAt: createdAt(),
+  },
+  (t) => [index("invitations_garden_idx").on(t.gardenId)],
+);

@@ -1,0 +1,7 @@
+import "next-auth";
+
+declare module "next-auth" {
+  interface User {
+    sessionVersion?: number;
+  }
+}

@@ -1,0 +1,57 @@
+import { z } from "zod";
+import { roles } from "@/lib/auth/roles";
+
+const isoDay = (label: string) =>
+  z
+    .string({ error: `Enter the ${label}.` })
+    .regex(/^\d{4}-\d{2}-\d{2}$/, `Enter the ${label} as a date.`)
+    .refine((d) => !Number.isNaN(Date.parse(`${d}T00:00:00Z`)), `The ${label} is not a real date.`);
+
+function isTimeZone(tz: string): boolean {
+  try {
+    new Intl.DateTimeFormat("en-US", { timeZone: tz });
+    return true;
+  } catch {
+    return false;
+  }
+}
+
+const gardenFields = z.object({
+  name: z.string().trim().min(1, "Give the garden a name.").max(80, "Use at most 80 characters."),
+  timeZone: z.string().min(1, "Choose a time zone.").refine(isTimeZone, "That is not a time zone we know."),
+  unitSystem: z.enum(["us", "metric"], { error: "Choose US customary or metric." }),
+  lastSpringFrost: isoDay("last spring frost date"),
+  firstFallFrost: isoDay("first fall frost date"),
+  location: z.string().trim().max(200, "Use at most 200 characters.").optional().nullable(),
+});
+
+const frostOrder = (v: { lastSpringFrost?: string; firstFallFrost?: string }) =>
+  !v.lastSpringFrost || !v.firstFallFrost || v.lastSpringFrost < v.firstFallFrost;
+const frostOrderIssue = {
+  message: "The first fall frost must come after the last spring frost.",
+  path: ["firstFallFrost"],
+};
+
+export const createGardenSchema = gardenFields.refine(frostOrder, frostOrderIssue);
+export type CreateGardenInput = z.infer<typeof createGardenSchema>;
+
+export const updateGardenSchema = gardenFields.partial().refine(frostOrder, frostOrderIssue);
+export type UpdateGardenInput = z.infer<typeof updateGardenSchema>;
+
+export const deleteGardenSchema = z.object({
+  confirmName: z.string({ error: "Type the garden's name to confirm." }).min(1, "Type the garden's name to confirm."),
+});
+
+export const roleSchema = z.enum(roles, { error: "Choose a role: owner, grower, helper or viewer." });
+
+export const inviteSchema = z.object({
+  email: z.string().trim().max(254).pipe(z.email("Enter a valid e-mail address.")),
+  role: roleSchema,
+});
+export type InviteInput = z.infer<typeof inviteSchema>;
+
+export const changeRoleSchema = z.object({ role: roleSchema });
+
+export const acceptInvitationSchema = z.object({
+  token: z.string().min(20, "This invitation link is not valid.").max(200, "This invitation link is not valid."),
+});

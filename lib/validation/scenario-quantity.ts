@@ -1,0 +1,49 @@
+import { z } from "zod";
+import { quantityOf, siUnit, toSi, unitNames, type Quantity, type UnitName } from "@/lib/units";
+
+// A measured value as a grower types it: { "value": 24, "unit": "in" }. The
+// unit must be one we know and of the right kind; the value must be positive,
+// finite and below a bound that catches typing slips (in SI, shown in the message).
+
+export const unitSchema = z.enum(unitNames, {
+  error: (issue) =>
+    `unknown unit ${JSON.stringify(issue.input)}; use one of ${unitNames.join(", ")}`,
+});
+
+export interface QuantityValue {
+  value: number;
+  unit: UnitName;
+}
+
+export function quantitySchema(kinds: Quantity | Quantity[], maxSi?: number, allowZero = false) {
+  const allowed = Array.isArray(kinds) ? kinds : [kinds];
+  return z
+    .object({
+      value: allowZero ? z.number().finite().nonnegative() : z.number().finite().positive(),
+      unit: unitSchema,
+    })
+    .strict()
+    .superRefine((q, ctx) => {
+      const kind = quantityOf(q.unit);
+      if (!allowed.includes(kind)) {
+        ctx.addIssue({
+          code: "custom",
+          path: ["unit"],
+          message: `"${q.unit}" is a ${kind} unit; expected a ${allowed.join(" or ")} unit`,
+        });
+        return;
+      }
+      if (maxSi !== undefined && toSi(q.value, q.unit) > maxSi) {
+        ctx.addIssue({
+          code: "custom",
+          path: ["value"],
+          message: `${q.value} ${q.unit} is larger than we accept (at most ${maxSi} ${siUnit[kind]})`,
+        });
+      }
+    });
+}
+
+/** SI value of a checked quantity (L, kg, m², m). */
+export function si(q: QuantityValue): number {
+  return toSi(q.value, q.unit);
+}

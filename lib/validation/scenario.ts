@@ -1,0 +1,348 @@
+import { z } from "zod";
+import { EngineInputError } from "@/lib/engine/errors";
+import { GEOMETRY_LIMITS } from "@/lib/engine/geometry";
+import { isBoundedRule, parseRecurrence } from "@/lib/engine/recurrence";
+import {
+  basisSchema,
+  feederClassSchema,
+  gardenSeasonSchema,
+  isoDateSchema,
+  materialSchema,
+  methodSchema,
+  nominalBoardSchema,
+  recurrenceSchema,
+  unitSystemSchema,
+} from "@/lib/validation/engine-inputs";
+import { quantitySchema } from "@/lib/validation/scenario-quantity";
+import { isUnitName, quantityOf, unitNames } from "@/lib/units";
+
+// A whole garden in one JSON file: what `npm run plan` reads and what the app
+// exports and imports. Sizes carry their unit ({ value, unit }); the engine
+// gets SI through lib/engine/plan-inputs.ts. Every error names its JSON path.
+
+export const SCENARIO_FORMAT = "castline-scenario";
+
+const id = z.string().trim().min(1).max(100);
+const month = z.number().int().min(1).max(12);
+
+function isTimeZone(tz: string): boolean {
+  try {
+    new Intl.DateTimeFormat("en-US", { timeZone: tz });
+    return true;
+  } catch {
+    return false;
+  }
+}
+
+const settingsSchema = z
+  .object({
+    unitSystem: unitSystemSchema,
+    timeZone: z
+      .string()
+      .refine(isTimeZone, "is not a time zone we know (use an IANA name such as America/Chicago)"),
+    lastSpringFrost: z.string(),
+    firstFallFrost: z.string(),
+    /** Last day of logged history; forecasts start the day after. */
+    asOf: isoDateSchema.optional(),
+    pricePerLb: z.number().finite().nonnegative().max(1000).optional(),
+    shelfLifeDays: z.number().int().min(1).max(3650).optional(),
+    teaCastingsPerWater: z.number().finite().positive().max(2).optional(),
+  })
+  .strict()
+  .superRefine((s, ctx) => {
+    const season = gardenSeasonSchema.safeParse({
+      lastSpringFrost: s.lastSpringFrost,
+      firstFallFrost: s.firstFallFrost,
+    });
+    if (!season.success) {
+      for (const issue of season.error.issues)
+        ctx.addIssue({ code: "custom", path: issue.path, message: issue.message });
+    }
+  });
+
+const side = quantitySchema("length", GEOMETRY_LIMITS.traySideM);
+const traySchema = z.union([
+  z
+    .object({
+      inside: z
+        .object({
+          length: side,
+          width: side,
+          depth: quantitySchema("length", GEOMETRY_LIMITS.trayDepthM),
+        })
+        .strict(),
+    })
+    .strict(),
+  z
+    .object({
+      outside: z.object({ length: side, width: side }).strict(),
+      board: nominalBoardSchema,
+    })
+    .strict(),
+  z.object({ insideVolume: quantitySchema("volume", 2000) }).strict(),
+]);
+
+const binSchema = z
+  .object({
+    id,
+    name: z.string().max(100).optional(),
+    startDate: isoDateSchema,
+    trays: z.number().int().min(1).max(20),
+    tray: traySchema,
+    rotationIntervalDays: z.number().finite().positive().max(365).optional(),
+    processingDays: z.number().finite().positive().max(730).optional(),
+    fillFraction: z.number().finite().positive().max(1).optional(),
+    bulkDensityKgPerL: z.number().finite().positive().max(2).optional(),
+    dormantMonths: z.array(month).max(11).optional(),
+    manureFeedstock: z.boolean().optional(),
+    worms: z.number().int().nonnegative().max(10_000_000).optional(),
+    leachateEstimatePerWeek: quantitySchema("volume", 1000, true).optional(),
+    logs: z
+      .object({
+        harvests: z
+          .array(
+            z
+              .object({
+                date: isoDateSchema,
+                amount: quantitySchema("mass", 10_000, true),
+                predicted: quantitySchema("mass", 10_000, true).optional(),
+              })
+              .strict(),
+          )
+          .max(1000)
+          .optional(),
+        leachate: z
+          .array(
+            z
+              .object({ date: isoDateSchema, volume: quantitySchema("volume", 1000, true) })
+              .strict(),
+          )
+          .max(5000)
+          .optional(),
+      })
+      .strict()
+      .optional(),
+  })
+  .strict();
+
+const bedSchema = z.union([
+  z
+    .object({
+      id,
+      name: z.string().max(100).optional(),
+      kind: z.literal("bed"),
+      indoor: z.boolean().optional(),
+      length: quantitySchema("length", GEOMETRY_LIMITS.bedSideM),
+      width: quantitySchema("length", GEOMETRY_LIMITS.bedSideM),
+    })
+    .strict(),
+  z
+    .object({
+      id,
+      name: z.string().max(100).optional(),
+      kind: z.literal("container"),
+      indoor: z.boolean().optional(),
+      volume: quantitySchema("volume", GEOMETRY_LIMITS.containerVolumeL),
+    })
+    .strict(),
+]);
+
+/** Rule amount: per plant a volume (or castings mass); per area a depth or volume `per` area; per container volume `per` volume; percent of mix a plain number. */
+const ruleAmountSchema = z.union([
+  z.number().finite().nonnegative().max(100),
+  z
+    .object({
+      value: z.number().finite().nonnegative().max(10_000),
+      unit: z.string(),
+      per: z.string().optional(),
+    })
+    .strict(),
+]);
+
+const ruleSchema = z
+  .object({
+    material: materialSchema,
+    method: methodSchema,
+    basis: basisSchema,
+    amount: ruleAmountSchema,
+    recurrence: recurrenceSchema,
+    dilutionWaterParts: z.number().finite().nonnegative().max(1000).optional(),
+  })
+  .strict()
+  .superRefine((rule, ctx) => {
+    try {
+      parseRecurrence(rule.recurrence, "recurrence");
+    } catch (e) {
+      const message =
+        e instanceof EngineInputError ? e.message.replace(/^recurrence: /, "") : String(e);
+      ctx.addIssue({ code: "custom", path: ["recurrence"], message });
+    }
+    checkRuleAmount(rule, ctx);
+  });
+
+function checkRuleAmount(rule: z.infer<typeof ruleSchema>, ctx: z.RefinementCtx): void {
+  const issue = (message: string, path: (string | number)[] = ["amount"]) =>
+    ctx.addIssue({ code: "custom", path, message });
+  const a = rule.amount;
+  if (rule.basis === "percent-of-mix") {
+    if (typeof a !== "number") issue("for percent-of-mix give a plain percentage 0–100");
+    if (rule.material !== "castings") issue("percent-of-mix applies to castings only", ["basis"]);
+    return;
+  }
+  if (typeof a === "number") return; // SI as the engine takes it (L per plant, L per m², L per L)
+  const kinds: Record<string, string[]> = {
+    "per-plant": rule.material === "castings" ? ["volume", "mass"] : ["volume"],
+    "per-area": ["length", "volume"],
+    "per-container-volume": ["volume"],
+  };
+  if (!isUnitName(a.unit)) {
+    return issue(`unknown unit ${JSON.stringify(a.unit)}; use one of ${unitNames.join(", ")}`, [
+      "amount",
+      "unit",
+    ]);
+  }
+  const kind = quantityOf(a.unit);
+  if (!kinds[rule.basis]?.includes(kind)) {
+    return issue(`a ${kind} unit does not fit basis ${rule.basis}`, ["amount", "unit"]);
+  }
+  const needsPer =
+    rule.basis === "per-container-volume" || (rule.basis === "per-area" && kind === "volume");
+  if (needsPer) {
+    const want = rule.basis === "per-area" ? "area" : "volume";
+    if (!isUnitName(a.per) || quantityOf(a.per) !== want) {
+      issue(`needs "per": a ${want} unit (e.g. ${want === "area" ? "ft2" : "gal"})`, [
+        "amount",
+        "per",
+      ]);
+    }
+  } else if (a.per !== undefined) {
+    issue(`"per" has no meaning here`, ["amount", "per"]);
+  }
+  if (rule.basis === "per-area" && kind === "length" && rule.material !== "castings")
+    issue("a depth applies to castings only", ["amount", "unit"]);
+}
+
+const plantingSchema = z
+  .object({
+    id,
+    bedId: id,
+    crop: z.string().max(100).optional(),
+    feederClass: feederClassSchema,
+    plantCount: z.number().finite().positive().max(100_000),
+    startDate: isoDateSchema,
+    endDate: isoDateSchema.optional(),
+    harvestDate: isoDateSchema.optional(),
+    priority: z.number().finite().min(0).max(100).optional(),
+    edible: z.boolean().optional(),
+    edibleTouchesSoil: z.boolean().optional(),
+    rule: ruleSchema.optional(),
+  })
+  .strict()
+  .superRefine((p, ctx) => {
+    if (p.endDate !== undefined && p.endDate < p.startDate) {
+      ctx.addIssue({ code: "custom", path: ["endDate"], message: "must not be before startDate" });
+    }
+  });
+
+const lotSchema = z
+  .object({
+    id,
+    binId: id.optional(),
+    madeOn: isoDateSchema,
+    amount: quantitySchema("mass", 100_000, true),
+  })
+  .strict();
+
+export const scenarioSchema = z
+  .object({
+    format: z.literal(SCENARIO_FORMAT),
+    version: z.literal(1),
+    garden: z.object({ name: z.string().trim().min(1).max(80) }).strict(),
+    settings: settingsSchema,
+    bins: z.array(binSchema).max(50),
+    beds: z.array(bedSchema).max(5000),
+    plantings: z.array(plantingSchema).max(20_000),
+    stock: z
+      .object({ lots: z.array(lotSchema).max(1000) })
+      .strict()
+      .optional(),
+  })
+  .strict()
+  .superRefine((s, ctx) => crossCheck(s, ctx));
+
+function crossCheck(s: z.infer<typeof scenarioSchema>, ctx: z.RefinementCtx): void {
+  const dupes = (list: { id: string }[], path: string) => {
+    const seen = new Set<string>();
+    list.forEach((x, i) => {
+      if (seen.has(x.id))
+        ctx.addIssue({ code: "custom", path: [path, i, "id"], message: `duplicate id "${x.id}"` });
+      seen.add(x.id);
+    });
+  };
+  dupes(s.bins, "bins");
+  dupes(s.beds, "beds");
+  dupes(s.plantings, "plantings");
+  const beds = new Map(s.beds.map((b) => [b.id, b]));
+  const bins = new Set(s.bins.map((b) => b.id));
+  s.plantings.forEach((p, i) => {
+    const bed = beds.get(p.bedId);
+    if (!bed)
+      return ctx.addIssue({
+        code: "custom",
+        path: ["plantings", i, "bedId"],
+        message: `no bed with id "${p.bedId}"`,
+      });
+    const rule = p.rule?.recurrence ?? "FREQ=MONTHLY";
+    let bounded = true;
+    try {
+      bounded = isBoundedRule(rule);
+    } catch {
+      return; // the rule's own error is already reported at rule.recurrence
+    }
+    // Outdoors the growing season ends an open-ended rule; indoors nothing does.
+    if (!bounded && p.endDate === undefined && bed.indoor) {
+      ctx.addIssue({
+        code: "custom",
+        path: ["plantings", i, "endDate"],
+        message:
+          "is needed: the rule never ends (no COUNT or UNTIL) and an indoor bed has no growing season to end it",
+      });
+    }
+  });
+  (s.stock?.lots ?? []).forEach((lot, i) => {
+    if (lot.binId !== undefined && !bins.has(lot.binId)) {
+      ctx.addIssue({
+        code: "custom",
+        path: ["stock", "lots", i, "binId"],
+        message: `no bin with id "${lot.binId}"`,
+      });
+    }
+  });
+}
+
+export type Scenario = z.infer<typeof scenarioSchema>;
+export type ScenarioBin = Scenario["bins"][number];
+export type ScenarioBed = Scenario["beds"][number];
+export type ScenarioPlanting = Scenario["plantings"][number];
+
+export interface ScenarioIssue {
+  path: string; // e.g. "bins[0].tray.inside.length.unit"
+  message: string;
+}
+
+export function formatPath(path: readonly PropertyKey[]): string {
+  let out = "";
+  for (const p of path) out += typeof p === "number" ? `[${p}]` : `${out ? "." : ""}${String(p)}`;
+  return out || "(root)";
+}
+
+export function parseScenario(
+  input: unknown,
+): { ok: true; scenario: Scenario } | { ok: false; issues: ScenarioIssue[] } {
+  const r = scenarioSchema.safeParse(input);
+  if (r.success) return { ok: true, scenario: r.data };
+  return {
+    ok: false,
+    issues: r.error.issues.map((i) => ({ path: formatPath(i.path), message: i.message })),
+  };
+}
