@@ -36,7 +36,9 @@ let cached: Env | undefined;
 
 export function getEnv(): Env {
   if (cached) return cached;
-  const parsed = envSchema.safeParse(process.env);
+  // An empty variable (SMTP_HOST= in a .env file or a shell) means "not set".
+  const present = Object.fromEntries(Object.entries(process.env).filter(([, v]) => v !== ""));
+  const parsed = envSchema.safeParse(present);
   if (!parsed.success) {
     const lines = parsed.error.issues.map((i) => `  ${i.path.join(".")}: ${i.message}`);
     throw new Error(`Invalid environment configuration:\n${lines.join("\n")}`);

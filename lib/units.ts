@@ -1,10 +1,11 @@
-import { convert } from "convert";
 import { EngineInputError } from "@/lib/engine/errors";
 
 // SI inside the product: litre (volume), kilogram (mass), square metre (area),
-// metre (length). Factors come from the `convert` package, whose definitions
-// are the exact NIST Handbook 44 Appendix C values (1 lb = 0.45359237 kg,
-// 1 in = 2.54 cm, 1 gal = 231 in³), rather than a hand-typed table.
+// metre (length). Every factor is built from the exact NIST Handbook 44
+// Appendix C definitions (1 in = 2.54 cm, 1 lb = 0.45359237 kg, 1 gal = 231 in³,
+// 1 acre = 43,560 ft²). The `convert` package gives the same numbers, but it
+// ships as ESM only, which the tsx-run scripts (CommonJS) cannot load; the unit
+// test checks this table against it.
 
 export type Quantity = "volume" | "mass" | "area" | "length";
 export type UnitSystem = "us" | "metric";
@@ -38,54 +39,51 @@ export const unitNames = [
 ] as const;
 export type UnitName = (typeof unitNames)[number];
 
+const IN_M = 0.0254;
+const FT_M = 12 * IN_M;
+const IN3_L = IN_M ** 3 * 1000;
+const GAL_L = 231 * IN3_L;
+const LB_KG = 0.45359237;
+
 interface UnitDef {
   quantity: Quantity;
-  /** Name the convert package knows it by. */
-  lib: string;
+  /** How many SI units (L, kg, m², m) one of this unit is. */
+  toSi: number;
   label: string;
 }
 
 const UNITS: Record<UnitName, UnitDef> = {
-  mL: { quantity: "volume", lib: "mL", label: "mL" },
-  L: { quantity: "volume", lib: "L", label: "L" },
-  m3: { quantity: "volume", lib: "m3", label: "m³" },
-  cm3: { quantity: "volume", lib: "cm3", label: "cm³" },
-  "fl-oz": { quantity: "volume", lib: "fl oz", label: "fl oz" },
-  cup: { quantity: "volume", lib: "cup", label: "cup" },
-  qt: { quantity: "volume", lib: "qt", label: "qt" },
-  gal: { quantity: "volume", lib: "gal", label: "gal" },
-  in3: { quantity: "volume", lib: "in3", label: "in³" },
-  ft3: { quantity: "volume", lib: "ft3", label: "ft³" },
-  g: { quantity: "mass", lib: "g", label: "g" },
-  kg: { quantity: "mass", lib: "kg", label: "kg" },
-  oz: { quantity: "mass", lib: "oz", label: "oz" },
-  lb: { quantity: "mass", lib: "lb", label: "lb" },
-  m2: { quantity: "area", lib: "m2", label: "m²" },
-  ft2: { quantity: "area", lib: "ft2", label: "ft²" },
-  in2: { quantity: "area", lib: "in2", label: "in²" },
-  acre: { quantity: "area", lib: "acre", label: "acre" },
-  mm: { quantity: "length", lib: "mm", label: "mm" },
-  cm: { quantity: "length", lib: "cm", label: "cm" },
-  m: { quantity: "length", lib: "m", label: "m" },
-  in: { quantity: "length", lib: "in", label: "in" },
-  ft: { quantity: "length", lib: "ft", label: "ft" },
+  mL: { quantity: "volume", toSi: 0.001, label: "mL" },
+  L: { quantity: "volume", toSi: 1, label: "L" },
+  m3: { quantity: "volume", toSi: 1000, label: "m³" },
+  cm3: { quantity: "volume", toSi: 0.001, label: "cm³" },
+  "fl-oz": { quantity: "volume", toSi: GAL_L / 128, label: "fl oz" },
+  cup: { quantity: "volume", toSi: GAL_L / 16, label: "cup" },
+  qt: { quantity: "volume", toSi: GAL_L / 4, label: "qt" },
+  gal: { quantity: "volume", toSi: GAL_L, label: "gal" },
+  in3: { quantity: "volume", toSi: IN3_L, label: "in³" },
+  ft3: { quantity: "volume", toSi: FT_M ** 3 * 1000, label: "ft³" },
+  g: { quantity: "mass", toSi: 0.001, label: "g" },
+  kg: { quantity: "mass", toSi: 1, label: "kg" },
+  oz: { quantity: "mass", toSi: LB_KG / 16, label: "oz" },
+  lb: { quantity: "mass", toSi: LB_KG, label: "lb" },
+  m2: { quantity: "area", toSi: 1, label: "m²" },
+  ft2: { quantity: "area", toSi: FT_M ** 2, label: "ft²" },
+  in2: { quantity: "area", toSi: IN_M ** 2, label: "in²" },
+  acre: { quantity: "area", toSi: 43_560 * FT_M ** 2, label: "acre" },
+  mm: { quantity: "length", toSi: 0.001, label: "mm" },
+  cm: { quantity: "length", toSi: 0.01, label: "cm" },
+  m: { quantity: "length", toSi: 1, label: "m" },
+  in: { quantity: "length", toSi: IN_M, label: "in" },
+  ft: { quantity: "length", toSi: FT_M, label: "ft" },
 };
 
-const SI_LIB: Record<Quantity, string> = { volume: "L", mass: "kg", area: "m2", length: "m" };
-export const siUnit: Record<Quantity, UnitName> = { volume: "L", mass: "kg", area: "m2", length: "m" };
-
-// One factor per unit, computed once: a conversion is then one multiply.
-const FACTOR_TO_SI = new Map<UnitName, number>(
-  unitNames.map((u) => {
-    const def = UNITS[u];
-    // The package's overloads are keyed on literal unit names; ours are checked above.
-    const factor = (convert as unknown as (v: number, from: string) => { to(u: string): number })(
-      1,
-      def.lib,
-    ).to(SI_LIB[def.quantity]);
-    return [u, factor];
-  }),
-);
+export const siUnit: Record<Quantity, UnitName> = {
+  volume: "L",
+  mass: "kg",
+  area: "m2",
+  length: "m",
+};
 
 export function isUnitName(value: unknown): value is UnitName {
   return typeof value === "string" && Object.prototype.hasOwnProperty.call(UNITS, value);
@@ -94,10 +92,16 @@ export function isUnitName(value: unknown): value is UnitName {
 /** Checks a unit name (and, if given, its quantity); EngineInputError naming `field` otherwise. */
 export function parseUnit(value: unknown, field = "unit", quantity?: Quantity): UnitName {
   if (!isUnitName(value)) {
-    throw new EngineInputError(field, `unknown unit "${String(value)}"; use one of ${unitNames.join(", ")}`);
+    throw new EngineInputError(
+      field,
+      `unknown unit "${String(value)}"; use one of ${unitNames.join(", ")}`,
+    );
   }
   if (quantity && UNITS[value].quantity !== quantity) {
-    throw new EngineInputError(field, `"${value}" is a ${UNITS[value].quantity} unit, expected ${quantity}`);
+    throw new EngineInputError(
+      field,
+      `"${value}" is a ${UNITS[value].quantity} unit, expected ${quantity}`,
+    );
   }
   return value;
 }
@@ -111,8 +115,7 @@ export function unitLabel(unit: UnitName): string {
 }
 
 function factor(unit: unknown, field: string, quantity?: Quantity): number {
-  const u = parseUnit(unit, `${field}.unit`, quantity);
-  return FACTOR_TO_SI.get(u) as number;
+  return UNITS[parseUnit(unit, `${field}.unit`, quantity)].toSi;
 }
 
 function finite(value: unknown, field: string): number {
@@ -123,12 +126,22 @@ function finite(value: unknown, field: string): number {
 }
 
 /** value in `unit` → SI (L, kg, m², m). */
-export function toSi(value: number, unit: UnitName | string, field = "value", quantity?: Quantity): number {
+export function toSi(
+  value: number,
+  unit: UnitName | string,
+  field = "value",
+  quantity?: Quantity,
+): number {
   return finite(value, field) * factor(unit, field, quantity);
 }
 
 /** SI value → `unit`. */
-export function fromSi(value: number, unit: UnitName | string, field = "value", quantity?: Quantity): number {
+export function fromSi(
+  value: number,
+  unit: UnitName | string,
+  field = "value",
+  quantity?: Quantity,
+): number {
   return finite(value, field) / factor(unit, field, quantity);
 }
 
@@ -178,7 +191,8 @@ const DISPLAY: Record<UnitSystem, DisplayUnits> = {
 
 export function displayUnits(system: UnitSystem): DisplayUnits {
   const units = DISPLAY[system];
-  if (!units) throw new EngineInputError("unitSystem", `must be "us" or "metric" (got ${String(system)})`);
+  if (!units)
+    throw new EngineInputError("unitSystem", `must be "us" or "metric" (got ${String(system)})`);
   return units;
 }
 
@@ -186,7 +200,10 @@ export function displayUnits(system: UnitSystem): DisplayUnits {
  * A liquid volume in the garden's units, switching to the small unit below one
  * large unit (0.3 gal reads better as 38 fl oz).
  */
-export function displayLiquid(litres: number, system: UnitSystem): { value: number; unit: UnitName } {
+export function displayLiquid(
+  litres: number,
+  system: UnitSystem,
+): { value: number; unit: UnitName } {
   const u = displayUnits(system);
   const large = fromSi(litres, u.liquid, "litres");
   return large >= 1 || litres === 0

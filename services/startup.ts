@@ -1,5 +1,5 @@
 import { closeDb, getDb } from "@/db";
-import { DataDirLockedError } from "@/db/lock";
+import { DataDirLockedError, releaseDataDirLock } from "@/db/lock";
 import { seedDemoGarden } from "@/db/seed/seed-demo";
 import { ensureStarterCrops } from "@/db/seed/starter-crops";
 import { getEnv } from "@/lib/env";
@@ -14,8 +14,8 @@ let started = false;
 export async function startServer(): Promise<void> {
   if (started) return;
   started = true;
-  const env = getEnv();
   try {
+    const env = getEnv();
     const db = await getDb();
     await ensureStarterCrops(db);
     if (env.CASTLINE_DEMO) {
@@ -44,6 +44,10 @@ function installShutdownHandlers(): void {
       .catch((error) => console.error("[castline] close failed", error))
       .finally(() => process.exit(0));
   };
+  // The start scripts set NEXT_MANUAL_SIG_HANDLE so Next leaves these signals
+  // to us; otherwise its own handler exits before PGlite has closed.
   process.once("SIGTERM", shutdown);
   process.once("SIGINT", shutdown);
+  // Whatever the way out, do not leave our lock behind for the next start to judge.
+  process.once("exit", () => releaseDataDirLock(getEnv().PGLITE_DIR));
 }

@@ -12,9 +12,11 @@ export function getAuthSecret(): string {
   if (cached) return cached;
   const fromEnv = process.env.AUTH_SECRET;
   if (fromEnv && fromEnv.length >= 16) return (cached = fromEnv);
-  const file = path.resolve(process.env.CASTLINE_SECRET_FILE ?? ".data/auth-secret");
+  const file = process.env.CASTLINE_SECRET_FILE
+    ? path.resolve(/*turbopackIgnore: true*/ process.env.CASTLINE_SECRET_FILE)
+    : path.join(process.cwd(), ".data", "auth-secret");
   try {
-    cached = fs.readFileSync(file, "utf8").trim();
+    cached = fs.readFileSync(/*turbopackIgnore: true*/ file, "utf8").trim();
     if (cached.length >= 32) return cached;
   } catch {
     // Not there yet: created below.

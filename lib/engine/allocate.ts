@@ -75,3 +75,83 @@ export function allocateByTiers(claims: readonly Claim[], available: number): Ma
   }
   return grants;
 }
+
+/**
+ * Grants for one month of one pool, honouring the tier order while keeping
+ * every grant deliverable from lots on hand on its date.
+ *
+ * Lots are sorted by the day they were made, so the lots usable on a day form
+ * a contiguous run [lo, hi). The claims then form a convex bipartite graph,
+ * for which Hall's condition reduces to runs: grants are deliverable iff for
+ * every run [p, q) of lots, the grants whose usable lots lie inside it do not
+ * exceed the run's stock. A tier gets the smallest slack over the runs that
+ * contain its own. Only runs bounded by some claim's lo and hi matter, and
+ * claims on the same day share one run, so the work per tier is bounded by
+ * the days in the month, not by the number of plantings.
+ *
+ * Which lot each grant physically comes from is settled afterwards by drawing
+ * in date order, oldest lot first; that order delivers every deliverable set
+ * of grants (earliest-expiry-first is optimal for point-to-interval matching).
+ */
+export function grantMonth(
+  lots: readonly { madeDay: number; remaining: number }[],
+  keepDays: number,
+  tiers: readonly Claim[][],
+): Map<number, number> {
+  const made = lots.map((l) => l.madeDay);
+  const prefix = new Float64Array(lots.length + 1);
+  lots.forEach((l, i) => (prefix[i + 1] = (prefix[i] as number) + l.remaining));
+  const firstAfter = (day: number) => {
+    let lo = 0;
+    let hi = made.length;
+    while (lo < hi) {
+      const mid = (lo + hi) >> 1;
+      if ((made[mid] as number) <= day) lo = mid + 1;
+      else hi = mid;
+    }
+    return lo;
+  };
+  const runOf = new Map<number, [number, number]>();
+  for (const tier of tiers) {
+    const day = (tier[0] as Claim).day;
+    if (!runOf.has(day)) runOf.set(day, [firstAfter(day - keepDays), firstAfter(day)]);
+  }
+  const P = [...new Set([...runOf.values()].map((r) => r[0]))].sort((a, b) => a - b);
+  const Q = [...new Set([...runOf.values()].map((r) => r[1]))].sort((a, b) => a - b);
+  const slack = new Float64Array(P.length * Q.length);
+  P.forEach((p, i) =>
+    Q.forEach(
+      (q, j) =>
+        (slack[i * Q.length + j] = q > p ? (prefix[q] as number) - (prefix[p] as number) : 0),
+    ),
+  );
+
+  const grants = new Map<number, number>();
+  for (const tier of tiers) {
+    const [lo, hi] = runOf.get((tier[0] as Claim).day) as [number, number];
+    let room = 0;
+    const pMax = P.indexOf(lo);
+    const qMin = Q.indexOf(hi);
+    if (hi > lo) {
+      room = Infinity;
+      for (let i = 0; i <= pMax; i++) {
+        for (let j = qMin; j < Q.length; j++)
+          room = Math.min(room, slack[i * Q.length + j] as number);
+      }
+    }
+    const split = splitTier(tier, Math.max(0, room));
+    let total = 0;
+    tier.forEach((c, k) => {
+      const g = split[k] ?? 0;
+      grants.set(c.ref, g);
+      total += g;
+    });
+    if (total > 0) {
+      for (let i = 0; i <= pMax; i++) {
+        for (let j = qMin; j < Q.length; j++)
+          slack[i * Q.length + j] = (slack[i * Q.length + j] as number) - total;
+      }
+    }
+  }
+  return grants;
+}

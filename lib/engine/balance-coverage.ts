@@ -1,42 +1,63 @@
 // Coverage per planting per month per material, summed from occurrences.
 import { explainCoverage } from "@/lib/engine/balance-explain";
 import type { OccurrenceResult, PlantingCoverage } from "@/lib/engine/balance-types";
+import type { Material } from "@/lib/engine/types";
+
+interface Group {
+  plantingId: string;
+  month: string;
+  material: Material;
+  need: number;
+  allocated: number;
+  count: number;
+}
 
 export function summariseCoverage(occurrences: readonly OccurrenceResult[]): PlantingCoverage[] {
-  const groups = new Map<
-    string,
-    { row: Omit<PlantingCoverage, "explanation" | "coveragePct">; count: number }
-  >();
+  // Nested maps rather than one joined string key: this runs over every application.
+  const byPlanting = new Map<string, Map<string, Group>>();
+  const groups: Group[] = [];
   for (const o of occurrences) {
+    let inner = byPlanting.get(o.plantingId);
+    if (!inner) {
+      inner = new Map();
+      byPlanting.set(o.plantingId, inner);
+    }
     const month = o.date.slice(0, 7);
-    const key = `${o.plantingId}\u0000${month}\u0000${o.material}`;
-    let g = groups.get(key);
+    const key = month + o.material;
+    let g = inner.get(key);
     if (!g) {
       g = {
-        row: { plantingId: o.plantingId, month, material: o.material, need: 0, allocated: 0 },
+        plantingId: o.plantingId,
+        month,
+        material: o.material,
+        need: 0,
+        allocated: 0,
         count: 0,
       };
-      groups.set(key, g);
+      inner.set(key, g);
+      groups.push(g);
     }
-    g.row.need += o.need;
-    g.row.allocated += o.allocated;
+    g.need += o.need;
+    g.allocated += o.allocated;
     g.count++;
   }
-  const out: PlantingCoverage[] = [];
-  for (const { row, count } of groups.values()) {
-    const pct = row.need > 0 ? Math.min(100, (100 * row.allocated) / row.need) : 100;
-    out.push({
-      ...row,
+  return groups.map((g) => {
+    const pct = g.need > 0 ? Math.min(100, (100 * g.allocated) / g.need) : 100;
+    return {
+      plantingId: g.plantingId,
+      month: g.month,
+      material: g.material,
+      need: g.need,
+      allocated: g.allocated,
       coveragePct: pct,
       explanation: explainCoverage(
-        row.material === "leachate" ? "L" : "kg",
-        count,
-        row.need,
-        row.allocated,
+        g.material === "leachate" ? "L" : "kg",
+        g.count,
+        g.need,
+        g.allocated,
         pct,
-        row.material === "tea",
+        g.material === "tea",
       ),
-    });
-  }
-  return out;
+    };
+  });
 }

@@ -89,6 +89,8 @@ export interface PoolTotals {
   agedOut: number;
   shortfall: number;
   closing: number;
+  /** Opening stock of the first month is the horizon's opening. */
+  explanation?: Explanation;
 }
 
 export interface BalanceResult {

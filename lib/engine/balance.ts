@@ -5,12 +5,18 @@
 // nor after it ages out, and a later high-priority feed can reserve stock ahead
 // of an earlier low-priority one. Tea is brewed from castings on its day.
 import { EngineInputError, requireFinite, requireNonNegative } from "@/lib/engine/errors";
-import type { BlockedOccurrence, DemandOccurrence } from "@/lib/engine/types";
+import type { DemandOccurrence } from "@/lib/engine/types";
 import { AMOUNT_EPSILON, LotShelf } from "@/lib/engine/lots";
-import { orderIntoTiers, splitTier, type Claim } from "@/lib/engine/allocate";
-import { dayNumber, isoFromDay, monthOfDay, monthSpans } from "@/lib/engine/balance-days";
-import { explainPoolMonth, explainSurplus, fmt } from "@/lib/engine/balance-explain";
-import { summariseCoverage } from "@/lib/engine/balance-coverage";
+import { grantMonth, orderIntoTiers, type Claim } from "@/lib/engine/allocate";
+import { dayNumber, isoFromDay, monthSpans } from "@/lib/engine/balance-days";
+import { explainPoolMonth, fmt } from "@/lib/engine/balance-explain";
+import {
+  DEFAULT_PRICE_PER_LB,
+  DEFAULT_SHELF_LIFE_DAYS,
+  emptyTotals,
+  resolveOptions,
+} from "@/lib/engine/balance-options";
+import { finish } from "@/lib/engine/balance-result";
 import type {
   BalanceInput,
   BalanceResult,
@@ -18,52 +24,35 @@ import type {
   OccurrenceResult,
   Pool,
   PoolMonth,
-  PoolTotals,
 } from "@/lib/engine/balance-types";
 import type { Explanation, SupplyEvent } from "@/lib/engine/types";
 
-export const DEFAULT_SHELF_LIFE_DAYS = 60; // Harit et al. 2014, J. Applied Horticulture 16(2)
-export const DEFAULT_PRICE_PER_LB = 1.0; // common retail, from memory
-const KG_PER_LB = 0.45359237; // exact, NIST Handbook 44 Appendix C
-
-interface Resolved {
-  shelfLifeDays: number;
-  leachateKeepDays: number;
-  pricePerLb: number;
-  teaKgPerL: number | undefined;
-}
-
-function resolveOptions(o: BalanceInput["options"]): Resolved {
-  const shelf = o.shelfLifeDays ?? DEFAULT_SHELF_LIFE_DAYS;
-  const keep = o.leachateKeepDays ?? 1;
-  if (!Number.isInteger(shelf) || shelf < 1 || shelf > 3650) {
-    throw new EngineInputError(
-      "options.shelfLifeDays",
-      `must be a whole number of days 1–3650 (got ${shelf})`,
-    );
-  }
-  if (!Number.isInteger(keep) || keep < 1 || keep > 365) {
-    throw new EngineInputError(
-      "options.leachateKeepDays",
-      `must be a whole number of days 1–365 (got ${keep})`,
-    );
-  }
-  const price = requireNonNegative(o.pricePerLb ?? DEFAULT_PRICE_PER_LB, "options.pricePerLb", 1e6);
-  const tea =
-    o.teaCastingsKgPerLitre === undefined
-      ? undefined
-      : requireNonNegative(o.teaCastingsKgPerLitre, "options.teaCastingsKgPerLitre", 10);
-  return { shelfLifeDays: shelf, leachateKeepDays: keep, pricePerLb: price, teaKgPerL: tea };
-}
-
-function emptyTotals(): PoolTotals {
-  return { supplied: 0, demand: 0, allocated: 0, agedOut: 0, shortfall: 0, closing: 0 };
-}
+export { DEFAULT_PRICE_PER_LB, DEFAULT_SHELF_LIFE_DAYS };
 
 export function computeBalance(input: BalanceInput): BalanceResult {
   const opts = resolveOptions(input.options);
   const spans = monthSpans(input.options.from, input.options.months, "options.from");
-  const monthIdx = new Map(spans.map((s, i) => [s.month, i] as const));
+  // Dates repeat across thousands of applications; parse each distinct one once.
+  const days = new Map<string, number>();
+  const dayOf = (date: string, field: string) => {
+    let d = days.get(date);
+    if (d === undefined) {
+      d = dayNumber(date, field);
+      days.set(date, d);
+    }
+    return d;
+  };
+  const monthOf = (day: number): number | undefined => {
+    let lo = 0;
+    let hi = spans.length - 1;
+    if (day < spans[0]!.startDay || day >= spans[hi]!.endDay) return undefined;
+    while (lo < hi) {
+      const mid = (lo + hi + 1) >> 1;
+      if (spans[mid]!.startDay <= day) lo = mid;
+      else hi = mid - 1;
+    }
+    return lo;
+  };
   const horizonStart = (spans[0] as (typeof spans)[0]).startDay;
   const notes: Explanation[] = [];
 
@@ -97,9 +86,9 @@ export function computeBalance(input: BalanceInput): BalanceResult {
   const supplyByMonth = spans.map((): { day: number; ev: SupplyEvent }[] => []);
   let outside = 0;
   input.supply.forEach((ev, i) => {
-    const day = dayNumber(ev.date, `supply[${i}].date`);
+    const day = dayOf(ev.date, `supply[${i}].date`);
     requireNonNegative(ev.amount, `supply[${i}].amount`, 1e7);
-    const m = monthIdx.get(monthOfDay(day));
+    const m = monthOf(day);
     if (m === undefined) outside++;
     else supplyByMonth[m]?.push({ day, ev });
   });
@@ -112,10 +101,10 @@ export function computeBalance(input: BalanceInput): BalanceResult {
   const claimsByMonth = spans.map((): Record<Pool, Claim[]> => ({ castings: [], leachate: [] }));
   let demandOutside = 0;
   input.demand.forEach((d: DemandOccurrence, i) => {
-    const day = dayNumber(d.date, `demand[${i}].date`);
+    const day = dayOf(d.date, `demand[${i}].date`);
     const amount = requireNonNegative(d.amount, `demand[${i}].amount`, 1e6);
     const priority = requireFinite(d.priority, `demand[${i}].priority`);
-    const m = monthIdx.get(monthOfDay(day));
+    const m = monthOf(day);
     if (m === undefined) return void demandOutside++;
     let need = amount;
     if (d.material === "tea") {
@@ -171,20 +160,17 @@ export function computeBalance(input: BalanceInput): BalanceResult {
       }
       let demand = 0;
       let allocated = 0;
-      for (const tier of orderIntoTiers(claimsByMonth[m]?.[pool] ?? [])) {
-        const day = (tier[0] as Claim).day;
-        const grants = splitTier(tier, shelf.available(day));
-        let want = 0;
-        for (const g of grants) want += g;
-        const got = shelf.draw(day, want);
-        const scale = want > 0 ? got / want : 0;
-        tier.forEach((c, k) => {
-          const occ = occurrences[c.ref] as OccurrenceResult;
-          occ.allocated = Math.min(occ.need, (grants[k] ?? 0) * scale);
-          occ.coveragePct = (100 * occ.allocated) / occ.need;
-          demand += occ.need;
-          allocated += occ.allocated;
-        });
+      const claims = claimsByMonth[m]?.[pool] ?? [];
+      const grants = grantMonth(shelf.snapshot(), shelf.keepDays, orderIntoTiers(claims));
+      // Physical use: in date order, oldest lot first (delivers every grant; see grantMonth).
+      const byDate = [...claims].sort((x, y) => x.day - y.day || x.ref - y.ref);
+      for (const c of byDate) {
+        const occ = occurrences[c.ref] as OccurrenceResult;
+        const got = shelf.draw(c.day, Math.min(occ.need, grants.get(c.ref) ?? 0));
+        occ.allocated = got;
+        occ.coveragePct = (100 * got) / occ.need;
+        demand += occ.need;
+        allocated += got;
       }
       const agedOut = shelf.ageOutBefore(span.endDay);
       const closing = shelf.total();
@@ -249,57 +235,6 @@ export function computeBalance(input: BalanceInput): BalanceResult {
     opts,
     blocked: input.blocked ?? [],
   });
-}
-
-function finish(a: {
-  spans: { month: string }[];
-  castings: CastingsMonth[];
-  leachate: PoolMonth[];
-  occurrences: OccurrenceResult[];
-  totals: BalanceResult["totals"];
-  notes: Explanation[];
-  opts: Resolved;
-  blocked: readonly BlockedOccurrence[];
-}): BalanceResult {
-  const first: Record<Pool, string | null> = { castings: null, leachate: null };
-  for (const occ of a.occurrences) {
-    if (occ.need - occ.allocated <= Math.max(AMOUNT_EPSILON, occ.need * 1e-9)) continue;
-    const cur = first[occ.pool];
-    if (cur === null || occ.date < cur) first[occ.pool] = occ.date;
-  }
-  const any =
-    [first.castings, first.leachate].filter((d): d is string => d !== null).sort()[0] ?? null;
-  const tc = a.totals.castings;
-  const pricePerKg = a.opts.pricePerLb / KG_PER_LB;
-  const surplusKg = tc.agedOut + tc.closing;
-  const surplusValue = surplusKg * pricePerKg;
-  const byMonth: Record<string, number> = {};
-  for (const b of a.blocked) byMonth[b.date.slice(0, 7)] = (byMonth[b.date.slice(0, 7)] ?? 0) + 1;
-  return {
-    months: a.spans.map((s) => s.month),
-    castings: a.castings,
-    leachate: a.leachate,
-    occurrences: a.occurrences,
-    coverage: summariseCoverage(a.occurrences),
-    firstShortfall: { castings: first.castings, leachate: first.leachate, any },
-    totals: a.totals,
-    surplus: {
-      castingsKg: surplusKg,
-      value: surplusValue,
-      pricePerLb: a.opts.pricePerLb,
-      explanation: explainSurplus(tc.agedOut, tc.closing, a.opts.pricePerLb, surplusValue),
-    },
-    outputValue: {
-      castingsKg: tc.supplied,
-      value: tc.supplied * pricePerKg,
-      explanation: {
-        text: `${fmt(tc.supplied)} kg harvested × ${fmt(a.opts.pricePerLb, 2)} per lb (1 lb = 0.45359237 kg) = ${fmt(tc.supplied * pricePerKg, 2)}`,
-        inputs: { harvestedKg: tc.supplied, pricePerLb: a.opts.pricePerLb },
-      },
-    },
-    blocked: { items: [...a.blocked], byMonth },
-    notes: a.notes,
-  };
 }
 
 export { isoFromDay };

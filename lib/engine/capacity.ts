@@ -39,7 +39,11 @@ export interface CapacityCheck {
 export function checkCapacity(input: CapacityInput, field = "capacity"): CapacityCheck {
   const mass = requireNonNegative(input.wormMassKg, `${field}.wormMassKg`, 1000);
   const surface = requirePositive(input.surfaceM2, `${field}.surfaceM2`, 100);
-  const planned = requireNonNegative(input.plannedFoodKgPerWeek, `${field}.plannedFoodKgPerWeek`, 10_000);
+  const planned = requireNonNegative(
+    input.plannedFoodKgPerWeek,
+    `${field}.plannedFoodKgPerWeek`,
+    10_000,
+  );
   const intake = requirePositive(
     input.intakeFractionPerDay ?? dflt("wormIntakeFractionPerDay"),
     `${field}.intakeFractionPerDay`,

@@ -21,7 +21,10 @@ export function toDayNumber(date: unknown, field = "date"): number {
   const mo = Number(m[2]);
   const d = Number(m[3]);
   if (y < MIN_YEAR || y > MAX_YEAR) {
-    throw new EngineInputError(field, `year must be from ${MIN_YEAR} to ${MAX_YEAR} (got "${date}")`);
+    throw new EngineInputError(
+      field,
+      `year must be from ${MIN_YEAR} to ${MAX_YEAR} (got "${date}")`,
+    );
   }
   const ms = Date.UTC(y, mo - 1, d);
   const back = new Date(ms);
@@ -92,7 +95,10 @@ export function monthSet(months: readonly number[] | undefined, field: string): 
   const set = new Set<number>();
   (months ?? []).forEach((m, i) => {
     if (!Number.isInteger(m) || m < 1 || m > 12) {
-      throw new EngineInputError(`${field}[${i}]`, `must be a month number 1–12 (got ${String(m)})`);
+      throw new EngineInputError(
+        `${field}[${i}]`,
+        `must be a month number 1–12 (got ${String(m)})`,
+      );
     }
     set.add(m);
   });

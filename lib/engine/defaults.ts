@@ -63,23 +63,46 @@ export const DEFAULTS = {
   },
   cocoonsPerAdultPerWeek: {
     value: 2.5,
-    source: "2–3.8 per adult per week (Edwards 1988 via Domínguez & Edwards 2011; Eurasian J. Soil Sci. 14(2) 2025)",
+    source:
+      "2–3.8 per adult per week (Edwards 1988 via Domínguez & Edwards 2011; Eurasian J. Soil Sci. 14(2) 2025)",
   },
-  incubationDays: { value: 23, source: "cocoons hatch after 20–24 days (life-cycle figures: Edwards 1988 via Domínguez & Edwards 2011)" },
-  hatchSuccess: { value: 0.85, source: "~85 % of cocoons hatch (life-cycle figures: Edwards 1988 via Domínguez & Edwards 2011)" },
-  hatchlingsPerCocoon: { value: 3, source: "2.4–3.3 hatchlings per cocoon (life-cycle figures: Edwards 1988 via Domínguez & Edwards 2011)" },
-  maturationDays: { value: 60, source: "juveniles mature after 53–76 days (life-cycle figures: Edwards 1988 via Domínguez & Edwards 2011)" },
+  incubationDays: {
+    value: 23,
+    source:
+      "cocoons hatch after 20–24 days (life-cycle figures: Edwards 1988 via Domínguez & Edwards 2011)",
+  },
+  hatchSuccess: {
+    value: 0.85,
+    source:
+      "~85 % of cocoons hatch (life-cycle figures: Edwards 1988 via Domínguez & Edwards 2011)",
+  },
+  hatchlingsPerCocoon: {
+    value: 3,
+    source:
+      "2.4–3.3 hatchlings per cocoon (life-cycle figures: Edwards 1988 via Domínguez & Edwards 2011)",
+  },
+  maturationDays: {
+    value: 60,
+    source:
+      "juveniles mature after 53–76 days (life-cycle figures: Edwards 1988 via Domínguez & Edwards 2011)",
+  },
   densityCeilingLbPerFt2: {
     value: 2,
     source: "~2 lb worms per ft² (optimum 1–2, rare max 4), common practice",
   },
-  wormsPerLb: { value: 1000, source: "about 1,000 worms per lb (from memory; 825/lb from a 0.55 g adult)" },
+  wormsPerLb: {
+    value: 1000,
+    source: "about 1,000 worms per lb (from memory; 825/lb from a 0.55 g adult)",
+  },
   heavyCastingsPerPlantL: {
     value: CUP_L,
     source: "common practice: ¾–1 cup castings per plant per month for heavy feeders",
   },
   mediumCastingsPerPlantL: { value: CUP_L / 2, source: "common practice: ½ cup per plant monthly" },
-  lightCastingsPerPlantL: { value: CUP_L / 2, source: "common practice: ½ cup per plant every two months" },
+  lightCastingsPerPlantL: {
+    value: CUP_L / 2,
+    source: "common practice: ½ cup per plant every two months",
+  },
   teaPerPlantL: {
     value: 0.1,
     source: "100 mL of 10 % solution per plant weekly (Arancon, via conference notes)",
@@ -98,7 +121,8 @@ export const DEFAULTS = {
   },
   preHarvestDaysSoilContact: {
     value: 120,
-    source: "raw manure: 120 days before harvest when the edible part touches soil (7 CFR 205.203(c)(1), USDA NOP)",
+    source:
+      "raw manure: 120 days before harvest when the edible part touches soil (7 CFR 205.203(c)(1), USDA NOP)",
   },
   preHarvestDaysOther: {
     value: 90,

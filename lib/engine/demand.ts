@@ -1,74 +1,27 @@
-import { fromDayNumber, parseMonthDay, rangeDays, toDayNumber, type DateRange } from "@/lib/engine/dates";
-import { dflt } from "@/lib/engine/defaults";
-import { EngineInputError, requireFinite, requireNonNegative, requirePositive } from "@/lib/engine/errors";
-import { defaultRuleFor, type FeedingRule } from "@/lib/engine/feeding-rules";
-import { fmt, plural } from "@/lib/engine/format";
-import { expandRecurrence } from "@/lib/engine/recurrence";
+import { ruleAmount } from "@/lib/engine/demand-amount";
 import type {
-  BlockedOccurrence,
-  DemandOccurrence,
-  Explanation,
-  FeederClass,
-  IsoDate,
-} from "@/lib/engine/types";
+  BedInput,
+  DemandOptions,
+  DemandResult,
+  GardenSeason,
+  PlantingInput,
+} from "@/lib/engine/demand-types";
+import { fromDayNumber, parseMonthDay, rangeDays, toDayNumber } from "@/lib/engine/dates";
+import { dflt } from "@/lib/engine/defaults";
+import { EngineInputError, requireFinite, requirePositive } from "@/lib/engine/errors";
+import { defaultRuleFor } from "@/lib/engine/feeding-rules";
+import { expandRecurrence } from "@/lib/engine/recurrence";
+import type { IsoDate } from "@/lib/engine/types";
 
 export type { FeedingRule } from "@/lib/engine/feeding-rules";
-
-export interface BedInput {
-  id: string;
-  /** Indoor beds and containers are fed all year, ignoring frost dates. */
-  indoor?: boolean;
-  areaM2?: number;
-  containerVolumeL?: number;
-}
-
-export interface PlantingInput {
-  id: string;
-  bedId: string;
-  feederClass: FeederClass;
-  plantCount: number;
-  startDate: IsoDate;
-  /** Last day in the ground; also the harvest day unless harvestDate is set. */
-  endDate: IsoDate;
-  harvestDate?: IsoDate;
-  /** Lower is fed first when stock is short. */
-  priority?: number;
-  /** Edible crop (pre-harvest interval applies). Default true. */
-  edible?: boolean;
-  /** Edible part touches the soil (120-day rather than 90-day interval). Default false. */
-  edibleTouchesSoil?: boolean;
-  /** Overrides the crop's rule; without it the feeder-class default applies. */
-  rule?: FeedingRule;
-  /** Part of the bed this planting occupies, if not all of it. */
-  areaM2?: number;
-  containerVolumeL?: number;
-}
-
-/** Growing season as month-days "MM-DD" (a "YYYY-MM-DD" is read by its month-day), every year. */
-export interface GardenSeason {
-  lastSpringFrost: string;
-  firstFallFrost: string;
-}
-
-export interface DemandOptions {
-  range: DateRange;
-  season: GardenSeason;
-  /** Some source bin's feedstock includes manure: apply the pre-harvest interval. */
-  manureFeedstock?: boolean;
-  bulkDensityKgPerL?: number;
-}
-
-export interface DemandWarning {
-  plantingId: string;
-  field: string;
-  text: string;
-}
-
-export interface DemandResult {
-  occurrences: DemandOccurrence[];
-  blocked: BlockedOccurrence[];
-  warnings: DemandWarning[];
-}
+export type {
+  BedInput,
+  DemandOptions,
+  DemandResult,
+  DemandWarning,
+  GardenSeason,
+  PlantingInput,
+} from "@/lib/engine/demand-types";
 
 export const DEFAULT_PRIORITY = 3;
 
@@ -99,9 +52,13 @@ function inSeason(date: IsoDate, s: Season): boolean {
 }
 
 /** Days before harvest during which manure-fed outputs are not applied, or 0 when none applies. */
-export function preHarvestDays(planting: Pick<PlantingInput, "edible" | "edibleTouchesSoil">): number {
+export function preHarvestDays(
+  planting: Pick<PlantingInput, "edible" | "edibleTouchesSoil">,
+): number {
   if (planting.edible === false) return 0;
-  return planting.edibleTouchesSoil ? dflt("preHarvestDaysSoilContact") : dflt("preHarvestDaysOther");
+  return planting.edibleTouchesSoil
+    ? dflt("preHarvestDaysSoilContact")
+    : dflt("preHarvestDaysOther");
 }
 
 /** First calendar day on which manure-fed outputs may no longer go on this planting, or null. */
@@ -113,95 +70,43 @@ export function preHarvestBlockStart(planting: PlantingInput, field = "planting"
   return fromDayNumber(harvest - days + 1);
 }
 
-interface Amount {
-  amount: number;
-  explanation: Explanation;
-  warnings: string[];
-}
-
-function ruleAmount(rule: FeedingRule, planting: PlantingInput, bed: BedInput, density: number, field: string): Amount {
-  const r = `${field}.rule`;
-  const per = requireNonNegative(rule.amount, `${r}.amount`, rule.basis === "percent-of-mix" ? 100 : 1000);
-  const unit = rule.amountUnit ?? (rule.material === "castings" && rule.basis !== "percent-of-mix" ? "L" : "L");
-  if (unit !== "L" && unit !== "kg") throw new EngineInputError(`${r}.amountUnit`, `must be "L" or "kg"`);
-  if (unit === "kg" && rule.material !== "castings") {
-    throw new EngineInputError(`${r}.amountUnit`, "only castings can be measured in kg; liquids are litres");
-  }
-  const warnings: string[] = [];
-  let base: number;
-  let how: string;
-  switch (rule.basis) {
-    case "per-plant": {
-      const n = requirePositive(planting.plantCount, `${field}.plantCount`, 100_000);
-      base = per * n;
-      how = `${plural(n, "plant")} × ${fmt(per, 3)} ${unit}`;
-      break;
-    }
-    case "per-area": {
-      const area = planting.areaM2 ?? bed.areaM2;
-      const a = requirePositive(area, `${field}.areaM2`, 10_000);
-      base = per * a;
-      how = `${fmt(a, 2)} m² × ${fmt(per, 3)} ${unit}/m²`;
-      if (rule.material === "castings" && unit === "L" && per > 12.7 + 1e-9) {
-        warnings.push(`top-dressing ${fmt(per, 1)} mm deep is more than ½ in (12.7 mm)`);
-      }
-      break;
-    }
-    case "per-container-volume":
-    case "percent-of-mix": {
-      const v = requirePositive(planting.containerVolumeL ?? bed.containerVolumeL, `${field}.containerVolumeL`, 2000);
-      if (rule.basis === "percent-of-mix") {
-        if (rule.material !== "castings") {
-          throw new EngineInputError(`${r}.basis`, "percent-of-mix applies to castings only");
-        }
-        base = (per / 100) * v;
-        how = `${fmt(per, 1)} % of ${fmt(v, 1)} L mix`;
-        if (per > dflt("pottingMixWarnAbovePercent")) {
-          warnings.push(`${fmt(per, 1)} % castings is above the 20 % by volume Atiyeh et al. (2000) recommend`);
-        }
-      } else {
-        base = per * v;
-        how = `${fmt(v, 1)} L container × ${fmt(per, 3)} ${unit}/L`;
-      }
-      break;
-    }
-    default:
-      throw new EngineInputError(`${r}.basis`, `unknown basis "${String(rule.basis)}"`);
-  }
-
-  if (rule.material === "castings") {
-    const kg = unit === "kg" ? base : base * density;
-    const text = unit === "kg" ? `${how} = ${fmt(kg, 3)} kg castings` : `${how} × ${fmt(density, 2)} kg/L = ${fmt(kg, 3)} kg castings`;
-    return { amount: kg, explanation: { text, inputs: { amountPer: per, bulkDensityKgPerL: density } }, warnings };
-  }
-  if (rule.material === "leachate") {
-    const parts = requireNonNegative(rule.dilutionWaterParts ?? dflt("leachateDilutionWaterParts"), `${r}.dilutionWaterParts`, 1000);
-    const undiluted = base / (1 + parts);
-    const text = parts > 0 ? `${how} of solution ÷ ${1 + parts} (1 part leachate to ${parts} water) = ${fmt(undiluted, 3)} L leachate` : `${how} = ${fmt(undiluted, 3)} L leachate, undiluted`;
-    return { amount: undiluted, explanation: { text, inputs: { solutionL: base, waterParts: parts } }, warnings };
-  }
-  return { amount: base, explanation: { text: `${how} = ${fmt(base, 3)} L tea` }, warnings };
-}
-
 /** Dated applications for one planting within the range, season and pre-harvest interval. */
-export function expandPlanting(planting: PlantingInput, bed: BedInput, options: DemandOptions, field = "planting"): DemandResult {
-  if (typeof planting.id !== "string" || planting.id === "") throw new EngineInputError(`${field}.id`, "must be a non-empty id");
+export function expandPlanting(
+  planting: PlantingInput,
+  bed: BedInput,
+  options: DemandOptions,
+  field = "planting",
+): DemandResult {
+  if (typeof planting.id !== "string" || planting.id === "")
+    throw new EngineInputError(`${field}.id`, "must be a non-empty id");
   const season = parseSeason(options.season);
   const range = rangeDays(options.range, "range");
   const start = toDayNumber(planting.startDate, `${field}.startDate`);
   const end = toDayNumber(planting.endDate, `${field}.endDate`);
-  if (end < start) throw new EngineInputError(`${field}.endDate`, `must not be before startDate (${planting.startDate})`);
-  const density = requirePositive(options.bulkDensityKgPerL ?? dflt("castingsBulkDensityKgPerL"), "bulkDensityKgPerL", 2);
+  if (end < start)
+    throw new EngineInputError(
+      `${field}.endDate`,
+      `must not be before startDate (${planting.startDate})`,
+    );
+  const density = requirePositive(
+    options.bulkDensityKgPerL ?? dflt("castingsBulkDensityKgPerL"),
+    "bulkDensityKgPerL",
+    2,
+  );
   const priority = requireFinite(planting.priority ?? DEFAULT_PRIORITY, `${field}.priority`);
-  const rule = planting.rule ?? defaultRuleFor(planting.feederClass);
-  if (!planting.rule && !["heavy", "medium", "light"].includes(planting.feederClass)) {
+  if (!["heavy", "medium", "light"].includes(planting.feederClass)) {
     throw new EngineInputError(`${field}.feederClass`, `must be heavy, medium or light`);
   }
+  const rule = planting.rule ?? defaultRuleFor(planting.feederClass);
   const { amount, explanation, warnings } = ruleAmount(rule, planting, bed, density, field);
   const result: DemandResult = {
     occurrences: [],
     blocked: [],
-    warnings: warnings.map((text) => ({ plantingId: planting.id, field: `${field}.rule.amount`, text })),
+    warnings: warnings.map((text) => ({
+      plantingId: planting.id,
+      field: `${field}.rule.amount`,
+      text,
+    })),
   };
   const from = Math.max(range.from, start);
   const to = Math.min(range.to, end);

@@ -37,7 +37,14 @@ export function defaultRuleFor(feederClass: FeederClass): FeedingRule {
 }
 
 function castingsPerPlant(litres: number, recurrence: string): FeedingRule {
-  return { material: "castings", method: "top-dress", basis: "per-plant", amount: litres, amountUnit: "L", recurrence };
+  return {
+    material: "castings",
+    method: "top-dress",
+    basis: "per-plant",
+    amount: litres,
+    amountUnit: "L",
+    recurrence,
+  };
 }
 
 /** Tea: 100 mL of 10 % solution per plant weekly (Arancon, via conference notes). */

@@ -1,6 +1,18 @@
-import { fromDayNumber, monthOfDay, monthSet, rangeDays, toDayNumber, type DateRange } from "@/lib/engine/dates";
+import {
+  fromDayNumber,
+  monthOfDay,
+  monthSet,
+  rangeDays,
+  toDayNumber,
+  type DateRange,
+} from "@/lib/engine/dates";
 import { dflt } from "@/lib/engine/defaults";
-import { EngineInputError, requireInteger, requireNonNegative, requirePositive } from "@/lib/engine/errors";
+import {
+  EngineInputError,
+  requireInteger,
+  requireNonNegative,
+  requirePositive,
+} from "@/lib/engine/errors";
 import { fmt, plural } from "@/lib/engine/format";
 import type { Explanation, IsoDate, SupplyEvent } from "@/lib/engine/types";
 
@@ -91,14 +103,25 @@ function check(bin: BinForecastInput, field: string): Checked {
   }
   const dormant = monthSet(bin.dormantMonths, `${field}.dormantMonths`);
   if (dormant.size === 12) {
-    throw new EngineInputError(`${field}.dormantMonths`, "cannot hold all twelve months (the bin would never finish)");
+    throw new EngineInputError(
+      `${field}.dormantMonths`,
+      "cannot hold all twelve months (the bin would never finish)",
+    );
   }
   return {
     start: toDayNumber(bin.startDate, `${field}.startDate`),
     trays: requireInteger(bin.trays, `${field}.trays`, 1, 20),
     volume: requirePositive(bin.trayInsideVolumeL, `${field}.trayInsideVolumeL`, 2000),
-    P: requirePositive(bin.rotationIntervalDays ?? dflt("rotationIntervalDays"), `${field}.rotationIntervalDays`, 365),
-    T: requirePositive(bin.processingDays ?? dflt("processingDays"), `${field}.processingDays`, 730),
+    P: requirePositive(
+      bin.rotationIntervalDays ?? dflt("rotationIntervalDays"),
+      `${field}.rotationIntervalDays`,
+      365,
+    ),
+    T: requirePositive(
+      bin.processingDays ?? dflt("processingDays"),
+      `${field}.processingDays`,
+      730,
+    ),
     fill: requirePositive(bin.fillFraction ?? dflt("fillFraction"), `${field}.fillFraction`, 1),
     density: requirePositive(
       bin.bulkDensityKgPerL ?? dflt("castingsBulkDensityKgPerL"),
@@ -114,7 +137,7 @@ function check(bin: BinForecastInput, field: string): Checked {
  * (non-dormant) days: harvest k falls on the first active day by which the bin
  * has processed T + k·I days, I = max(P, T / trays).
  */
-function harvestDays(c: Checked, to: number): number[] {
+function harvestDays(c: Checked, to: number, field: string): number[] {
   const interval = Math.max(c.P, c.T / c.trays);
   const out: number[] = [];
   if (c.dormant.size === 0) {
@@ -125,7 +148,10 @@ function harvestDays(c: Checked, to: number): number[] {
     }
   }
   if (to - c.start > MAX_DAYS * 10) {
-    throw new EngineInputError("startDate", "is more than a century before the forecast range");
+    throw new EngineInputError(
+      `${field}.startDate`,
+      "is more than a century before the forecast range",
+    );
   }
   let processed = 0;
   let next = c.T;
@@ -144,16 +170,21 @@ function harvestDays(c: Checked, to: number): number[] {
 export function harvestDates(bin: BinForecastInput, range: DateRange, field = "bin"): IsoDate[] {
   const c = check(bin, field);
   const { from, to } = rangeDays(range, "range");
-  return harvestDays(c, to)
+  return harvestDays(c, to, field)
     .filter((d) => d >= from)
     .map(fromDayNumber);
 }
 
 /** Castings a bin is forecast (and, with asOf, logged) to yield within [from, to]. */
-export function forecastCastings(bin: BinForecastInput, range: DateRange, field = "bin"): CastingsForecast {
+export function forecastCastings(
+  bin: BinForecastInput,
+  range: DateRange,
+  field = "bin",
+): CastingsForecast {
   const c = check(bin, field);
   const { from, to } = rangeDays(range, "range");
-  if (to - from > MAX_DAYS) throw new EngineInputError("range", `must span at most ${MAX_DAYS} days`);
+  if (to - from > MAX_DAYS)
+    throw new EngineInputError("range", `must span at most ${MAX_DAYS} days`);
   const asOf = bin.asOf === undefined ? undefined : toDayNumber(bin.asOf, `${field}.asOf`);
   const calibration = calibrate(bin.harvestLogs, bin.calibrationHarvests, `${field}.harvestLogs`);
   const uncalibratedKg = c.volume * c.fill * c.density;
@@ -189,7 +220,7 @@ export function forecastCastings(bin: BinForecastInput, range: DateRange, field 
     });
   }
   const forecastFrom = asOf === undefined ? from : Math.max(from, asOf + 1);
-  const days = harvestDays(c, to).filter((d) => d >= forecastFrom);
+  const days = harvestDays(c, to, field).filter((d) => d >= forecastFrom);
   for (const d of days) {
     events.push({
       binId: bin.binId,

@@ -57,11 +57,25 @@ export function trayInsideFromOuter(
     );
   }
   const t = board.thicknessIn * INCH_M;
-  const outerL = requirePositive(input.outerLengthM, `${field}.outerLengthM`, GEOMETRY_LIMITS.traySideM);
-  const outerW = requirePositive(input.outerWidthM, `${field}.outerWidthM`, GEOMETRY_LIMITS.traySideM);
-  for (const [name, v] of [["outerLengthM", outerL], ["outerWidthM", outerW]] as const) {
+  const outerL = requirePositive(
+    input.outerLengthM,
+    `${field}.outerLengthM`,
+    GEOMETRY_LIMITS.traySideM,
+  );
+  const outerW = requirePositive(
+    input.outerWidthM,
+    `${field}.outerWidthM`,
+    GEOMETRY_LIMITS.traySideM,
+  );
+  for (const [name, v] of [
+    ["outerLengthM", outerL],
+    ["outerWidthM", outerW],
+  ] as const) {
     if (v <= 2 * t) {
-      throw new EngineInputError(`${field}.${name}`, `must be more than twice the board thickness (${2 * t} m)`);
+      throw new EngineInputError(
+        `${field}.${name}`,
+        `must be more than twice the board thickness (${2 * t} m)`,
+      );
     }
   }
   return { lengthM: outerL - 2 * t, widthM: outerW - 2 * t, depthM: board.widthIn * INCH_M };
@@ -109,7 +123,10 @@ export function containerVolumeL(shape: ContainerShape, field = "container"): nu
       throw new EngineInputError(`${field}.kind`, `must be "volume", "cylinder" or "box"`);
   }
   if (litres > GEOMETRY_LIMITS.containerVolumeL) {
-    throw new EngineInputError(field, `holds ${Math.round(litres)} L, more than ${GEOMETRY_LIMITS.containerVolumeL} L`);
+    throw new EngineInputError(
+      field,
+      `holds ${Math.round(litres)} L, more than ${GEOMETRY_LIMITS.containerVolumeL} L`,
+    );
   }
   return litres;
 }
@@ -117,7 +134,8 @@ export function containerVolumeL(shape: ContainerShape, field = "container"): nu
 /** Surface of a container's soil (for per-area rules on pots), m². */
 export function containerSurfaceM2(shape: ContainerShape, field = "container"): number | undefined {
   if (shape.kind === "cylinder") {
-    const r = requirePositive(shape.diameterM, `${field}.diameterM`, GEOMETRY_LIMITS.containerSideM) / 2;
+    const r =
+      requirePositive(shape.diameterM, `${field}.diameterM`, GEOMETRY_LIMITS.containerSideM) / 2;
     return Math.PI * r * r;
   }
   if (shape.kind === "box") {
@@ -139,5 +157,9 @@ export function bedAreaM2(bed: { lengthM: number; widthM: number }, field = "bed
 
 /** Raised-bed soil volume, litres. */
 export function bedVolumeL(bed: Box, field = "bed"): number {
-  return bedAreaM2(bed, field) * requirePositive(bed.depthM, `${field}.depthM`, GEOMETRY_LIMITS.bedDepthM) * 1000;
+  return (
+    bedAreaM2(bed, field) *
+    requirePositive(bed.depthM, `${field}.depthM`, GEOMETRY_LIMITS.bedDepthM) *
+    1000
+  );
 }

@@ -1,6 +1,18 @@
-import { fromDayNumber, monthOfDay, monthSet, rangeDays, toDayNumber, type DateRange } from "@/lib/engine/dates";
+import {
+  fromDayNumber,
+  monthOfDay,
+  monthSet,
+  rangeDays,
+  toDayNumber,
+  type DateRange,
+} from "@/lib/engine/dates";
 import { dflt } from "@/lib/engine/defaults";
-import { EngineInputError, requireInteger, requireNonNegative, requirePositive } from "@/lib/engine/errors";
+import {
+  EngineInputError,
+  requireInteger,
+  requireNonNegative,
+  requirePositive,
+} from "@/lib/engine/errors";
 import { fmt, plural } from "@/lib/engine/format";
 import type { Explanation, IsoDate, SupplyEvent } from "@/lib/engine/types";
 
@@ -46,7 +58,12 @@ function checkCollections(list: readonly LeachateCollection[] | undefined, field
  * window over the days between the earliest and the latest.
  */
 export function leachateRate(input: LeachateInput, field = "leachate"): LeachateRate {
-  const trailing = requireInteger(input.trailingDays ?? dflt("leachateTrailingDays"), `${field}.trailingDays`, 7, 730);
+  const trailing = requireInteger(
+    input.trailingDays ?? dflt("leachateTrailingDays"),
+    `${field}.trailingDays`,
+    7,
+    730,
+  );
   const estimateWeek = requireNonNegative(
     input.estimateLPerWeek ?? dflt("leachateEstimateLPerWeek"),
     `${field}.estimateLPerWeek`,
@@ -145,7 +162,10 @@ export function dilute(leachateL: number, waterParts = dflt("leachateDilutionWat
 }
 
 /** Undiluted leachate needed for `solutionL` litres of diluted solution. */
-export function leachateForSolution(solutionL: number, waterParts = dflt("leachateDilutionWaterParts")): number {
+export function leachateForSolution(
+  solutionL: number,
+  waterParts = dflt("leachateDilutionWaterParts"),
+): number {
   const s = requireNonNegative(solutionL, "solutionL", 100_000);
   return s / (1 + requireNonNegative(waterParts, "waterParts", 1000));
 }
@@ -163,7 +183,11 @@ export interface TeaRecipe {
  */
 export function teaCastingsNeeded(teaLitres: number, recipe: TeaRecipe = {}): number {
   const tea = requireNonNegative(teaLitres, "teaLitres", 100_000);
-  const ratio = requirePositive(recipe.castingsPerWater ?? dflt("teaCastingsPerWater"), "recipe.castingsPerWater", 2);
+  const ratio = requirePositive(
+    recipe.castingsPerWater ?? dflt("teaCastingsPerWater"),
+    "recipe.castingsPerWater",
+    2,
+  );
   const density = requirePositive(
     recipe.bulkDensityKgPerL ?? dflt("castingsBulkDensityKgPerL"),
     "recipe.bulkDensityKgPerL",

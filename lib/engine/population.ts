@@ -1,5 +1,10 @@
 import { dflt } from "@/lib/engine/defaults";
-import { EngineInputError, requireInteger, requireNonNegative, requirePositive } from "@/lib/engine/errors";
+import {
+  EngineInputError,
+  requireInteger,
+  requireNonNegative,
+  requirePositive,
+} from "@/lib/engine/errors";
 
 // Stage-structured worm population, one step a day. Cocoons and juveniles sit
 // in ring buffers indexed by day (a delay line), so a day costs O(maturation)
@@ -85,12 +90,24 @@ export function kgToWorms(kg: number, wormsPerLb = dflt("wormsPerLb")): number {
 
 function checkParams(p: PopulationParams, field: string): PopulationParams {
   return {
-    cocoonsPerAdultPerWeek: requireNonNegative(p.cocoonsPerAdultPerWeek, `${field}.cocoonsPerAdultPerWeek`, 20),
+    cocoonsPerAdultPerWeek: requireNonNegative(
+      p.cocoonsPerAdultPerWeek,
+      `${field}.cocoonsPerAdultPerWeek`,
+      20,
+    ),
     incubationDays: requireInteger(p.incubationDays, `${field}.incubationDays`, 1, 365),
     hatchSuccess: requireNonNegative(p.hatchSuccess, `${field}.hatchSuccess`, 1),
-    hatchlingsPerCocoon: requireNonNegative(p.hatchlingsPerCocoon, `${field}.hatchlingsPerCocoon`, 20),
+    hatchlingsPerCocoon: requireNonNegative(
+      p.hatchlingsPerCocoon,
+      `${field}.hatchlingsPerCocoon`,
+      20,
+    ),
     maturationDays: requireInteger(p.maturationDays, `${field}.maturationDays`, 1, 365),
-    densityCeilingLbPerFt2: requirePositive(p.densityCeilingLbPerFt2, `${field}.densityCeilingLbPerFt2`, 20),
+    densityCeilingLbPerFt2: requirePositive(
+      p.densityCeilingLbPerFt2,
+      `${field}.densityCeilingLbPerFt2`,
+      20,
+    ),
     wormsPerLb: requirePositive(p.wormsPerLb, `${field}.wormsPerLb`, 10_000),
     mortalityPerDay: requireNonNegative(p.mortalityPerDay, `${field}.mortalityPerDay`, 1),
   };
@@ -142,7 +159,14 @@ export function simulatePopulation(input: PopulationInput, field = "population")
     for (let s = 0; s < I; s++) c += cocoons[s] as number;
     let j = 0;
     for (let s = 0; s < M; s++) j += juveniles[s] as number;
-    return { day: t, adults, juveniles: j, cocoons: c, worms: adults + j, biomassKg: adults * adultKg + juvenileKg(t) };
+    return {
+      day: t,
+      adults,
+      juveniles: j,
+      cocoons: c,
+      worms: adults + j,
+      biomassKg: adults * adultKg + juvenileKg(t),
+    };
   };
 
   const series: PopulationDay[] = [snapshot(0)];

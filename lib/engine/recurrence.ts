@@ -1,5 +1,11 @@
 import { Frequency, RRule, type Options } from "rrule";
-import { fromDayNumber, rangeDays, toDayNumber, utcDateToIso, type DateRange } from "@/lib/engine/dates";
+import {
+  fromDayNumber,
+  rangeDays,
+  toDayNumber,
+  utcDateToIso,
+  type DateRange,
+} from "@/lib/engine/dates";
 import { EngineInputError } from "@/lib/engine/errors";
 import type { IsoDate } from "@/lib/engine/types";
 
@@ -31,7 +37,10 @@ function checkIntegers(value: unknown, name: string, field: string): void {
   const list = Array.isArray(value) ? value : [value];
   for (const v of list) {
     if (typeof v !== "number" || !Number.isInteger(v)) {
-      throw new EngineInputError(field, `${name.toUpperCase()} must be whole numbers (got ${String(v)})`);
+      throw new EngineInputError(
+        field,
+        `${name.toUpperCase()} must be whole numbers (got ${String(v)})`,
+      );
     }
   }
 }
@@ -57,12 +66,16 @@ export function parseRecurrence(rule: unknown, field = "recurrence"): ParsedRule
     throw new EngineInputError(field, "must repeat daily or less often (feedings are whole days)");
   }
   if (opts.byhour != null || opts.byminute != null || opts.bysecond != null) {
-    throw new EngineInputError(field, "BYHOUR/BYMINUTE/BYSECOND have no meaning for all-day feedings");
+    throw new EngineInputError(
+      field,
+      "BYHOUR/BYMINUTE/BYSECOND have no meaning for all-day feedings",
+    );
   }
   if (opts.count != null) checkIntegers(opts.count, "count", field);
   if (opts.interval != null) {
     checkIntegers(opts.interval, "interval", field);
-    if ((opts.interval as number) < 1) throw new EngineInputError(field, "INTERVAL must be at least 1");
+    if ((opts.interval as number) < 1)
+      throw new EngineInputError(field, "INTERVAL must be at least 1");
   }
   for (const name of INT_LIST_FIELDS) {
     if (opts[name] != null) checkIntegers(opts[name], name, field);
@@ -73,7 +86,8 @@ export function parseRecurrence(rule: unknown, field = "recurrence"): ParsedRule
   }
   const clean: ParsedRule = { ...opts, tzid: null };
   if (opts.until) clean.until = new Date(toDayNumber(utcDateToIso(opts.until), field) * MS_PER_DAY);
-  if (opts.dtstart) clean.dtstart = new Date(toDayNumber(utcDateToIso(opts.dtstart), field) * MS_PER_DAY);
+  if (opts.dtstart)
+    clean.dtstart = new Date(toDayNumber(utcDateToIso(opts.dtstart), field) * MS_PER_DAY);
   return remember(parsedCache, key, clean);
 }
 
@@ -94,7 +108,11 @@ export interface ExpandOptions {
  * All calendar days of `rule` within `range` (inclusive), in order, without
  * duplicates. The result is cached and frozen: callers must not mutate it.
  */
-export function expandRecurrence(rule: string, range: DateRange, options: ExpandOptions): readonly IsoDate[] {
+export function expandRecurrence(
+  rule: string,
+  range: DateRange,
+  options: ExpandOptions,
+): readonly IsoDate[] {
   const field = options.field ?? "recurrence";
   const opts = parseRecurrence(rule, field);
   const anchorDay = opts.dtstart
@@ -108,12 +126,20 @@ export function expandRecurrence(rule: string, range: DateRange, options: Expand
   let out: IsoDate[] = [];
   if (to >= anchorDay) {
     const rr = new RRule({ ...opts, dtstart: new Date(anchorDay * MS_PER_DAY) });
-    const dates = rr.between(new Date(from * MS_PER_DAY), new Date(to * MS_PER_DAY), true, (_d, i) => {
-      if (i >= MAX_OCCURRENCES) {
-        throw new EngineInputError(field, `gives more than ${MAX_OCCURRENCES} dates in the range`);
-      }
-      return true;
-    });
+    const dates = rr.between(
+      new Date(from * MS_PER_DAY),
+      new Date(to * MS_PER_DAY),
+      true,
+      (_d, i) => {
+        if (i >= MAX_OCCURRENCES) {
+          throw new EngineInputError(
+            field,
+            `gives more than ${MAX_OCCURRENCES} dates in the range`,
+          );
+        }
+        return true;
+      },
+    );
     let last = Number.NEGATIVE_INFINITY;
     for (const d of dates) {
       const day = Math.floor(d.getTime() / MS_PER_DAY);

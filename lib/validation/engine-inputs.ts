@@ -38,11 +38,21 @@ export const unitSystemSchema = z.enum(unitSystems);
 export const nominalBoardSchema = z.enum(nominalBoardNames as [string, ...string[]]);
 export const materialSchema = z.enum(["castings", "leachate", "tea"]);
 export const methodSchema = z.enum(["top-dress", "side-dress", "soil-mix", "drench"]);
-export const basisSchema = z.enum(["per-plant", "per-area", "per-container-volume", "percent-of-mix"]);
+export const basisSchema = z.enum([
+  "per-plant",
+  "per-area",
+  "per-container-volume",
+  "percent-of-mix",
+]);
 export const feederClassSchema = z.enum(["heavy", "medium", "light"]);
 
 /** An RRULE as text; whether the library can expand it is checked by the engine (EngineInputError). */
-export const recurrenceSchema = z.string().trim().min(5).max(500).regex(/FREQ=/i, "an RRULE needs FREQ=…");
+export const recurrenceSchema = z
+  .string()
+  .trim()
+  .min(5)
+  .max(500)
+  .regex(/FREQ=/i, "an RRULE needs FREQ=…");
 
 export const trayBoxSchema = z.object({
   lengthM: positive(GEOMETRY_LIMITS.traySideM),
@@ -56,7 +66,10 @@ export const harvestLogSchema = z.object({
   predictedKg: nonNegative(10_000),
 });
 
-export const leachateCollectionSchema = z.object({ date: isoDateSchema, litres: nonNegative(1000) });
+export const leachateCollectionSchema = z.object({
+  date: isoDateSchema,
+  litres: nonNegative(1000),
+});
 
 /** A stacked-tray bin as forecastCastings / forecastLeachate take it. */
 export const binParametersSchema = z.object({
@@ -90,13 +103,21 @@ export const feedingRuleSchema = z
   })
   .superRefine((rule, ctx) => {
     if (rule.basis === "percent-of-mix" && rule.material !== "castings") {
-      ctx.addIssue({ code: "custom", path: ["basis"], message: "percent-of-mix applies to castings only" });
+      ctx.addIssue({
+        code: "custom",
+        path: ["basis"],
+        message: "percent-of-mix applies to castings only",
+      });
     }
     if (rule.basis === "percent-of-mix" && rule.amount > 100) {
       ctx.addIssue({ code: "custom", path: ["amount"], message: "a percentage is at most 100" });
     }
     if (rule.amountUnit === "kg" && rule.material !== "castings") {
-      ctx.addIssue({ code: "custom", path: ["amountUnit"], message: "liquids are measured in litres" });
+      ctx.addIssue({
+        code: "custom",
+        path: ["amountUnit"],
+        message: "liquids are measured in litres",
+      });
     }
   });
 
@@ -123,7 +144,10 @@ export const plantingSchema = z
     areaM2: positive(10_000).optional(),
     containerVolumeL: positive(GEOMETRY_LIMITS.containerVolumeL).optional(),
   })
-  .refine((p) => p.endDate >= p.startDate, { path: ["endDate"], message: "must not be before startDate" });
+  .refine((p) => p.endDate >= p.startDate, {
+    path: ["endDate"],
+    message: "must not be before startDate",
+  });
 
 export const gardenSeasonSchema = z
   .object({ lastSpringFrost: monthDaySchema, firstFallFrost: monthDaySchema })

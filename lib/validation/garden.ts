@@ -5,7 +5,12 @@ const isoDay = (label: string) =>
   z
     .string({ error: `Enter the ${label}.` })
     .regex(/^\d{4}-\d{2}-\d{2}$/, `Enter the ${label} as a date.`)
-    .refine((d) => !Number.isNaN(Date.parse(`${d}T00:00:00Z`)), `The ${label} is not a real date.`);
+    // Round-trip, not just Date.parse: V8 rolls "2026-02-30" over to 2 March instead of
+    // refusing it, and PostgreSQL then rejects the insert with a 500.
+    .refine((d) => {
+      const parsed = new Date(`${d}T00:00:00Z`);
+      return !Number.isNaN(parsed.getTime()) && parsed.toISOString().slice(0, 10) === d;
+    }, `The ${label} is not a real date.`);
 
 function isTimeZone(tz: string): boolean {
   try {

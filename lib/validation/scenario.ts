@@ -1,20 +1,15 @@
 import { z } from "zod";
-import { EngineInputError } from "@/lib/engine/errors";
 import { GEOMETRY_LIMITS } from "@/lib/engine/geometry";
-import { isBoundedRule, parseRecurrence } from "@/lib/engine/recurrence";
+import { isBoundedRule } from "@/lib/engine/recurrence";
 import {
-  basisSchema,
   feederClassSchema,
   gardenSeasonSchema,
   isoDateSchema,
-  materialSchema,
-  methodSchema,
   nominalBoardSchema,
-  recurrenceSchema,
   unitSystemSchema,
 } from "@/lib/validation/engine-inputs";
 import { quantitySchema } from "@/lib/validation/scenario-quantity";
-import { isUnitName, quantityOf, unitNames } from "@/lib/units";
+import { ruleSchema } from "@/lib/validation/scenario-rule";
 
 // A whole garden in one JSON file: what `npm run plan` reads and what the app
 // exports and imports. Sizes carry their unit ({ value, unit }); the engine
@@ -46,6 +41,8 @@ const settingsSchema = z
     asOf: isoDateSchema.optional(),
     pricePerLb: z.number().finite().nonnegative().max(1000).optional(),
     shelfLifeDays: z.number().int().min(1).max(3650).optional(),
+    /** Days collected leachate is still used; default 1 (it does not keep). */
+    leachateKeepDays: z.number().int().min(1).max(30).optional(),
     teaCastingsPerWater: z.number().finite().positive().max(2).optional(),
   })
   .strict()
@@ -125,7 +122,7 @@ const binSchema = z
   })
   .strict();
 
-const bedSchema = z.union([
+const bedSchema = z.discriminatedUnion("kind", [
   z
     .object({
       id,
@@ -146,81 +143,6 @@ const bedSchema = z.union([
     })
     .strict(),
 ]);
-
-/** Rule amount: per plant a volume (or castings mass); per area a depth or volume `per` area; per container volume `per` volume; percent of mix a plain number. */
-const ruleAmountSchema = z.union([
-  z.number().finite().nonnegative().max(100),
-  z
-    .object({
-      value: z.number().finite().nonnegative().max(10_000),
-      unit: z.string(),
-      per: z.string().optional(),
-    })
-    .strict(),
-]);
-
-const ruleSchema = z
-  .object({
-    material: materialSchema,
-    method: methodSchema,
-    basis: basisSchema,
-    amount: ruleAmountSchema,
-    recurrence: recurrenceSchema,
-    dilutionWaterParts: z.number().finite().nonnegative().max(1000).optional(),
-  })
-  .strict()
-  .superRefine((rule, ctx) => {
-    try {
-      parseRecurrence(rule.recurrence, "recurrence");
-    } catch (e) {
-      const message =
-        e instanceof EngineInputError ? e.message.replace(/^recurrence: /, "") : String(e);
-      ctx.addIssue({ code: "custom", path: ["recurrence"], message });
-    }
-    checkRuleAmount(rule, ctx);
-  });
-
-function checkRuleAmount(rule: z.infer<typeof ruleSchema>, ctx: z.RefinementCtx): void {
-  const issue = (message: string, path: (string | number)[] = ["amount"]) =>
-    ctx.addIssue({ code: "custom", path, message });
-  const a = rule.amount;
-  if (rule.basis === "percent-of-mix") {
-    if (typeof a !== "number") issue("for percent-of-mix give a plain percentage 0–100");
-    if (rule.material !== "castings") issue("percent-of-mix applies to castings only", ["basis"]);
-    return;
-  }
-  if (typeof a === "number") return; // SI as the engine takes it (L per plant, L per m², L per L)
-  const kinds: Record<string, string[]> = {
-    "per-plant": rule.material === "castings" ? ["volume", "mass"] : ["volume"],
-    "per-area": ["length", "volume"],
-    "per-container-volume": ["volume"],
-  };
-  if (!isUnitName(a.unit)) {
-    return issue(`unknown unit ${JSON.stringify(a.unit)}; use one of ${unitNames.join(", ")}`, [
-      "amount",
-      "unit",
-    ]);
-  }
-  const kind = quantityOf(a.unit);
-  if (!kinds[rule.basis]?.includes(kind)) {
-    return issue(`a ${kind} unit does not fit basis ${rule.basis}`, ["amount", "unit"]);
-  }
-  const needsPer =
-    rule.basis === "per-container-volume" || (rule.basis === "per-area" && kind === "volume");
-  if (needsPer) {
-    const want = rule.basis === "per-area" ? "area" : "volume";
-    if (!isUnitName(a.per) || quantityOf(a.per) !== want) {
-      issue(`needs "per": a ${want} unit (e.g. ${want === "area" ? "ft2" : "gal"})`, [
-        "amount",
-        "per",
-      ]);
-    }
-  } else if (a.per !== undefined) {
-    issue(`"per" has no meaning here`, ["amount", "per"]);
-  }
-  if (rule.basis === "per-area" && kind === "length" && rule.material !== "castings")
-    issue("a depth applies to castings only", ["amount", "unit"]);
-}
 
 const plantingSchema = z
   .object({
@@ -336,13 +258,23 @@ export function formatPath(path: readonly PropertyKey[]): string {
   return out || "(root)";
 }
 
+/**
+ * zod reports a failed union as one issue at the union's path; a grower needs
+ * the field inside it. Take the branch that came closest (fewest issues).
+ */
+function flatten(issue: z.core.$ZodIssue, base: readonly PropertyKey[] = []): ScenarioIssue[] {
+  const path = [...base, ...issue.path];
+  if (issue.code === "invalid_union" && issue.errors.length > 0) {
+    const best = [...issue.errors].sort((a, b) => a.length - b.length)[0] ?? [];
+    if (best.length > 0) return best.flatMap((i) => flatten(i, path));
+  }
+  return [{ path: formatPath(path), message: issue.message }];
+}
+
 export function parseScenario(
   input: unknown,
 ): { ok: true; scenario: Scenario } | { ok: false; issues: ScenarioIssue[] } {
   const r = scenarioSchema.safeParse(input);
   if (r.success) return { ok: true, scenario: r.data };
-  return {
-    ok: false,
-    issues: r.error.issues.map((i) => ({ path: formatPath(i.path), message: i.message })),
-  };
+  return { ok: false, issues: r.error.issues.flatMap((i) => flatten(i)) };
 }

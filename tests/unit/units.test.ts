@@ -1,5 +1,16 @@
+import { convert } from "convert";
 import { EngineInputError } from "@/lib/engine/errors";
-import { convertUnit, displayLiquid, displayUnits, fromSi, parseUnit, toSi, unitNames } from "@/lib/units";
+import {
+  convertUnit,
+  quantityOf,
+  siUnit,
+  displayLiquid,
+  displayUnits,
+  fromSi,
+  parseUnit,
+  toSi,
+  unitNames,
+} from "@/lib/units";
 
 // Every expected value below is from NIST Handbook 44 (2024), Appendix C,
 // "General Tables of Units of Measurement" — exact definitions, not rounded.
@@ -61,8 +72,16 @@ describe("unit errors name the field", () => {
 
 describe("display preference", () => {
   it("shows castings in lb and cups (US) or kg and litres (metric)", () => {
-    expect(displayUnits("us")).toMatchObject({ castingsMass: "lb", castingsVolume: "cup", area: "ft2" });
-    expect(displayUnits("metric")).toMatchObject({ castingsMass: "kg", castingsVolume: "L", area: "m2" });
+    expect(displayUnits("us")).toMatchObject({
+      castingsMass: "lb",
+      castingsVolume: "cup",
+      area: "ft2",
+    });
+    expect(displayUnits("metric")).toMatchObject({
+      castingsMass: "kg",
+      castingsVolume: "L",
+      area: "m2",
+    });
   });
 
   it("switches liquids to the small unit under one large unit", () => {
@@ -75,5 +94,17 @@ describe("display preference", () => {
 
   it("rejects an unknown unit system", () => {
     expect(() => displayUnits("imperial" as "us")).toThrow(/unitSystem/);
+  });
+});
+
+describe("our factor table agrees with the convert package (8.0.2)", () => {
+  // Library names for ours where they differ; the rest are spelled the same.
+  const libName: Record<string, string> = { "fl-oz": "fl oz" };
+  const siLib = { volume: "L", mass: "kg", area: "m2", length: "m" } as const;
+  it.each(unitNames)("%s", (unit) => {
+    const convertAny = convert as unknown as (v: number, u: string) => { to(u: string): number };
+    const expected = convertAny(1, libName[unit] ?? unit).to(siLib[quantityOf(unit)]);
+    expect(Math.abs(toSi(1, unit) - expected) / expected).toBeLessThan(1e-12);
+    expect(siUnit[quantityOf(unit)]).toBe(siLib[quantityOf(unit)]);
   });
 });

@@ -1,4 +1,10 @@
-import { allocateByTiers, orderIntoTiers, splitTier, type Claim } from "@/lib/engine/allocate";
+import {
+  allocateByTiers,
+  grantMonth,
+  orderIntoTiers,
+  splitTier,
+  type Claim,
+} from "@/lib/engine/allocate";
 
 // The order is PRODUCT.md "Balance (the heart)": priority, then feeder class
 // (heavy > medium > light), then due date; a tier is split pro rata.
@@ -63,5 +69,42 @@ describe("allocateByTiers", () => {
     const grants = allocateByTiers([claim(0, { need: 5 }), claim(1, { need: 5, day: 3 })], 7);
     const sum = [...grants.values()].reduce((a, b) => a + b, 0);
     expect(sum).toBeCloseTo(7, 12);
+  });
+});
+
+describe("grantMonth", () => {
+  // Lots usable for 60 days (Harit et al. 2014); days are day numbers.
+  const lots = [
+    { madeDay: 0, remaining: 4 },
+    { madeDay: 10, remaining: 10 },
+  ];
+
+  it("serves the higher tier first but routes it to stock the lower tier cannot use", () => {
+    const tiers = orderIntoTiers([
+      claim(0, { priority: 3, day: 5, need: 4 }),
+      claim(1, { priority: 1, day: 20, need: 4 }),
+    ]);
+    const g = grantMonth(lots, 60, tiers);
+    expect(g.get(1)).toBe(4);
+    expect(g.get(0)).toBe(4); // only lot 0 (4 kg) is usable on day 5, and it is left for it
+  });
+
+  it("caps a tier by what its own days can reach, after higher tiers", () => {
+    const tiers = orderIntoTiers([
+      claim(0, { priority: 1, day: 5, need: 3 }),
+      claim(1, { priority: 2, day: 6, need: 3 }),
+    ]);
+    const g = grantMonth(lots, 60, tiers);
+    expect(g.get(0)).toBe(3);
+    expect(g.get(1)).toBe(1); // 4 kg usable before day 10, 3 already granted
+  });
+
+  it("grants nothing where no lot is usable", () => {
+    const g = grantMonth(
+      [{ madeDay: 10, remaining: 5 }],
+      60,
+      orderIntoTiers([claim(0, { day: 5, need: 2 })]),
+    );
+    expect(g.get(0)).toBe(0);
   });
 });

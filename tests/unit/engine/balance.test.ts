@@ -34,6 +34,9 @@ describe("computeBalance — conservation and ageing", () => {
       "2026-03: opening 12.4 kg + 20.3 kg harvested − 9.8 kg fed − 1.2 kg aged out = 21.7 kg; wanted 9.8 kg, all covered",
     );
     expect(m.harvests[0]?.explanation.text).toBe("test harvest 20.3 kg");
+    expect(r.totals.castings.explanation?.text).toBe(
+      "1 month: opening 12.4 kg + 20.3 kg in − 9.8 kg fed − 1.2 kg aged out or unused = 21.7 kg; 0.0 kg short in all",
+    );
   });
 
   it("uses the oldest usable lot first, so the younger one is carried", () => {
@@ -82,6 +85,21 @@ describe("computeBalance — when short", () => {
     expect(byId.low?.allocated).toBeCloseTo(4, 9);
     expect(byId.low?.coveragePct).toBeCloseTo((4 / 6) * 100, 9);
     expect(r.firstShortfall.any).toBe("2026-03-05");
+  });
+
+  it("a later high-priority feed does not take stock an earlier feed needs when a later harvest can serve it", () => {
+    // 4 kg on hand from Feb; 10 kg harvested 03-10. The priority-3 feed on 03-01
+    // can only use the Feb lot; the priority-1 feed on 03-20 can use either.
+    const r = run({
+      openingLots: [{ id: "feb", material: "castings", madeOn: "2026-02-20", amount: 4 }],
+      supply: [harvest("2026-03-10", 10)],
+      demand: [
+        want("early-low", "2026-03-01", 4, { priority: 3 }),
+        want("late-high", "2026-03-20", 4, { priority: 1 }),
+      ],
+    });
+    expect(r.occurrences.map((o) => o.coveragePct)).toEqual([100, 100]);
+    expect(r.firstShortfall.any).toBeNull();
   });
 
   it("then feeder class: heavy before medium before light", () => {

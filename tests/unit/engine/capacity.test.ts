@@ -7,7 +7,12 @@ const ft2 = (n: number) => toSi(n, "ft2");
 describe("worm capacity check", () => {
   it("2 lb of worms eat about 1 lb of food a day at the 50 % end (Univ. of Illinois Extension)", () => {
     // Alabama Extension gives 25–50 % of body weight per day; Illinois' figure is the 50 % end.
-    const r = checkCapacity({ wormMassKg: lb(2), surfaceM2: ft2(10), plannedFoodKgPerWeek: 0, intakeFractionPerDay: 0.5 });
+    const r = checkCapacity({
+      wormMassKg: lb(2),
+      surfaceM2: ft2(10),
+      plannedFoodKgPerWeek: 0,
+      intakeFractionPerDay: 0.5,
+    });
     expect(r.intakeKgPerDay).toBeCloseTo(lb(1), 12);
   });
 
@@ -17,7 +22,11 @@ describe("worm capacity check", () => {
   });
 
   it("1 ft² per lb of food per week: a 2.48 ft² tray takes 2.48 lb a week (MSU Extension; NC State AG-473-18)", () => {
-    const r = checkCapacity({ wormMassKg: lb(10), surfaceM2: ft2(2.48), plannedFoodKgPerWeek: lb(2) });
+    const r = checkCapacity({
+      wormMassKg: lb(10),
+      surfaceM2: ft2(2.48),
+      plannedFoodKgPerWeek: lb(2),
+    });
     expect(r.surfaceKgPerWeek).toBeCloseTo(lb(2.48), 10);
     expect(r.warnings).toEqual([]);
   });

@@ -1,4 +1,9 @@
-import { calibrate, forecastCastings, harvestDates, type BinForecastInput } from "@/lib/engine/forecast";
+import {
+  calibrate,
+  forecastCastings,
+  harvestDates,
+  type BinForecastInput,
+} from "@/lib/engine/forecast";
 import { trayInsideFromOuter, trayInsideVolumeL } from "@/lib/engine/geometry";
 import { fromSi, toSi } from "@/lib/units";
 
@@ -74,7 +79,12 @@ describe("stacked-tray cadence (PRODUCT.md: first harvest ≈ start + T, then ev
 
   it("every parameter can be overridden per bin", () => {
     const f = forecastCastings(
-      bin({ processingDays: 60, rotationIntervalDays: 45, fillFraction: 0.8, bulkDensityKgPerL: 0.9 }),
+      bin({
+        processingDays: 60,
+        rotationIntervalDays: 45,
+        fillFraction: 0.8,
+        bulkDensityKgPerL: 0.9,
+      }),
       year,
     );
     expect(f.events[0]?.date).toBe("2027-04-02"); // 2027-02-01 + 60
@@ -98,9 +108,14 @@ describe("calibration from logged harvests", () => {
   });
 
   it("scales the forecast and says how many harvests it used", () => {
-    const f = forecastCastings(bin({ harvestLogs: logs }), { from: "2027-09-01", to: "2027-12-31" });
+    const f = forecastCastings(bin({ harvestLogs: logs }), {
+      from: "2027-09-01",
+      to: "2027-12-31",
+    });
     expect(f.perHarvestKg).toBeCloseTo(trayL * 0.9 * 0.7 * 0.93, 10);
-    expect(f.explanation.text).toBe("4 harvests × 32.2 L × 0.9 × 0.7 kg/L, calibrated ×0.93 from 4 logged harvests");
+    expect(f.explanation.text).toBe(
+      "4 harvests × 32.2 L × 0.9 × 0.7 kg/L, calibrated ×0.93 from 4 logged harvests",
+    );
   });
 
   it("with asOf, returns logged harvests as actual and forecasts only after", () => {
@@ -126,13 +141,22 @@ describe("bad bin input", () => {
     expect(() => forecastCastings(bin({ trayInsideVolumeL: -3 }), year, "bins[1]")).toThrow(
       /bins\[1\]\.trayInsideVolumeL/,
     );
-    expect(() => forecastCastings(bin({ dormantMonths: [13] }), year)).toThrow(/bin\.dormantMonths\[0\]/);
-    expect(() => forecastCastings(bin({ startDate: "2027-02-30" }), year)).toThrow(/bin\.startDate/);
-    expect(() => forecastCastings(bin(), { from: "2027-12-31", to: "2027-01-01" })).toThrow(/range\.to/);
+    expect(() => forecastCastings(bin({ dormantMonths: [13] }), year)).toThrow(
+      /bin\.dormantMonths\[0\]/,
+    );
+    expect(() => forecastCastings(bin({ startDate: "2027-02-30" }), year)).toThrow(
+      /bin\.startDate/,
+    );
+    expect(() => forecastCastings(bin(), { from: "2027-12-31", to: "2027-01-01" })).toThrow(
+      /range\.to/,
+    );
   });
 
   it("never returns NaN", () => {
-    const f = forecastCastings(bin({ harvestLogs: [{ date: "2027-05-02", actualKg: 5, predictedKg: 0 }] }), year);
+    const f = forecastCastings(
+      bin({ harvestLogs: [{ date: "2027-05-02", actualKg: 5, predictedKg: 0 }] }),
+      year,
+    );
     expect(f.events.every((e) => Number.isFinite(e.amount))).toBe(true);
     expect(f.calibration.used).toBe(0);
   });

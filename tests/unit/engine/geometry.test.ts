@@ -54,7 +54,10 @@ describe("containers and beds", () => {
   });
 
   it("a 5-gallon pot entered by volume is 18.93 L (5 × 3.785411784 L, NIST)", () => {
-    expect(containerVolumeL({ kind: "volume", volumeL: toSi(5, "gal") })).toBeCloseTo(18.92705892, 8);
+    expect(containerVolumeL({ kind: "volume", volumeL: toSi(5, "gal") })).toBeCloseTo(
+      18.92705892,
+      8,
+    );
   });
 
   it("an 8 × 4 ft raised bed is 32 ft², and 11 in deep holds 29⅓ ft³", () => {
@@ -84,13 +87,19 @@ describe("rejects impossible sizes, naming the field", () => {
   });
 
   it("zero, negative and NaN sides", () => {
-    expect(fieldOf(() => trayInsideVolumeL({ lengthM: 0.5, widthM: 0, depthM: 0.1 }))).toBe("tray.widthM");
+    expect(fieldOf(() => trayInsideVolumeL({ lengthM: 0.5, widthM: 0, depthM: 0.1 }))).toBe(
+      "tray.widthM",
+    );
     expect(fieldOf(() => bedAreaM2({ lengthM: -2, widthM: 1 }))).toBe("bed.lengthM");
-    expect(fieldOf(() => containerVolumeL({ kind: "volume", volumeL: Number.NaN }))).toBe("container.volumeL");
+    expect(fieldOf(() => containerVolumeL({ kind: "volume", volumeL: Number.NaN }))).toBe(
+      "container.volumeL",
+    );
   });
 
   it("an outside size no bigger than two boards", () => {
-    const field = fieldOf(() => trayInsideFromOuter({ outerLengthM: inch(3), outerWidthM: inch(20), board: "2x6" }));
+    const field = fieldOf(() =>
+      trayInsideFromOuter({ outerLengthM: inch(3), outerWidthM: inch(20), board: "2x6" }),
+    );
     expect(field).toBe("tray.outerLengthM");
   });
 

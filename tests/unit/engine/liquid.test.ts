@@ -1,4 +1,10 @@
-import { dilute, forecastLeachate, leachateForSolution, leachateRate, teaCastingsNeeded } from "@/lib/engine/liquid";
+import {
+  dilute,
+  forecastLeachate,
+  leachateForSolution,
+  leachateRate,
+  teaCastingsNeeded,
+} from "@/lib/engine/liquid";
 import { toSi } from "@/lib/units";
 
 describe("leachate rate", () => {
@@ -24,7 +30,9 @@ describe("leachate rate", () => {
     expect(r.source).toBe("logs");
     expect(r.collectionsUsed).toBe(4);
     expect(r.litresPerDay).toBeCloseTo(0.1, 12);
-    expect(r.explanation.text).toMatch(/^0\.1 L\/day: 2\.1 L over 21 days from 4 logged collections/);
+    expect(r.explanation.text).toMatch(
+      /^0\.1 L\/day: 2\.1 L over 21 days from 4 logged collections/,
+    );
   });
 });
 
@@ -43,7 +51,9 @@ describe("leachate supply events", () => {
     expect(forecast[0]?.date).toBe("2027-02-01");
     expect(forecast).toHaveLength(3);
     for (const e of forecast) expect(e.amount).toBeCloseTo(0.1, 12);
-    expect(events.filter((e) => e.actual).map((e) => [e.date, e.amount])).toEqual([["2026-12-20", 0.5]]);
+    expect(events.filter((e) => e.actual).map((e) => [e.date, e.amount])).toEqual([
+      ["2026-12-20", 0.5],
+    ]);
   });
 
   it("can group days into one event per collection", () => {
@@ -65,13 +75,16 @@ describe("dilution and tea", () => {
   it("castings for tea: 10 L of a 10 % brew needs 1 L of castings = 0.7 kg", () => {
     // 10 % solution (Arancon); 0.7 kg/L bulk density (India FCO; Agnew & Leonard 2003)
     expect(teaCastingsNeeded(10)).toBeCloseTo(0.7, 12);
-    expect(teaCastingsNeeded(10, { castingsPerWater: 0.2, bulkDensityKgPerL: 0.8 })).toBeCloseTo(1.6, 12);
+    expect(teaCastingsNeeded(10, { castingsPerWater: 0.2, bulkDensityKgPerL: 0.8 })).toBeCloseTo(
+      1.6,
+      12,
+    );
   });
 
   it("rejects bad numbers, naming the field", () => {
     expect(() => teaCastingsNeeded(Number.NaN)).toThrow(/teaLitres/);
-    expect(() => leachateRate({ binId: "b", collections: [{ date: "2027-01-01", litres: -1 }] })).toThrow(
-      /leachate\.collections\[0\]\.litres/,
-    );
+    expect(() =>
+      leachateRate({ binId: "b", collections: [{ date: "2027-01-01", litres: -1 }] }),
+    ).toThrow(/leachate\.collections\[0\]\.litres/);
   });
 });

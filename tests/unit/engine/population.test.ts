@@ -14,7 +14,7 @@ describe("worm population model", () => {
 
   it("common practice: a start of 2,000 worms is well past 10,000 after three months, given room", () => {
     // Room matters: the 2 lb/ft² ceiling caps one 24 × 20 in tray (2.48 ft²) at ~4,960 worms,
-    // so this check uses 1 m² (10.8 ft², ceiling ~21,500 worms). Measured: ~20,900 at day 90.
+    // so this check uses 1 m² (10.8 ft², ceiling ~21,500 worms). Measured: ~21,500 at day 90 (the ceiling).
     const run = simulatePopulation({ startWorms: 2000, surfaceM2: 1, days: 90 });
     expect(run.final.worms).toBeGreaterThan(15_000);
   });
@@ -45,8 +45,15 @@ describe("worm population model", () => {
 
   it("starting with cocoons already laid (worms from a working bin) speeds the start", () => {
     const plain = simulatePopulation({ startWorms: 2000, surfaceM2: 100, days: 120 });
-    const seeded = simulatePopulation({ startWorms: 2000, surfaceM2: 100, days: 120, start: "adults-with-cocoons" });
-    expect(daysToMultiply(seeded, "biomassKg") as number).toBeLessThan(daysToMultiply(plain, "biomassKg") as number);
+    const seeded = simulatePopulation({
+      startWorms: 2000,
+      surfaceM2: 100,
+      days: 120,
+      start: "adults-with-cocoons",
+    });
+    expect(daysToMultiply(seeded, "biomassKg") as number).toBeLessThan(
+      daysToMultiply(plain, "biomassKg") as number,
+    );
   });
 
   it("density holds the population at ~2 lb per ft² of surface", () => {
@@ -78,9 +85,11 @@ describe("worm population model", () => {
   });
 
   it("rejects bad input with the field named", () => {
-    expect(() => simulatePopulation({ startWorms: -5, surfaceM2: 1, days: 10 })).toThrow(/population\.startWorms/);
-    expect(() => simulatePopulation({ startWorms: 5, surfaceM2: 1, days: 10, params: { hatchSuccess: 2 } })).toThrow(
-      /params\.hatchSuccess/,
+    expect(() => simulatePopulation({ startWorms: -5, surfaceM2: 1, days: 10 })).toThrow(
+      /population\.startWorms/,
     );
+    expect(() =>
+      simulatePopulation({ startWorms: 5, surfaceM2: 1, days: 10, params: { hatchSuccess: 2 } }),
+    ).toThrow(/params\.hatchSuccess/);
   });
 });

@@ -1,8 +1,9 @@
 import path from "node:path";
+import { fileURLToPath } from "node:url";
 import react from "@vitejs/plugin-react";
 import { defineConfig } from "vitest/config";
 
-const root = path.resolve(__dirname);
+const root = path.dirname(fileURLToPath(import.meta.url));
 
 export default defineConfig({
   plugins: [react()],
@@ -47,6 +48,7 @@ export default defineConfig({
           testTimeout: 120_000,
           hookTimeout: 300_000,
           fileParallelism: false,
+          globalSetup: ["tests/e2e/support/global-setup.ts"],
         },
       },
     ],

@@ -1,0 +1,43 @@
+import type { Metadata } from "next";
+import { DeleteGarden } from "@/components/garden/delete-garden";
+import { GardenSettingsForm } from "@/components/garden/garden-settings-form";
+import { Card, CardBody, CardHeader, CardTitle } from "@/components/ui";
+import { getGardenById } from "@/db/queries/gardens";
+import { requirePageMember } from "@/lib/auth/page-session";
+
+export const metadata: Metadata = { title: "Settings" };
+
+export default async function GardenSettingsPage({ params }: { params: Promise<{ gardenId: string }> }) {
+  const { gardenId } = await params;
+  await requirePageMember(gardenId, "owner");
+  const garden = await getGardenById({ gardenId });
+  if (!garden) return null;
+  return (
+    <>
+      <h1 className="text-3xl">Settings</h1>
+      <Card>
+        <CardBody>
+          <GardenSettingsForm
+            gardenId={gardenId}
+            initial={{
+              name: garden.name,
+              timeZone: garden.timeZone,
+              unitSystem: garden.unitSystem,
+              lastSpringFrost: garden.lastSpringFrost,
+              firstFallFrost: garden.firstFallFrost,
+              location: garden.location ?? "",
+            }}
+          />
+        </CardBody>
+      </Card>
+      <Card className="border-bloom-200">
+        <CardHeader>
+          <CardTitle>Delete the garden</CardTitle>
+        </CardHeader>
+        <CardBody>
+          <DeleteGarden gardenId={gardenId} gardenName={garden.name} />
+        </CardBody>
+      </Card>
+    </>
+  );
+}

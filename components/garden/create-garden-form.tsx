@@ -1,0 +1,38 @@
+"use client";
+
+import { useRouter } from "next/navigation";
+import { FormMessage } from "@/components/forms/form-message";
+import { useApiForm } from "@/components/forms/use-api-form";
+import { Button } from "@/components/ui";
+import { apiFetch } from "@/lib/api-client";
+import { createGardenSchema } from "@/lib/validation/garden";
+import { GardenFields } from "./garden-fields";
+
+export function CreateGardenForm() {
+  const router = useRouter();
+  const year = new Date().getFullYear();
+  const { form, formError, submit } = useApiForm(createGardenSchema, {
+    name: "",
+    timeZone: Intl.DateTimeFormat().resolvedOptions().timeZone || "UTC",
+    unitSystem: "us",
+    lastSpringFrost: `${year}-04-15`,
+    firstFallFrost: `${year}-10-15`,
+    location: "",
+  });
+
+  const onSubmit = submit(async (values) => {
+    const { garden } = await apiFetch<{ garden: { id: string } }>("/api/gardens", { body: values });
+    router.push(`/g/${garden.id}`);
+    router.refresh();
+  });
+
+  return (
+    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4" aria-label="Start a garden">
+      <FormMessage message={formError} />
+      <GardenFields register={form.register} errors={form.formState.errors} />
+      <Button type="submit" pending={form.formState.isSubmitting}>
+        Start this garden
+      </Button>
+    </form>
+  );
+}

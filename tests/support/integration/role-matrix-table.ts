@@ -1,0 +1,396 @@
+import * as accountPassword from "@/app/api/account/password/route";
+import * as account from "@/app/api/account/route";
+import * as devOutbox from "@/app/api/dev/outbox/route";
+import * as resend from "@/app/api/gardens/[gardenId]/invitations/[invitationId]/resend/route";
+import * as invitation from "@/app/api/gardens/[gardenId]/invitations/[invitationId]/route";
+import * as invitations from "@/app/api/gardens/[gardenId]/invitations/route";
+import * as member from "@/app/api/gardens/[gardenId]/members/[userId]/route";
+import * as members from "@/app/api/gardens/[gardenId]/members/route";
+import * as garden from "@/app/api/gardens/[gardenId]/route";
+import * as gardens from "@/app/api/gardens/route";
+import * as health from "@/app/api/health/route";
+import * as accept from "@/app/api/invitations/accept/route";
+import * as resetConfirm from "@/app/api/password-reset/confirm/route";
+import * as resetRequest from "@/app/api/password-reset/route";
+import * as everywhere from "@/app/api/session/everywhere/route";
+import * as session from "@/app/api/session/route";
+import { createInvitation } from "@/db/queries/invitations";
+import { createPasswordReset } from "@/db/queries/password-resets";
+import { createLinkToken } from "@/lib/auth/tokens";
+import {
+  gardenInput,
+  uniqueEmail,
+  type CallOptions,
+  type GardenWorld,
+  type Handler,
+  type TestUser,
+} from "./harness";
+
+// THE role matrix: every API route × every kind of caller → expected status.
+// Later issues add their routes here; role-matrix.test.ts fails for any route
+// file under app/api that has a handler missing from this table.
+
+export const actors = ["signedOut", "viewer", "helper", "grower", "owner", "outsider"] as const;
+export type Actor = (typeof actors)[number];
+
+/** Order the matrix runs callers in: the owner last, so its (often destructive) success comes after the refusals. */
+export const runOrder: Actor[] = ["signedOut", "outsider", "viewer", "helper", "grower", "owner"];
+
+export interface RowContext {
+  world: GardenWorld;
+  actor: Actor;
+  /** The acting person; for signedOut, the bystander (whose e-mail public routes use). */
+  user: TestUser;
+}
+
+export interface MatrixRow {
+  method: "GET" | "POST" | "PATCH" | "DELETE";
+  /** Route file, relative to the repo root: the coverage check matches on it. */
+  file: string;
+  /** Which variant of the call, when one route appears more than once. */
+  variant?: string;
+  handler: Handler;
+  /** True when a 2xx answer must change the database (proves the snapshot can see a change). */
+  mutates: boolean;
+  expect: Record<Actor, number>;
+  /** Builds the call; may set up what it needs (an invitation, a reset token) first. */
+  request: (
+    ctx: RowContext,
+  ) => Promise<Omit<CallOptions, "cookie" | "method">> | Omit<CallOptions, "cookie" | "method">;
+}
+
+// Expected answers, by the rule in lib/auth/require-role.ts: signed out → 401,
+// not a member → 404 (another garden's ids reveal nothing), member below the
+// needed role → 403.
+const everyone = (ok: number) => ({
+  signedOut: ok,
+  viewer: ok,
+  helper: ok,
+  grower: ok,
+  owner: ok,
+  outsider: ok,
+});
+const signedIn = (ok: number) => ({
+  signedOut: 401,
+  viewer: ok,
+  helper: ok,
+  grower: ok,
+  owner: ok,
+  outsider: ok,
+});
+const viewerPlus = {
+  signedOut: 401,
+  viewer: 200,
+  helper: 200,
+  grower: 200,
+  owner: 200,
+  outsider: 404,
+};
+const ownerOnly = (ok: number) => ({
+  signedOut: 401,
+  viewer: 403,
+  helper: 403,
+  grower: 403,
+  owner: ok,
+  outsider: 404,
+});
+
+const g = (ctx: RowContext) => ({ gardenId: ctx.world.gardenId });
+
+async function openInvitation(ctx: RowContext, email = uniqueEmail("invitee")) {
+  const { token, tokenHash } = createLinkToken();
+  const inv = await createInvitation({
+    gardenId: ctx.world.gardenId,
+    email,
+    role: "viewer",
+    tokenHash,
+    invitedBy: ctx.world.owner.id,
+  });
+  return { token, invitationId: inv.id };
+}
+
+export const roleMatrix: MatrixRow[] = [
+  {
+    method: "GET",
+    file: "app/api/health/route.ts",
+    handler: health.GET,
+    mutates: false,
+    expect: everyone(200),
+    request: () => ({ url: "/api/health" }),
+  },
+  {
+    method: "GET",
+    file: "app/api/dev/outbox/route.ts",
+    handler: devOutbox.GET,
+    mutates: false,
+    // Open to anyone, but only while mail is caught locally outside production
+    // (services/mailer.ts isOutboxEnabled); these tests run with NODE_ENV=test.
+    expect: everyone(200),
+    request: () => ({ url: "/api/dev/outbox" }),
+  },
+  {
+    method: "POST",
+    file: "app/api/session/route.ts",
+    variant: "sign in with own password",
+    handler: session.POST,
+    mutates: false,
+    expect: everyone(200),
+    request: ({ user }) => ({
+      url: "/api/session",
+      body: { email: user.email, password: user.password },
+    }),
+  },
+  {
+    method: "DELETE",
+    file: "app/api/session/route.ts",
+    handler: session.DELETE,
+    mutates: false,
+    expect: everyone(200),
+    request: () => ({ url: "/api/session" }),
+  },
+  {
+    method: "POST",
+    file: "app/api/session/everywhere/route.ts",
+    handler: everywhere.POST,
+    mutates: true,
+    expect: signedIn(200),
+    request: () => ({ url: "/api/session/everywhere" }),
+  },
+  {
+    method: "GET",
+    file: "app/api/account/route.ts",
+    handler: account.GET,
+    mutates: false,
+    expect: signedIn(200),
+    request: () => ({ url: "/api/account" }),
+  },
+  {
+    method: "POST",
+    file: "app/api/account/route.ts",
+    variant: "sign up a new address",
+    handler: account.POST,
+    mutates: true,
+    expect: everyone(201),
+    request: () => ({
+      url: "/api/account",
+      body: {
+        name: "New Grower",
+        email: uniqueEmail("newcomer"),
+        password: "a-fresh-bed-of-leaves",
+      },
+    }),
+  },
+  {
+    method: "POST",
+    file: "app/api/account/password/route.ts",
+    variant: "to the same password (keeps the harness login valid)",
+    handler: accountPassword.POST,
+    mutates: true,
+    expect: signedIn(200),
+    request: ({ user }) => ({
+      url: "/api/account/password",
+      body: { currentPassword: user.password, newPassword: user.password },
+    }),
+  },
+  {
+    method: "POST",
+    file: "app/api/password-reset/route.ts",
+    variant: "for a known address",
+    handler: resetRequest.POST,
+    mutates: true,
+    expect: everyone(202),
+    request: ({ user }) => ({ url: "/api/password-reset", body: { email: user.email } }),
+  },
+  {
+    method: "POST",
+    file: "app/api/password-reset/confirm/route.ts",
+    variant: "bystander's fresh token, same password",
+    handler: resetConfirm.POST,
+    mutates: true,
+    expect: everyone(200),
+    request: async ({ world }) => {
+      const { token, tokenHash } = createLinkToken();
+      await createPasswordReset({ userId: world.bystander.id, tokenHash });
+      return {
+        url: "/api/password-reset/confirm",
+        body: { token, newPassword: world.bystander.password },
+      };
+    },
+  },
+  {
+    method: "GET",
+    file: "app/api/gardens/route.ts",
+    handler: gardens.GET,
+    mutates: false,
+    expect: signedIn(200),
+    request: () => ({ url: "/api/gardens" }),
+  },
+  {
+    method: "POST",
+    file: "app/api/gardens/route.ts",
+    handler: gardens.POST,
+    mutates: true,
+    expect: signedIn(201),
+    request: () => ({ url: "/api/gardens", body: gardenInput({ name: "Porch Containers" }) }),
+  },
+  {
+    method: "GET",
+    file: "app/api/gardens/[gardenId]/route.ts",
+    handler: garden.GET,
+    mutates: false,
+    expect: viewerPlus,
+    request: (ctx) => ({ url: `/api/gardens/${ctx.world.gardenId}`, params: g(ctx) }),
+  },
+  {
+    method: "PATCH",
+    file: "app/api/gardens/[gardenId]/route.ts",
+    handler: garden.PATCH,
+    mutates: true,
+    expect: ownerOnly(200),
+    request: (ctx) => ({
+      url: `/api/gardens/${ctx.world.gardenId}`,
+      params: g(ctx),
+      body: { location: "Hollis Street, plot 4 (moved)" },
+    }),
+  },
+  {
+    method: "DELETE",
+    file: "app/api/gardens/[gardenId]/route.ts",
+    variant: "with the exact name",
+    handler: garden.DELETE,
+    mutates: true,
+    expect: ownerOnly(200),
+    request: (ctx) => ({
+      url: `/api/gardens/${ctx.world.gardenId}`,
+      params: g(ctx),
+      body: { confirmName: ctx.world.gardenName },
+    }),
+  },
+  {
+    method: "GET",
+    file: "app/api/gardens/[gardenId]/members/route.ts",
+    handler: members.GET,
+    mutates: false,
+    expect: viewerPlus,
+    request: (ctx) => ({ url: `/api/gardens/${ctx.world.gardenId}/members`, params: g(ctx) }),
+  },
+  {
+    method: "PATCH",
+    file: "app/api/gardens/[gardenId]/members/[userId]/route.ts",
+    variant: "bystander's role → helper",
+    handler: member.PATCH,
+    mutates: true,
+    expect: ownerOnly(200),
+    request: (ctx) => ({
+      url: `/api/gardens/${ctx.world.gardenId}/members/${ctx.world.bystander.id}`,
+      params: { ...g(ctx), userId: ctx.world.bystander.id },
+      body: { role: "helper" },
+    }),
+  },
+  {
+    method: "PATCH",
+    file: "app/api/gardens/[gardenId]/members/[userId]/route.ts",
+    variant: "own role → owner (self-promotion)",
+    handler: member.PATCH,
+    mutates: false,
+    // The owner is already owner: the change is a no-op that still answers 200.
+    expect: { signedOut: 401, viewer: 403, helper: 403, grower: 403, owner: 200, outsider: 404 },
+    request: (ctx) => ({
+      url: `/api/gardens/${ctx.world.gardenId}/members/${ctx.user.id}`,
+      params: { ...g(ctx), userId: ctx.user.id },
+      body: { role: "owner" },
+    }),
+  },
+  {
+    method: "DELETE",
+    file: "app/api/gardens/[gardenId]/members/[userId]/route.ts",
+    variant: "remove someone else (bystander)",
+    handler: member.DELETE,
+    mutates: true,
+    expect: ownerOnly(200),
+    request: (ctx) => ({
+      url: `/api/gardens/${ctx.world.gardenId}/members/${ctx.world.bystander.id}`,
+      params: { ...g(ctx), userId: ctx.world.bystander.id },
+    }),
+  },
+  {
+    method: "DELETE",
+    file: "app/api/gardens/[gardenId]/members/[userId]/route.ts",
+    variant: "leave (remove self)",
+    handler: member.DELETE,
+    mutates: true,
+    // Any member may leave; the only owner may not (the garden would have none).
+    expect: { signedOut: 401, viewer: 200, helper: 200, grower: 200, owner: 409, outsider: 404 },
+    request: (ctx) => ({
+      url: `/api/gardens/${ctx.world.gardenId}/members/${ctx.user.id}`,
+      params: { ...g(ctx), userId: ctx.user.id },
+    }),
+  },
+  {
+    method: "GET",
+    file: "app/api/gardens/[gardenId]/invitations/route.ts",
+    handler: invitations.GET,
+    mutates: false,
+    expect: ownerOnly(200),
+    request: (ctx) => ({ url: `/api/gardens/${ctx.world.gardenId}/invitations`, params: g(ctx) }),
+  },
+  {
+    method: "POST",
+    file: "app/api/gardens/[gardenId]/invitations/route.ts",
+    handler: invitations.POST,
+    mutates: true,
+    expect: ownerOnly(201),
+    request: (ctx) => ({
+      url: `/api/gardens/${ctx.world.gardenId}/invitations`,
+      params: g(ctx),
+      body: { email: uniqueEmail("invitee"), role: "helper" },
+    }),
+  },
+  {
+    method: "DELETE",
+    file: "app/api/gardens/[gardenId]/invitations/[invitationId]/route.ts",
+    handler: invitation.DELETE,
+    mutates: true,
+    expect: ownerOnly(200),
+    request: async (ctx) => {
+      const { invitationId } = await openInvitation(ctx);
+      return {
+        url: `/api/gardens/${ctx.world.gardenId}/invitations/${invitationId}`,
+        params: { ...g(ctx), invitationId },
+      };
+    },
+  },
+  {
+    method: "POST",
+    file: "app/api/gardens/[gardenId]/invitations/[invitationId]/resend/route.ts",
+    handler: resend.POST,
+    mutates: true,
+    expect: ownerOnly(200),
+    request: async (ctx) => {
+      const { invitationId } = await openInvitation(ctx);
+      return {
+        url: `/api/gardens/${ctx.world.gardenId}/invitations/${invitationId}/resend`,
+        params: { ...g(ctx), invitationId },
+      };
+    },
+  },
+  {
+    method: "POST",
+    file: "app/api/invitations/accept/route.ts",
+    variant: "a fresh invitation to this garden",
+    handler: accept.POST,
+    mutates: true,
+    // Not role-gated: whoever holds the link may accept it once signed in.
+    expect: signedIn(200),
+    request: async (ctx) => {
+      const { token } = await openInvitation(ctx);
+      return { url: "/api/invitations/accept", body: { token } };
+    },
+  },
+];
+
+/** Route files deliberately outside the matrix, with the reason. */
+export const matrixExclusions: Record<string, string> = {
+  "app/api/auth/[...nextauth]/route.ts":
+    "Auth.js's own endpoints (CSRF token + form posts); they share verifyCredentials and the throttle with POST /api/session, which the matrix covers.",
+};
