@@ -5,6 +5,7 @@ export const invitationProblems = {
   expired: "This invitation has expired (they last 7 days). Ask the garden's owner to send a new one.",
   used: "This invitation was already used.",
   revoked: "This invitation was withdrawn by the garden's owner.",
+  wrong_account: "This invitation was sent to another e-mail address. Sign in with that address to accept it.",
 } as const;
 
 export const RESET_REQUESTED_MESSAGE =

@@ -1,4 +1,4 @@
-// The bench proper; scripts/bench.ts starts it (see esm-relaunch.ts for why).
+// The bench proper; scripts/bench.ts starts it.
 import { planGarden } from "@/lib/engine/plan";
 import { parseScenario } from "@/lib/validation/scenario";
 import { benchGarden } from "@/scripts/bench-garden";

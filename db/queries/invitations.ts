@@ -114,14 +114,19 @@ export async function getInvitationPreview({ tokenHash }: { tokenHash: string })
 
 export type AcceptOutcome =
   | { ok: true; gardenId: string; role: Role }
-  | { ok: false; reason: "invalid" | "expired" | "used" | "revoked" };
+  | { ok: false; reason: "invalid" | "expired" | "used" | "revoked" | "wrong_account"; invitedEmail?: string };
 
 /**
  * Single use, inside one transaction: the row is locked, checked, marked used
- * and the membership written together. An existing member keeps the higher of
- * their current role and the invited one.
+ * and the membership written together. Only the invited address may accept.
+ * An existing member keeps the higher of their current role and the invited one.
  */
-export async function acceptInvitation(input: { tokenHash: string; userId: string; now?: Date }): Promise<AcceptOutcome> {
+export async function acceptInvitation(input: {
+  tokenHash: string;
+  userId: string;
+  userEmail: string;
+  now?: Date;
+}): Promise<AcceptOutcome> {
   const db = await getDb();
   const now = input.now ?? new Date();
   return db.transaction(async (tx) => {
@@ -135,6 +140,10 @@ export async function acceptInvitation(input: { tokenHash: string; userId: strin
     if (inv.revokedAt) return { ok: false, reason: "revoked" } as const;
     if (inv.acceptedAt) return { ok: false, reason: "used" } as const;
     if (inv.expiresAt.getTime() <= now.getTime()) return { ok: false, reason: "expired" } as const;
+    // A forwarded or leaked link must not let another account join (least of all as owner).
+    if (inv.email !== input.userEmail.trim().toLowerCase()) {
+      return { ok: false, reason: "wrong_account", invitedEmail: inv.email } as const;
+    }
 
     const [current] = await tx
       .select({ role: memberships.role })

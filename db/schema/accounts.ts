@@ -40,3 +40,18 @@ export const signInAttempts = pgTable(
   },
   (t) => [index("sign_in_attempts_key_time_idx").on(t.throttleKey, t.attemptedAt)],
 );
+
+// Sessions ended by "sign out" on one device. The cookie is a self-contained
+// token, so the server keeps its id here until it would have expired anyway.
+export const endedSessions = pgTable(
+  "ended_sessions",
+  {
+    tokenId: text("token_id").primaryKey(),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
+    endedAt: timestamp("ended_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("ended_sessions_expiry_idx").on(t.expiresAt)],
+);

@@ -1,5 +1,6 @@
 import "server-only";
 import { decode, encode } from "next-auth/jwt";
+import { endSession, isSessionEnded } from "@/db/queries/sessions";
 import { getUserById, type UserDto } from "@/db/queries/users";
 import { AppError } from "@/lib/errors";
 import { readCookie, SESSION_COOKIE, SESSION_MAX_AGE_SECONDS, serializeCookie } from "./cookies";
@@ -12,6 +13,8 @@ import { getAuthSecret } from "./secret";
 interface SessionClaims {
   sub: string;
   sv: number;
+  jti?: string;
+  exp?: number;
 }
 
 export async function issueSessionCookie(user: UserDto): Promise<string> {
@@ -33,7 +36,12 @@ async function claimsFrom(token: string | undefined): Promise<SessionClaims | nu
   try {
     const payload = await decode({ token, secret: getAuthSecret(), salt: SESSION_COOKIE });
     if (!payload || typeof payload.sub !== "string") return null;
-    return { sub: payload.sub, sv: typeof payload.sv === "number" ? payload.sv : -1 };
+    return {
+      sub: payload.sub,
+      sv: typeof payload.sv === "number" ? payload.sv : -1,
+      jti: typeof payload.jti === "string" ? payload.jti : undefined,
+      exp: typeof payload.exp === "number" ? payload.exp : undefined,
+    };
   } catch {
     return null;
   }
@@ -43,6 +51,8 @@ async function claimsFrom(token: string | undefined): Promise<SessionClaims | nu
 export async function userFromSessionToken(token: string | undefined): Promise<UserDto | null> {
   const claims = await claimsFrom(token);
   if (!claims) return null;
+  // Signed out on this device: the token id was recorded as ended.
+  if (!claims.jti || (await isSessionEnded({ tokenId: claims.jti }))) return null;
   const user = await getUserById({ userId: claims.sub });
   // A password change or "sign out everywhere" bumped the version: this token is dead.
   if (!user || user.sessionVersion !== claims.sv) return null;
@@ -55,6 +65,16 @@ export function sessionTokenFromRequest(request: Request): string | undefined {
 
 export async function getRequestUser(request: Request): Promise<UserDto | null> {
   return userFromSessionToken(sessionTokenFromRequest(request));
+}
+
+/** Ends the session this request carries, on the server as well as in the browser (ASVS 7.4.1). */
+export async function endRequestSession(request: Request): Promise<void> {
+  const token = sessionTokenFromRequest(request);
+  const claims = await claimsFrom(token);
+  // Nothing to end for a token that is already dead (or names a deleted user).
+  if (!claims?.jti || !(await userFromSessionToken(token))) return;
+  const expiresAt = new Date((claims.exp ?? Date.now() / 1000 + SESSION_MAX_AGE_SECONDS) * 1000);
+  await endSession({ tokenId: claims.jti, userId: claims.sub, expiresAt });
 }
 
 export async function requireUser(request: Request): Promise<UserDto> {

@@ -163,6 +163,19 @@ describe("sessions", () => {
     await expect(signIn(user.email, "a-new-tray-of-bedding")).resolves.toBeTruthy();
   });
 
+  it("signing out ends that session on the server, even for a copied cookie; others live on", async () => {
+    const user = await signUpUser("signout");
+    const laptop = await signIn(user.email, user.password);
+    const phone = await signIn(user.email, user.password);
+    const copied = laptop;
+    const res = await call(session.DELETE, { method: "DELETE", url: "/api/session", cookie: laptop });
+    expect(res.status).toBe(200);
+    expect(res.setCookie).toMatch(/Max-Age=0/);
+    // ASVS 7.4.1 (from memory): sign-out must end the session server-side, not only clear the cookie.
+    expect((await me(copied)).status).toBe(401);
+    expect((await me(phone)).status).toBe(200);
+  });
+
   it("sign out everywhere ends every session, including this one", async () => {
     const user = await signUpUser("everywhere");
     const a = await signIn(user.email, user.password);

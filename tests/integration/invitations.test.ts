@@ -83,6 +83,16 @@ describe("invitations", () => {
     expect(await membershipRole(g.gardenId, world.outsider.id)).toBe("helper");
   });
 
+  it("refuses a link used by an account with another address (403) and adds nobody", async () => {
+    const g = await makeGardenWithRoles(world);
+    const { token } = await invite(g.gardenId, uniqueEmail("intended"), "owner");
+    const before = await snapshotDb();
+    const res = await acceptAs(await cookieFor(world.outsider), token);
+    expect(res.status).toBe(403);
+    expect(res.json.error.code).toBe("forbidden:invitation_wrong_account");
+    expect(await snapshotDb()).toBe(before);
+  });
+
   it("refuses an expired invitation with 410 and adds nobody", async () => {
     const g = await makeGardenWithRoles(world);
     const { token } = await invite(g.gardenId, uniqueEmail("slow"), "viewer");

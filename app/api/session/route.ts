@@ -1,5 +1,5 @@
 import { verifyCredentials } from "@/lib/auth/credentials";
-import { clearSessionCookie, issueSessionCookie } from "@/lib/auth/session";
+import { clearSessionCookie, endRequestSession, issueSessionCookie } from "@/lib/auth/session";
 import { clientAddress } from "@/lib/auth/throttle";
 import { parseJson, route } from "@/lib/http";
 import { signInSchema } from "@/lib/validation/auth";
@@ -14,7 +14,8 @@ export const POST = route(async (request) => {
   );
 });
 
-// Sign out of this browser.
-export const DELETE = route(async () => {
+// Sign out of this browser: the token stops working on the server too, even if copied.
+export const DELETE = route(async (request) => {
+  await endRequestSession(request);
   return Response.json({ ok: true }, { headers: { "Set-Cookie": clearSessionCookie() } });
 });

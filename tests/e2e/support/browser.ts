@@ -35,7 +35,7 @@ export async function openBrowser(options: { width?: number; height?: number } =
   const page = context.pages()[0] ?? (await context.newPage());
   const problems: string[] = [];
   page.on("console", (msg) => {
-    if (msg.type() === "error") problems.push(msg.text());
+    if (msg.type() === "error") problems.push(`${msg.text()} at ${msg.location().url}`);
   });
   page.on("pageerror", (err) => problems.push(err.message));
   return {

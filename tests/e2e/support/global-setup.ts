@@ -55,7 +55,9 @@ export async function setup(project: TestProject) {
   const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), "castline-e2e-"));
   const port = await freePort();
   let output = "";
-  server = spawn("npx", ["next", "start", "--port", String(port), "--hostname", "127.0.0.1"], {
+  // Node runs Next directly (not through npx) so SIGTERM reaches the server itself.
+  const nextBin = path.join(root, "node_modules", "next", "dist", "bin", "next");
+  server = spawn(process.execPath, [nextBin, "start", "--port", String(port), "--hostname", "127.0.0.1"], {
     cwd: root,
     env: {
       ...process.env,

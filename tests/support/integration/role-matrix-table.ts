@@ -380,10 +380,11 @@ export const roleMatrix: MatrixRow[] = [
     variant: "a fresh invitation to this garden",
     handler: accept.POST,
     mutates: true,
-    // Not role-gated: whoever holds the link may accept it once signed in.
+    // Not role-gated: the invited address may accept once signed in (any role,
+    // or none yet). Addressed to the caller; other addresses get 403 (invitations.test.ts).
     expect: signedIn(200),
     request: async (ctx) => {
-      const { token } = await openInvitation(ctx);
+      const { token } = await openInvitation(ctx, ctx.user.email);
       return { url: "/api/invitations/accept", body: { token } };
     },
   },

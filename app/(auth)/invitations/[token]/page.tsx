@@ -36,13 +36,19 @@ export default async function InvitationPage({ params }: { params: Promise<{ tok
             <p>
               You are invited as <strong>{roleLabels[invitation.role]}</strong>: {roleDescriptions[invitation.role].toLowerCase()}.
             </p>
-            {user ? (
+            {user && user.email !== invitation.email ? (
+              <Alert tone="caution">
+                You are signed in as {user.email}, but this invitation is for {invitation.email}.{" "}
+                {invitationProblems.wrong_account}
+              </Alert>
+            ) : user ? (
               <>
                 <p className="text-sm text-soil-700">Signed in as {user.email}.</p>
                 <AcceptInvitationButton token={token} gardenName={invitation.gardenName} />
               </>
             ) : (
               <div className="flex flex-wrap gap-3">
+                <p className="w-full text-sm text-soil-700">This invitation is for {invitation.email}.</p>
                 <Link className={buttonStyles({ variant: "primary" })} href={`/sign-up?next=${encodeURIComponent(here)}`}>
                   Make an account to join
                 </Link>
