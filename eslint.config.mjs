@@ -3,13 +3,25 @@ import nextTypescript from "eslint-config-next/typescript";
 import prettier from "eslint-config-prettier";
 
 const config = [
-  { ignores: [".next/**", "node_modules/**", ".data/**", "db/migrations/**", "next-env.d.ts", "coverage/**"] },
+  {
+    ignores: [
+      ".next/**",
+      "node_modules/**",
+      ".data/**",
+      "db/migrations/**",
+      "next-env.d.ts",
+      "coverage/**",
+    ],
+  },
   ...nextCoreWebVitals,
   ...nextTypescript,
   prettier,
   {
     rules: {
-      "@typescript-eslint/no-unused-vars": ["error", { argsIgnorePattern: "^_", varsIgnorePattern: "^_" }],
+      "@typescript-eslint/no-unused-vars": [
+        "error",
+        { argsIgnorePattern: "^_", varsIgnorePattern: "^_" },
+      ],
     },
   },
   {
@@ -18,7 +30,9 @@ const config = [
     rules: {
       "no-restricted-imports": [
         "error",
-        { patterns: ["@/db", "@/db/*", "@/services/*", "react", "next", "next/*", "node:fs", "fs"] },
+        {
+          patterns: ["@/db", "@/db/*", "@/services/*", "react", "next", "next/*", "node:fs", "fs"],
+        },
       ],
     },
   },

@@ -29,11 +29,13 @@ export default async function LandingPage() {
     <main className="mx-auto flex max-w-4xl flex-col gap-10 px-4 py-10 sm:py-16">
       <header className="flex flex-col gap-4">
         <p className="font-display text-2xl text-leaf-800">Castline</p>
-        <h1 className="text-4xl leading-tight sm:text-5xl">Feed your garden from your worm bins, on a plan.</h1>
+        <h1 className="text-4xl leading-tight sm:text-5xl">
+          Feed your garden from your worm bins, on a plan.
+        </h1>
         <p className="max-w-2xl text-lg text-soil-700">
-          For home growers, allotment holders and community gardens that make their own fertilizer. Castline
-          forecasts what your bins produce, plans which beds get how much and when, and tells you early when
-          there will not be enough.
+          For home growers, allotment holders and community gardens that make their own fertilizer.
+          Castline forecasts what your bins produce, plans which beds get how much and when, and
+          tells you early when there will not be enough.
         </p>
         <div className="flex flex-wrap gap-3">
           {user ? (

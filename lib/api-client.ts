@@ -13,7 +13,10 @@ export class ApiError extends Error {
   }
 }
 
-export async function apiFetch<T>(url: string, init: { method?: string; body?: unknown } = {}): Promise<T> {
+export async function apiFetch<T>(
+  url: string,
+  init: { method?: string; body?: unknown } = {},
+): Promise<T> {
   let response: Response;
   try {
     response = await fetch(url, {
@@ -23,14 +26,23 @@ export async function apiFetch<T>(url: string, init: { method?: string; body?: u
       credentials: "same-origin",
     });
   } catch {
-    throw new ApiError(0, "network", "Could not reach Castline. Check your connection and try again.");
+    throw new ApiError(
+      0,
+      "network",
+      "Could not reach Castline. Check your connection and try again.",
+    );
   }
   const data = (await response.json().catch(() => ({}))) as {
     error?: { code: string; message: string; fields?: Record<string, string> };
   };
   if (!response.ok) {
     const e = data.error;
-    throw new ApiError(response.status, e?.code ?? "internal", e?.message ?? "Something went wrong.", e?.fields);
+    throw new ApiError(
+      response.status,
+      e?.code ?? "internal",
+      e?.message ?? "Something went wrong.",
+      e?.fields,
+    );
   }
   return data as T;
 }

@@ -22,9 +22,13 @@ export function route<P = Record<string, string>>(
 const MAX_BODY_BYTES = 1_000_000;
 
 /** Reads a JSON body and validates it; malformed JSON is a 400, never a stack trace. */
-export async function parseJson<S extends z.ZodType>(request: Request, schema: S): Promise<z.infer<S>> {
+export async function parseJson<S extends z.ZodType>(
+  request: Request,
+  schema: S,
+): Promise<z.infer<S>> {
   const text = await request.text();
-  if (text.length > MAX_BODY_BYTES) throw new AppError("bad_request:too_large", "The request is too large.");
+  if (text.length > MAX_BODY_BYTES)
+    throw new AppError("bad_request:too_large", "The request is too large.");
   let data: unknown;
   try {
     data = text.length ? JSON.parse(text) : {};

@@ -27,6 +27,9 @@ export async function deliverInvitation(input: {
     timeZone: garden.timeZone,
   });
   const result = await trySend({ to: input.invitation.email, ...mail });
-  await setInvitationMailStatus({ invitationId: input.invitation.id, status: result.sent ? "sent" : "failed" });
+  await setInvitationMailStatus({
+    invitationId: input.invitation.id,
+    status: result.sent ? "sent" : "failed",
+  });
   return result.sent;
 }

@@ -2,10 +2,12 @@
 
 export const invitationProblems = {
   invalid: "This invitation link is not valid.",
-  expired: "This invitation has expired (they last 7 days). Ask the garden's owner to send a new one.",
+  expired:
+    "This invitation has expired (they last 7 days). Ask the garden's owner to send a new one.",
   used: "This invitation was already used.",
   revoked: "This invitation was withdrawn by the garden's owner.",
-  wrong_account: "This invitation was sent to another e-mail address. Sign in with that address to accept it.",
+  wrong_account:
+    "This invitation was sent to another e-mail address. Sign in with that address to accept it.",
 } as const;
 
 export const RESET_REQUESTED_MESSAGE =

@@ -43,7 +43,9 @@ export async function startLocalMailIfNeeded(): Promise<void> {
 }
 
 /** Sends and reports instead of throwing, so callers can save first and offer "resend". */
-export async function trySend(message: OutgoingMail): Promise<{ sent: true; messageId: string } | { sent: false }> {
+export async function trySend(
+  message: OutgoingMail,
+): Promise<{ sent: true; messageId: string } | { sent: false }> {
   try {
     const { messageId } = await getMailer().send(message);
     return { sent: true, messageId };

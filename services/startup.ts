@@ -20,7 +20,9 @@ export async function startServer(): Promise<void> {
     await ensureStarterCrops(db);
     if (env.CASTLINE_DEMO) {
       const { created } = await seedDemoGarden(db);
-      console.log(created ? "[castline] demo garden loaded" : "[castline] demo garden already present");
+      console.log(
+        created ? "[castline] demo garden loaded" : "[castline] demo garden already present",
+      );
     }
     await startLocalMailIfNeeded();
     installShutdownHandlers();

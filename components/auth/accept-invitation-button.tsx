@@ -6,7 +6,13 @@ import { FormMessage } from "@/components/forms/form-message";
 import { Button } from "@/components/ui";
 import { apiFetch, ApiError } from "@/lib/api-client";
 
-export function AcceptInvitationButton({ token, gardenName }: { token: string; gardenName: string }) {
+export function AcceptInvitationButton({
+  token,
+  gardenName,
+}: {
+  token: string;
+  gardenName: string;
+}) {
   const router = useRouter();
   const [pending, setPending] = useState(false);
   const [error, setError] = useState<string | null>(null);
@@ -15,7 +21,9 @@ export function AcceptInvitationButton({ token, gardenName }: { token: string; g
     setPending(true);
     setError(null);
     try {
-      const { gardenId } = await apiFetch<{ gardenId: string }>("/api/invitations/accept", { body: { token } });
+      const { gardenId } = await apiFetch<{ gardenId: string }>("/api/invitations/accept", {
+        body: { token },
+      });
       router.replace(`/g/${gardenId}`);
       router.refresh();
     } catch (e) {

@@ -19,7 +19,12 @@ export function ForgotPasswordForm() {
 
   if (done) return <Alert tone="info">{done}</Alert>;
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4" aria-label="Reset password">
+    <form
+      onSubmit={onSubmit}
+      noValidate
+      className="flex flex-col gap-4"
+      aria-label="Reset password"
+    >
       <FormMessage message={formError} />
       <Field label="E-mail" error={formState.errors.email?.message}>
         <Input type="email" autoComplete="email" inputMode="email" {...register("email")} />

@@ -14,7 +14,9 @@ export function ResetPasswordForm({ token }: { token: string }) {
   const { register, formState } = form;
 
   const onSubmit = submit(async (values) => {
-    const result = await apiFetch<{ message: string }>("/api/password-reset/confirm", { body: values });
+    const result = await apiFetch<{ message: string }>("/api/password-reset/confirm", {
+      body: values,
+    });
     setDone(result.message);
   });
 
@@ -29,10 +31,19 @@ export function ResetPasswordForm({ token }: { token: string }) {
     );
   }
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4" aria-label="Choose a new password">
+    <form
+      onSubmit={onSubmit}
+      noValidate
+      className="flex flex-col gap-4"
+      aria-label="Choose a new password"
+    >
       <FormMessage message={formError ?? formState.errors.token?.message ?? null} />
       <input type="hidden" {...register("token")} />
-      <Field label="New password" hint="At least 8 characters." error={formState.errors.newPassword?.message}>
+      <Field
+        label="New password"
+        hint="At least 8 characters."
+        error={formState.errors.newPassword?.message}
+      >
         <Input type="password" autoComplete="new-password" {...register("newPassword")} />
       </Field>
       <Button type="submit" pending={formState.isSubmitting}>

@@ -11,7 +11,11 @@ import { PASSWORD_MIN } from "@/lib/validation/password";
 
 export function SignUpForm({ next }: { next: string }) {
   const router = useRouter();
-  const { form, formError, submit } = useApiForm(signUpSchema, { name: "", email: "", password: "" });
+  const { form, formError, submit } = useApiForm(signUpSchema, {
+    name: "",
+    email: "",
+    password: "",
+  });
   const { register, formState } = form;
 
   const onSubmit = submit(async (values) => {
@@ -21,7 +25,12 @@ export function SignUpForm({ next }: { next: string }) {
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4" aria-label="Make an account">
+    <form
+      onSubmit={onSubmit}
+      noValidate
+      className="flex flex-col gap-4"
+      aria-label="Make an account"
+    >
       <FormMessage message={formError} />
       <Field label="Your name" error={formState.errors.name?.message}>
         <Input autoComplete="name" {...register("name")} />

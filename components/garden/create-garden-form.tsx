@@ -27,7 +27,12 @@ export function CreateGardenForm() {
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4" aria-label="Start a garden">
+    <form
+      onSubmit={onSubmit}
+      noValidate
+      className="flex flex-col gap-4"
+      aria-label="Start a garden"
+    >
       <FormMessage message={formError} />
       <GardenFields register={form.register} errors={form.formState.errors} />
       <Button type="submit" pending={form.formState.isSubmitting}>

@@ -14,11 +14,17 @@ export function DeleteGarden({ gardenId, gardenName }: { gardenId: string; garde
   async function confirm() {
     setPending(true);
     try {
-      await apiFetch(`/api/gardens/${gardenId}`, { method: "DELETE", body: { confirmName: gardenName } });
+      await apiFetch(`/api/gardens/${gardenId}`, {
+        method: "DELETE",
+        body: { confirmName: gardenName },
+      });
       router.replace("/gardens");
       router.refresh();
     } catch (e) {
-      toast.show({ title: e instanceof ApiError ? e.message : "The garden was not deleted.", tone: "danger" });
+      toast.show({
+        title: e instanceof ApiError ? e.message : "The garden was not deleted.",
+        tone: "danger",
+      });
       setPending(false);
       setOpen(false);
     }
@@ -38,7 +44,8 @@ export function DeleteGarden({ gardenId, gardenName }: { gardenId: string; garde
         onCancel={() => setOpen(false)}
         onConfirm={confirm}
       >
-        This removes its beds, plantings, bins, stock, logs and calendar links for every member. It cannot be undone.
+        This removes its beds, plantings, bins, stock, logs and calendar links for every member. It
+        cannot be undone.
       </ConfirmDialog>
     </>
   );

@@ -36,7 +36,11 @@ export function GardenFields({
         <Input autoComplete="off" {...register("name")} />
       </Field>
       <div className="grid gap-4 sm:grid-cols-2">
-        <Field label="Time zone" hint="Reminders go out on this clock." error={errors.timeZone?.message}>
+        <Field
+          label="Time zone"
+          hint="Reminders go out on this clock."
+          error={errors.timeZone?.message}
+        >
           <Select {...register("timeZone")}>
             {commonZones.map((z) => (
               <option key={z} value={z}>
@@ -51,14 +55,26 @@ export function GardenFields({
             <option value="metric">Metric (kg, litres, m²)</option>
           </Select>
         </Field>
-        <Field label="Last spring frost" hint="Usual date; feeding starts after it." error={errors.lastSpringFrost?.message}>
+        <Field
+          label="Last spring frost"
+          hint="Usual date; feeding starts after it."
+          error={errors.lastSpringFrost?.message}
+        >
           <Input type="date" {...register("lastSpringFrost")} />
         </Field>
-        <Field label="First fall frost" hint="Outdoor feeding stops here." error={errors.firstFallFrost?.message}>
+        <Field
+          label="First fall frost"
+          hint="Outdoor feeding stops here."
+          error={errors.firstFallFrost?.message}
+        >
           <Input type="date" {...register("firstFallFrost")} />
         </Field>
       </div>
-      <Field label="Where is it?" hint="Optional, e.g. “Plot 14, Elm Road allotments”." error={errors.location?.message}>
+      <Field
+        label="Where is it?"
+        hint="Optional, e.g. “Plot 14, Elm Road allotments”."
+        error={errors.location?.message}
+      >
         <Input {...register("location")} />
       </Field>
     </>

@@ -8,7 +8,13 @@ import { apiFetch } from "@/lib/api-client";
 import { createGardenSchema, type CreateGardenInput } from "@/lib/validation/garden";
 import { GardenFields } from "./garden-fields";
 
-export function GardenSettingsForm({ gardenId, initial }: { gardenId: string; initial: CreateGardenInput }) {
+export function GardenSettingsForm({
+  gardenId,
+  initial,
+}: {
+  gardenId: string;
+  initial: CreateGardenInput;
+}) {
   const router = useRouter();
   const toast = useToast();
   const { form, formError, submit } = useApiForm(createGardenSchema, initial);
@@ -21,10 +27,19 @@ export function GardenSettingsForm({ gardenId, initial }: { gardenId: string; in
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4" aria-label="Garden settings">
+    <form
+      onSubmit={onSubmit}
+      noValidate
+      className="flex flex-col gap-4"
+      aria-label="Garden settings"
+    >
       <FormMessage message={formError} />
       <GardenFields register={form.register} errors={form.formState.errors} />
-      <Button type="submit" pending={form.formState.isSubmitting} disabled={!form.formState.isDirty}>
+      <Button
+        type="submit"
+        pending={form.formState.isSubmitting}
+        disabled={!form.formState.isDirty}
+      >
         Save settings
       </Button>
     </form>

@@ -16,16 +16,24 @@ export function InviteForm({ gardenId }: { gardenId: string }) {
   const { register, formState } = form;
 
   const onSubmit = submit(async (values) => {
-    const result = await apiFetch<{ mailSent: boolean; message: string }>(`/api/gardens/${gardenId}/invitations`, {
-      body: values,
-    });
+    const result = await apiFetch<{ mailSent: boolean; message: string }>(
+      `/api/gardens/${gardenId}/invitations`,
+      {
+        body: values,
+      },
+    );
     toast.show({ title: result.message, tone: result.mailSent ? "positive" : "danger" });
     form.reset({ email: "", role: values.role });
     await queryClient.invalidateQueries({ queryKey: queryKeys.invitations(gardenId) });
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4" aria-label="Invite someone">
+    <form
+      onSubmit={onSubmit}
+      noValidate
+      className="flex flex-col gap-4"
+      aria-label="Invite someone"
+    >
       <FormMessage message={formError} />
       <div className="grid gap-4 sm:grid-cols-[2fr_1fr]">
         <Field label="Their e-mail" error={formState.errors.email?.message}>

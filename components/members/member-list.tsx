@@ -33,7 +33,8 @@ export function MemberList({
     queryFn: () => apiFetch<{ members: Member[] }>(`/api/gardens/${gardenId}/members`),
     initialData: { members: initial },
   });
-  const onError = (e: unknown) => toast.show({ title: e instanceof ApiError ? e.message : "That did not work.", tone: "danger" });
+  const onError = (e: unknown) =>
+    toast.show({ title: e instanceof ApiError ? e.message : "That did not work.", tone: "danger" });
 
   const changeRole = useMutation({
     mutationFn: ({ userId, role }: { userId: string; role: Role }) =>
@@ -48,7 +49,8 @@ export function MemberList({
     },
   });
   const remove = useMutation({
-    mutationFn: (userId: string) => apiFetch(`/api/gardens/${gardenId}/members/${userId}`, { method: "DELETE" }),
+    mutationFn: (userId: string) =>
+      apiFetch(`/api/gardens/${gardenId}/members/${userId}`, { method: "DELETE" }),
     onSuccess: (_r, userId) => {
       setRemoving(null);
       if (userId === meId) {
@@ -72,7 +74,8 @@ export function MemberList({
           <li key={m.userId} className="flex flex-wrap items-center gap-3 py-3">
             <span className="flex flex-col">
               <span className="font-semibold">
-                {m.name} {m.userId === meId ? <span className="text-sm font-normal">(you)</span> : null}
+                {m.name}{" "}
+                {m.userId === meId ? <span className="text-sm font-normal">(you)</span> : null}
               </span>
               <span className="text-sm text-soil-700">{m.email}</span>
             </span>
@@ -82,7 +85,9 @@ export function MemberList({
                   aria-label={`Role of ${m.name}`}
                   value={m.role}
                   disabled={changeRole.isPending}
-                  onChange={(e) => changeRole.mutate({ userId: m.userId, role: e.target.value as Role })}
+                  onChange={(e) =>
+                    changeRole.mutate({ userId: m.userId, role: e.target.value as Role })
+                  }
                 >
                   {[...roles].reverse().map((r) => (
                     <option key={r} value={r}>
@@ -104,7 +109,9 @@ export function MemberList({
       </ul>
       <ConfirmDialog
         open={removing !== null}
-        title={removing?.userId === meId ? `Leave ${gardenName}?` : `Remove ${removing?.name ?? ""}?`}
+        title={
+          removing?.userId === meId ? `Leave ${gardenName}?` : `Remove ${removing?.name ?? ""}?`
+        }
         confirmLabel={removing?.userId === meId ? "Leave garden" : "Remove member"}
         pending={remove.isPending}
         onCancel={() => setRemoving(null)}

@@ -19,7 +19,10 @@ export function AppHeader({
         </Link>
         <GardenSwitcher gardens={gardens} currentId={currentGardenId} />
         <div className="ml-auto flex items-center gap-1">
-          <Link href="/account" className="rounded-control px-3 py-2 text-sm underline-offset-4 hover:underline">
+          <Link
+            href="/account"
+            className="rounded-control px-3 py-2 text-sm underline-offset-4 hover:underline"
+          >
             {userName}
           </Link>
           <SignOutButton />

@@ -32,7 +32,9 @@ export function GardenNav({ gardenId, role }: { gardenId: string; role: Role }) 
                   aria-current={active ? "page" : undefined}
                   className={cn(
                     "inline-flex min-h-11 items-center px-3 font-semibold",
-                    active ? "border-b-4 border-leaf-700 text-leaf-900" : "text-soil-700 hover:text-soil-900",
+                    active
+                      ? "border-b-4 border-leaf-700 text-leaf-900"
+                      : "text-soil-700 hover:text-soil-900",
                   )}
                 >
                   {s.label}

@@ -6,7 +6,13 @@ import { Select } from "@/components/ui";
 type GardenOption = { id: string; name: string };
 
 /** Jumps between the gardens a person belongs to (their plot, a community garden…). */
-export function GardenSwitcher({ gardens, currentId }: { gardens: GardenOption[]; currentId?: string }) {
+export function GardenSwitcher({
+  gardens,
+  currentId,
+}: {
+  gardens: GardenOption[];
+  currentId?: string;
+}) {
   const router = useRouter();
   if (gardens.length === 0) return null;
   return (

@@ -7,7 +7,11 @@ import { beds, bins, memberships, plantings } from "@/db/schema";
 export async function getGardenSummary({ gardenId }: { gardenId: string }) {
   const db = await getDb();
   const [bedRows, binRows, plantingRows, memberRows] = await Promise.all([
-    db.select({ kind: beds.kind, n: count() }).from(beds).where(eq(beds.gardenId, gardenId)).groupBy(beds.kind),
+    db
+      .select({ kind: beds.kind, n: count() })
+      .from(beds)
+      .where(eq(beds.gardenId, gardenId))
+      .groupBy(beds.kind),
     db
       .select({ n: count() })
       .from(bins)

@@ -30,7 +30,11 @@ export type GardenDto = {
 
 export async function getGardenById({ gardenId }: { gardenId: string }): Promise<GardenDto | null> {
   const db = await getDb();
-  const [row] = await db.select(gardenColumns).from(gardens).where(eq(gardens.id, gardenId)).limit(1);
+  const [row] = await db
+    .select(gardenColumns)
+    .from(gardens)
+    .where(eq(gardens.id, gardenId))
+    .limit(1);
   return row ?? null;
 }
 

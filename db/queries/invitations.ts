@@ -55,17 +55,33 @@ export async function createInvitation(input: {
   return row!;
 }
 
-export async function listOpenInvitations({ gardenId }: { gardenId: string }): Promise<InvitationDto[]> {
+export async function listOpenInvitations({
+  gardenId,
+}: {
+  gardenId: string;
+}): Promise<InvitationDto[]> {
   const db = await getDb();
   return db
     .select(invitationColumns)
     .from(invitations)
-    .where(and(eq(invitations.gardenId, gardenId), isNull(invitations.acceptedAt), isNull(invitations.revokedAt)))
+    .where(
+      and(
+        eq(invitations.gardenId, gardenId),
+        isNull(invitations.acceptedAt),
+        isNull(invitations.revokedAt),
+      ),
+    )
     .orderBy(desc(invitations.createdAt))
     .limit(200);
 }
 
-export async function getInvitation({ gardenId, invitationId }: { gardenId: string; invitationId: string }) {
+export async function getInvitation({
+  gardenId,
+  invitationId,
+}: {
+  gardenId: string;
+  invitationId: string;
+}) {
   const db = await getDb();
   const [row] = await db
     .select(invitationColumns)
@@ -76,26 +92,52 @@ export async function getInvitation({ gardenId, invitationId }: { gardenId: stri
 }
 
 /** A resend gets a fresh token and a fresh 7 days; the old link stops working. */
-export async function renewInvitationToken(input: { invitationId: string; tokenHash: string; now?: Date }) {
+export async function renewInvitationToken(input: {
+  invitationId: string;
+  tokenHash: string;
+  now?: Date;
+}) {
   const db = await getDb();
   const now = input.now ?? new Date();
   await db
     .update(invitations)
-    .set({ tokenHash: input.tokenHash, expiresAt: new Date(now.getTime() + INVITATION_TTL_MS), mailStatus: "pending" })
+    .set({
+      tokenHash: input.tokenHash,
+      expiresAt: new Date(now.getTime() + INVITATION_TTL_MS),
+      mailStatus: "pending",
+    })
     .where(eq(invitations.id, input.invitationId));
 }
 
-export async function setInvitationMailStatus(input: { invitationId: string; status: "sent" | "failed" }) {
+export async function setInvitationMailStatus(input: {
+  invitationId: string;
+  status: "sent" | "failed";
+}) {
   const db = await getDb();
-  await db.update(invitations).set({ mailStatus: input.status }).where(eq(invitations.id, input.invitationId));
+  await db
+    .update(invitations)
+    .set({ mailStatus: input.status })
+    .where(eq(invitations.id, input.invitationId));
 }
 
-export async function revokeInvitation({ gardenId, invitationId }: { gardenId: string; invitationId: string }) {
+export async function revokeInvitation({
+  gardenId,
+  invitationId,
+}: {
+  gardenId: string;
+  invitationId: string;
+}) {
   const db = await getDb();
   const rows = await db
     .update(invitations)
     .set({ revokedAt: new Date() })
-    .where(and(eq(invitations.gardenId, gardenId), eq(invitations.id, invitationId), isNull(invitations.acceptedAt)))
+    .where(
+      and(
+        eq(invitations.gardenId, gardenId),
+        eq(invitations.id, invitationId),
+        isNull(invitations.acceptedAt),
+      ),
+    )
     .returning({ id: invitations.id });
   return rows.length > 0;
 }
@@ -114,7 +156,11 @@ export async function getInvitationPreview({ tokenHash }: { tokenHash: string })
 
 export type AcceptOutcome =
   | { ok: true; gardenId: string; role: Role }
-  | { ok: false; reason: "invalid" | "expired" | "used" | "revoked" | "wrong_account"; invitedEmail?: string };
+  | {
+      ok: false;
+      reason: "invalid" | "expired" | "used" | "revoked" | "wrong_account";
+      invitedEmail?: string;
+    };
 
 /**
  * Single use, inside one transaction: the row is locked, checked, marked used

@@ -35,7 +35,13 @@ export async function listGardensForUser({ userId }: { userId: string }) {
 export async function listMembers({ gardenId }: { gardenId: string }) {
   const db = await getDb();
   return db
-    .select({ userId: users.id, name: users.name, email: users.email, role: memberships.role, since: memberships.createdAt })
+    .select({
+      userId: users.id,
+      name: users.name,
+      email: users.email,
+      role: memberships.role,
+      since: memberships.createdAt,
+    })
     .from(memberships)
     .innerJoin(users, eq(users.id, memberships.userId))
     .where(eq(memberships.gardenId, gardenId))
@@ -59,14 +65,19 @@ export type MemberChangeOutcome = { ok: true } | { ok: false; reason: "not_membe
  * memberships, so two owners demoting each other at once cannot leave the
  * garden with none.
  */
-export async function changeMemberRole(input: { gardenId: string; userId: string; role: Role }): Promise<MemberChangeOutcome> {
+export async function changeMemberRole(input: {
+  gardenId: string;
+  userId: string;
+  role: Role;
+}): Promise<MemberChangeOutcome> {
   const db = await getDb();
   return db.transaction(async (tx) => {
     const rows = await lockMemberships(tx, input.gardenId);
     const target = rows.find((r) => r.userId === input.userId);
     if (!target) return { ok: false, reason: "not_member" } as const;
     const owners = rows.filter((r) => r.role === "owner").length;
-    if (target.role === "owner" && input.role !== "owner" && owners <= 1) return { ok: false, reason: "last_owner" } as const;
+    if (target.role === "owner" && input.role !== "owner" && owners <= 1)
+      return { ok: false, reason: "last_owner" } as const;
     await tx
       .update(memberships)
       .set({ role: input.role })
@@ -75,7 +86,10 @@ export async function changeMemberRole(input: { gardenId: string; userId: string
   });
 }
 
-export async function removeMember(input: { gardenId: string; userId: string }): Promise<MemberChangeOutcome> {
+export async function removeMember(input: {
+  gardenId: string;
+  userId: string;
+}): Promise<MemberChangeOutcome> {
   const db = await getDb();
   return db.transaction(async (tx) => {
     const rows = await lockMemberships(tx, input.gardenId);

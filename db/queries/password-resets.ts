@@ -5,7 +5,11 @@ import { passwordResetTokens, users } from "@/db/schema";
 
 export const RESET_TTL_MS = 60 * 60 * 1000;
 
-export async function createPasswordReset(input: { userId: string; tokenHash: string; now?: Date }) {
+export async function createPasswordReset(input: {
+  userId: string;
+  tokenHash: string;
+  now?: Date;
+}) {
   const db = await getDb();
   const now = input.now ?? new Date();
   await db.transaction(async (tx) => {
@@ -22,7 +26,8 @@ export async function createPasswordReset(input: { userId: string; tokenHash: st
   });
 }
 
-export type ResetOutcome = { ok: true; userId: string } | { ok: false; reason: "invalid" | "expired" | "used" };
+export type ResetOutcome =
+  { ok: true; userId: string } | { ok: false; reason: "invalid" | "expired" | "used" };
 
 /** Marks the token used, sets the new hash and ends every session, all at once. */
 export async function consumePasswordReset(input: {
@@ -47,16 +52,25 @@ export async function consumePasswordReset(input: {
     if (!row) return { ok: false, reason: "invalid" } as const;
     if (row.usedAt) return { ok: false, reason: "used" } as const;
     if (row.expiresAt.getTime() <= now.getTime()) return { ok: false, reason: "expired" } as const;
-    await tx.update(passwordResetTokens).set({ usedAt: now }).where(eq(passwordResetTokens.id, row.id));
+    await tx
+      .update(passwordResetTokens)
+      .set({ usedAt: now })
+      .where(eq(passwordResetTokens.id, row.id));
     await tx
       .update(users)
-      .set({ passwordHash: input.newPasswordHash, sessionVersion: sql`${users.sessionVersion} + 1` })
+      .set({
+        passwordHash: input.newPasswordHash,
+        sessionVersion: sql`${users.sessionVersion} + 1`,
+      })
       .where(eq(users.id, row.userId));
     return { ok: true, userId: row.userId } as const;
   });
 }
 
-export async function setPassword(input: { userId: string; passwordHash: string }): Promise<number> {
+export async function setPassword(input: {
+  userId: string;
+  passwordHash: string;
+}): Promise<number> {
   const db = await getDb();
   const [row] = await db
     .update(users)

@@ -3,7 +3,11 @@ import { eq, lt } from "drizzle-orm";
 import { getDb } from "@/db";
 import { endedSessions } from "@/db/schema";
 
-export async function endSession(input: { tokenId: string; userId: string; expiresAt: Date }): Promise<void> {
+export async function endSession(input: {
+  tokenId: string;
+  userId: string;
+  expiresAt: Date;
+}): Promise<void> {
   const db = await getDb();
   await db.transaction(async (tx) => {
     await tx.insert(endedSessions).values(input).onConflictDoNothing();

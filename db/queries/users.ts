@@ -50,7 +50,11 @@ export async function getPasswordHash({ userId }: { userId: string }): Promise<s
   return row?.h ?? null;
 }
 
-export async function createUser(input: { email: string; name: string; passwordHash: string }): Promise<UserDto> {
+export async function createUser(input: {
+  email: string;
+  name: string;
+  passwordHash: string;
+}): Promise<UserDto> {
   const db = await getDb();
   const [row] = await db
     .insert(users)

@@ -5,7 +5,12 @@ export const unitSystemEnum = pgEnum("unit_system", ["us", "metric"]);
 export const bedKindEnum = pgEnum("bed_kind", ["bed", "container"]);
 export const feederClassEnum = pgEnum("feeder_class", ["heavy", "medium", "light"]);
 export const materialEnum = pgEnum("material", ["castings", "leachate", "tea"]);
-export const methodEnum = pgEnum("feeding_method", ["top-dress", "side-dress", "soil-mix", "drench"]);
+export const methodEnum = pgEnum("feeding_method", [
+  "top-dress",
+  "side-dress",
+  "soil-mix",
+  "drench",
+]);
 export const basisEnum = pgEnum("amount_basis", [
   "per-plant",
   "per-area",

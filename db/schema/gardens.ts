@@ -30,7 +30,10 @@ export const memberships = pgTable(
     role: roleEnum("role").notNull(),
     createdAt: createdAt(),
   },
-  (t) => [primaryKey({ columns: [t.gardenId, t.userId] }), index("memberships_user_idx").on(t.userId)],
+  (t) => [
+    primaryKey({ columns: [t.gardenId, t.userId] }),
+    index("memberships_user_idx").on(t.userId),
+  ],
 );
 
 export const invitations = pgTable(

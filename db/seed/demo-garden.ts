@@ -9,10 +9,25 @@ const GAL = 3.785411784; // L, exact
 export const demoPasswordHint = "Demo accounts (password for each shown beside it)";
 
 export const demoMembers = [
-  { email: "maren@example.com", name: "Maren Okafor", role: "owner", password: "hollis-owner-2026" },
-  { email: "theo@example.com", name: "Theo Lindqvist", role: "grower", password: "compost-grower-2026" },
+  {
+    email: "maren@example.com",
+    name: "Maren Okafor",
+    role: "owner",
+    password: "hollis-owner-2026",
+  },
+  {
+    email: "theo@example.com",
+    name: "Theo Lindqvist",
+    role: "grower",
+    password: "compost-grower-2026",
+  },
   { email: "priya@example.com", name: "Priya Ramos", role: "helper", password: "leaf-helper-2026" },
-  { email: "sam@example.com", name: "Sam Whitcombe", role: "viewer", password: "frost-viewer-2026" },
+  {
+    email: "sam@example.com",
+    name: "Sam Whitcombe",
+    role: "viewer",
+    password: "frost-viewer-2026",
+  },
 ] as const;
 
 export const demoGarden = {
@@ -69,16 +84,43 @@ type BedSeed = {
 };
 
 export const demoBeds: BedSeed[] = [
-  { key: "north", name: "North raised bed", kind: "bed", lengthM: 8 * FT, widthM: 4 * FT, depthM: 11 * IN },
-  { key: "south", name: "South raised bed", kind: "bed", lengthM: 8 * FT, widthM: 4 * FT, depthM: 11 * IN },
-  { key: "berry", name: "Berry bed", kind: "bed", lengthM: 10 * FT, widthM: 3 * FT, depthM: 8 * IN },
+  {
+    key: "north",
+    name: "North raised bed",
+    kind: "bed",
+    lengthM: 8 * FT,
+    widthM: 4 * FT,
+    depthM: 11 * IN,
+  },
+  {
+    key: "south",
+    name: "South raised bed",
+    kind: "bed",
+    lengthM: 8 * FT,
+    widthM: 4 * FT,
+    depthM: 11 * IN,
+  },
+  {
+    key: "berry",
+    name: "Berry bed",
+    kind: "bed",
+    lengthM: 10 * FT,
+    widthM: 3 * FT,
+    depthM: 8 * IN,
+  },
   { key: "herb", name: "Herb strip", kind: "bed", lengthM: 6 * FT, widthM: 2 * FT, depthM: 8 * IN },
   { key: "pot-blue", name: "Blueberry barrel", kind: "container", containerVolumeL: 15 * GAL },
   { key: "pot-pepper", name: "Pepper pot", kind: "container", containerVolumeL: 5 * GAL },
   { key: "pot-potato", name: "Potato grow bag", kind: "container", containerVolumeL: 10 * GAL },
   { key: "pot-dahlia", name: "Dahlia tub", kind: "container", containerVolumeL: 7 * GAL },
   { key: "pot-zinnia", name: "Zinnia trough", kind: "container", containerVolumeL: 5 * GAL },
-  { key: "pot-basil", name: "Kitchen window basil", kind: "container", indoors: true, containerVolumeL: 1 * GAL },
+  {
+    key: "pot-basil",
+    name: "Kitchen window basil",
+    kind: "container",
+    indoors: true,
+    containerVolumeL: 1 * GAL,
+  },
 ];
 
 type PlantingSeed = {
@@ -93,22 +135,109 @@ type PlantingSeed = {
 
 export const demoPlantings: PlantingSeed[] = [
   // Last season, finished: they carry the logged top-dressings.
-  { bed: "north", crop: "Tomato", count: 6, plantedOn: "2026-05-09", expectedHarvestOn: "2026-08-01", endedOn: "2026-10-12", priority: 1 },
-  { bed: "north", crop: "Pepper", count: 4, plantedOn: "2026-05-09", expectedHarvestOn: "2026-08-10", endedOn: "2026-10-12", priority: 2 },
-  { bed: "south", crop: "Squash", count: 3, plantedOn: "2026-05-16", expectedHarvestOn: "2026-07-20", endedOn: "2026-09-30", priority: 2 },
+  {
+    bed: "north",
+    crop: "Tomato",
+    count: 6,
+    plantedOn: "2026-05-09",
+    expectedHarvestOn: "2026-08-01",
+    endedOn: "2026-10-12",
+    priority: 1,
+  },
+  {
+    bed: "north",
+    crop: "Pepper",
+    count: 4,
+    plantedOn: "2026-05-09",
+    expectedHarvestOn: "2026-08-10",
+    endedOn: "2026-10-12",
+    priority: 2,
+  },
+  {
+    bed: "south",
+    crop: "Squash",
+    count: 3,
+    plantedOn: "2026-05-16",
+    expectedHarvestOn: "2026-07-20",
+    endedOn: "2026-09-30",
+    priority: 2,
+  },
   // Perennials and overwintering crops.
-  { bed: "berry", crop: "Strawberry", count: 12, plantedOn: "2026-04-25", expectedHarvestOn: "2027-06-01", priority: 2 },
-  { bed: "pot-blue", crop: "Blueberry", count: 1, plantedOn: "2026-04-25", expectedHarvestOn: "2027-07-01", priority: 3 },
-  { bed: "herb", crop: "Garlic", count: 24, plantedOn: "2026-10-20", expectedHarvestOn: "2027-07-10", priority: 4 },
+  {
+    bed: "berry",
+    crop: "Strawberry",
+    count: 12,
+    plantedOn: "2026-04-25",
+    expectedHarvestOn: "2027-06-01",
+    priority: 2,
+  },
+  {
+    bed: "pot-blue",
+    crop: "Blueberry",
+    count: 1,
+    plantedOn: "2026-04-25",
+    expectedHarvestOn: "2027-07-01",
+    priority: 3,
+  },
+  {
+    bed: "herb",
+    crop: "Garlic",
+    count: 24,
+    plantedOn: "2026-10-20",
+    expectedHarvestOn: "2027-07-10",
+    priority: 4,
+  },
   { bed: "herb", crop: "Thyme", count: 3, plantedOn: "2026-05-01", priority: 5 },
   { bed: "pot-basil", crop: "Basil", count: 2, plantedOn: "2026-11-01", priority: 4 },
   // Next season's plan.
-  { bed: "north", crop: "Tomato", count: 6, plantedOn: "2027-05-08", expectedHarvestOn: "2027-08-01", priority: 1 },
-  { bed: "north", crop: "Pepper", count: 4, plantedOn: "2027-05-08", expectedHarvestOn: "2027-08-10", priority: 2 },
-  { bed: "south", crop: "Kale", count: 8, plantedOn: "2027-04-10", expectedHarvestOn: "2027-06-01", priority: 3 },
-  { bed: "south", crop: "Cucumber", count: 4, plantedOn: "2027-05-20", expectedHarvestOn: "2027-07-25", priority: 2 },
-  { bed: "pot-pepper", crop: "Pepper", count: 1, plantedOn: "2027-05-08", expectedHarvestOn: "2027-08-10", priority: 2 },
-  { bed: "pot-potato", crop: "Potato", count: 3, plantedOn: "2027-04-15", expectedHarvestOn: "2027-07-30", priority: 3 },
+  {
+    bed: "north",
+    crop: "Tomato",
+    count: 6,
+    plantedOn: "2027-05-08",
+    expectedHarvestOn: "2027-08-01",
+    priority: 1,
+  },
+  {
+    bed: "north",
+    crop: "Pepper",
+    count: 4,
+    plantedOn: "2027-05-08",
+    expectedHarvestOn: "2027-08-10",
+    priority: 2,
+  },
+  {
+    bed: "south",
+    crop: "Kale",
+    count: 8,
+    plantedOn: "2027-04-10",
+    expectedHarvestOn: "2027-06-01",
+    priority: 3,
+  },
+  {
+    bed: "south",
+    crop: "Cucumber",
+    count: 4,
+    plantedOn: "2027-05-20",
+    expectedHarvestOn: "2027-07-25",
+    priority: 2,
+  },
+  {
+    bed: "pot-pepper",
+    crop: "Pepper",
+    count: 1,
+    plantedOn: "2027-05-08",
+    expectedHarvestOn: "2027-08-10",
+    priority: 2,
+  },
+  {
+    bed: "pot-potato",
+    crop: "Potato",
+    count: 3,
+    plantedOn: "2027-04-15",
+    expectedHarvestOn: "2027-07-30",
+    priority: 3,
+  },
   { bed: "pot-dahlia", crop: "Dahlia", count: 1, plantedOn: "2027-05-15", priority: 4 },
   { bed: "pot-zinnia", crop: "Zinnia", count: 6, plantedOn: "2027-05-25", priority: 5 },
 ];

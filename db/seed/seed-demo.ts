@@ -74,7 +74,10 @@ export async function seedDemoGarden(db: Db): Promise<{ created: boolean }> {
 }
 
 async function insertBins(tx: Tx, gardenId: string) {
-  const [stack] = await tx.insert(bins).values({ gardenId, ...demoBins.stack }).returning({ id: bins.id });
+  const [stack] = await tx
+    .insert(bins)
+    .values({ gardenId, ...demoBins.stack })
+    .returning({ id: bins.id });
   const [tote] = await tx
     .insert(bins)
     .values({ gardenId, ...demoBins.tote, parentBinId: stack!.id })
@@ -85,7 +88,10 @@ async function insertBins(tx: Tx, gardenId: string) {
 async function insertBeds(tx: Tx, gardenId: string) {
   const ids: Record<string, string> = {};
   for (const { key, ...bed } of demoBeds) {
-    const [row] = await tx.insert(beds).values({ gardenId, ...bed }).returning({ id: beds.id });
+    const [row] = await tx
+      .insert(beds)
+      .values({ gardenId, ...bed })
+      .returning({ id: beds.id });
     ids[key] = row!.id;
   }
   return ids;
@@ -118,7 +124,12 @@ async function insertPlantings(tx: Tx, gardenId: string, bedIds: Record<string, 
 
 type Lot = { id: string; producedOn: string; remaining: number };
 
-async function insertBinLogs(tx: Tx, gardenId: string, binIds: Record<string, string>, helperId: string) {
+async function insertBinLogs(
+  tx: Tx,
+  gardenId: string,
+  binIds: Record<string, string>,
+  helperId: string,
+) {
   const events: (typeof binEvents.$inferInsert)[] = [];
   const base = { gardenId, loggedBy: helperId };
   events.push({
@@ -131,13 +142,46 @@ async function insertBinLogs(tx: Tx, gardenId: string, binIds: Record<string, st
     note: "Split off to start the porch tote",
   });
   for (const day of eachDay(demoLogWindow.from, demoLogWindow.to, 7)) {
-    events.push({ ...base, binId: binIds.stack!, kind: "feeding", occurredOn: day, foodKg: 1.1, note: "Vegetable scraps, coffee grounds, shredded paper" });
-    events.push({ ...base, binId: binIds.tote!, kind: "feeding", occurredOn: addDays(day, 1), foodKg: 0.45 });
-    events.push({ ...base, binId: binIds.stack!, kind: "liquid-drained", occurredOn: addDays(day, 3), liquidL: 0.35 });
-    events.push({ ...base, binId: binIds.tote!, kind: "liquid-drained", occurredOn: addDays(day, 3), liquidL: 0.12 });
+    events.push({
+      ...base,
+      binId: binIds.stack!,
+      kind: "feeding",
+      occurredOn: day,
+      foodKg: 1.1,
+      note: "Vegetable scraps, coffee grounds, shredded paper",
+    });
+    events.push({
+      ...base,
+      binId: binIds.tote!,
+      kind: "feeding",
+      occurredOn: addDays(day, 1),
+      foodKg: 0.45,
+    });
+    events.push({
+      ...base,
+      binId: binIds.stack!,
+      kind: "liquid-drained",
+      occurredOn: addDays(day, 3),
+      liquidL: 0.35,
+    });
+    events.push({
+      ...base,
+      binId: binIds.tote!,
+      kind: "liquid-drained",
+      occurredOn: addDays(day, 3),
+      liquidL: 0.12,
+    });
   }
   for (const day of eachDay(demoLogWindow.from, demoLogWindow.to, 14)) {
-    events.push({ ...base, binId: binIds.stack!, kind: "observation", occurredOn: addDays(day, 2), temperatureC: 17.5, moisturePercent: 78, note: "Bedding like a wrung sponge" });
+    events.push({
+      ...base,
+      binId: binIds.stack!,
+      kind: "observation",
+      occurredOn: addDays(day, 2),
+      temperatureC: 17.5,
+      moisturePercent: 78,
+      note: "Bedding like a wrung sponge",
+    });
   }
   for (const day of ["2026-09-06", "2026-10-06", "2026-11-05"]) {
     events.push({ ...base, binId: binIds.stack!, kind: "tray-added", occurredOn: day });
@@ -150,7 +194,13 @@ async function insertBinLogs(tx: Tx, gardenId: string, binIds: Record<string, st
   for (const h of [carried, ...demoHarvests]) {
     const [event] = await tx
       .insert(binEvents)
-      .values({ ...base, binId: binIds[h.bin]!, kind: "harvest", occurredOn: h.on, castingsKg: h.castingsKg })
+      .values({
+        ...base,
+        binId: binIds[h.bin]!,
+        kind: "harvest",
+        occurredOn: h.on,
+        castingsKg: h.castingsKg,
+      })
       .returning({ id: binEvents.id });
     const [lot] = await tx
       .insert(stockLots)
@@ -207,6 +257,9 @@ async function insertApplications(
     }
   }
   for (const lot of lots) {
-    await tx.update(stockLots).set({ remainingAmountSi: lot.remaining }).where(eq(stockLots.id, lot.id));
+    await tx
+      .update(stockLots)
+      .set({ remainingAmountSi: lot.remaining })
+      .where(eq(stockLots.id, lot.id));
   }
 }

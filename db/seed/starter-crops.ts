@@ -19,7 +19,12 @@ export const defaultRuleByClass = {
 
 type FeederClass = keyof typeof defaultRuleByClass;
 
-export const starterCrops: { name: string; feederClass: FeederClass; touchesSoil: boolean; edible: boolean }[] = [
+export const starterCrops: {
+  name: string;
+  feederClass: FeederClass;
+  touchesSoil: boolean;
+  edible: boolean;
+}[] = [
   { name: "Tomato", feederClass: "heavy", touchesSoil: false, edible: true },
   { name: "Pepper", feederClass: "heavy", touchesSoil: false, edible: true },
   { name: "Squash", feederClass: "heavy", touchesSoil: false, edible: true },
@@ -45,13 +50,23 @@ export const starterCrops: { name: string; feederClass: FeederClass; touchesSoil
 /** Adds the shared crop list once; later calls find it and add nothing. */
 export async function ensureStarterCrops(db: Db): Promise<number> {
   return db.transaction(async (tx) => {
-    const existing = await tx.select({ id: crops.id }).from(crops).where(isNull(crops.gardenId)).limit(1);
+    const existing = await tx
+      .select({ id: crops.id })
+      .from(crops)
+      .where(isNull(crops.gardenId))
+      .limit(1);
     if (existing.length) return 0;
     for (const crop of starterCrops) {
       const rule = defaultRuleByClass[crop.feederClass];
       const [row] = await tx
         .insert(feedingRules)
-        .values({ gardenId: null, material: "castings", method: "top-dress", basis: "per-plant", ...rule })
+        .values({
+          gardenId: null,
+          material: "castings",
+          method: "top-dress",
+          basis: "per-plant",
+          ...rule,
+        })
         .returning({ id: feedingRules.id });
       await tx.insert(crops).values({
         gardenId: null,

@@ -14,7 +14,13 @@ export function sessionCookieOptions() {
 
 export function serializeCookie(name: string, value: string, maxAgeSeconds: number): string {
   const o = sessionCookieOptions();
-  const parts = [`${name}=${value}`, `Path=${o.path}`, `Max-Age=${maxAgeSeconds}`, "HttpOnly", "SameSite=Lax"];
+  const parts = [
+    `${name}=${value}`,
+    `Path=${o.path}`,
+    `Max-Age=${maxAgeSeconds}`,
+    "HttpOnly",
+    "SameSite=Lax",
+  ];
   if (o.secure) parts.push("Secure");
   return parts.join("; ");
 }

@@ -11,7 +11,11 @@ export const BAD_CREDENTIALS_MESSAGE = "That e-mail and password do not match an
  * message and cost the same argon2 verify, so neither words nor timing tell
  * which addresses have accounts.
  */
-export async function verifyCredentials(email: string, password: string, address: string): Promise<UserDto> {
+export async function verifyCredentials(
+  email: string,
+  password: string,
+  address: string,
+): Promise<UserDto> {
   await assertNotThrottled(email, address);
   const found = await getCredentialsByEmail({ email });
   let ok = false;

@@ -26,10 +26,20 @@ export const { handlers, auth, signOut } = NextAuth({
         const parsed = credentialsSchema.safeParse(raw);
         if (!parsed.success) return null;
         try {
-          const user = await verifyCredentials(parsed.data.email, parsed.data.password, clientAddress(request));
-          return { id: user.id, email: user.email, name: user.name, sessionVersion: user.sessionVersion };
+          const user = await verifyCredentials(
+            parsed.data.email,
+            parsed.data.password,
+            clientAddress(request),
+          );
+          return {
+            id: user.id,
+            email: user.email,
+            name: user.name,
+            sessionVersion: user.sessionVersion,
+          };
         } catch (error) {
-          if (error instanceof AppError && error.kind === "rate_limited") throw new ThrottledSignIn();
+          if (error instanceof AppError && error.kind === "rate_limited")
+            throw new ThrottledSignIn();
           return null;
         }
       },

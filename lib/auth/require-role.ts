@@ -20,12 +20,20 @@ export interface Member {
  * A member below the needed role → 403. Role is read from the database on
  * every call, never from the session token.
  */
-export async function requireRole(request: Request, gardenId: string, minimum: Role): Promise<Member> {
+export async function requireRole(
+  request: Request,
+  gardenId: string,
+  minimum: Role,
+): Promise<Member> {
   const user = await requireUser(request);
   return requireMembership(user, gardenId, minimum);
 }
 
-export async function requireMembership(user: UserDto, gardenId: string, minimum: Role): Promise<Member> {
+export async function requireMembership(
+  user: UserDto,
+  gardenId: string,
+  minimum: Role,
+): Promise<Member> {
   if (!gardenIdSchema.safeParse(gardenId).success) throw new AppError("not_found:garden");
   const membership = await getMembership({ gardenId, userId: user.id });
   if (!membership) throw new AppError("not_found:garden");

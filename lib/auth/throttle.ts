@@ -24,7 +24,11 @@ export function clientAddress(request: Request): string {
 }
 
 /** Throws 429 with Retry-After when either key has too many recent failures. */
-export async function assertNotThrottled(email: string, address: string, now = new Date()): Promise<void> {
+export async function assertNotThrottled(
+  email: string,
+  address: string,
+  now = new Date(),
+): Promise<void> {
   const db = await getDb();
   const since = new Date(now.getTime() - THROTTLE_WINDOW_MS);
   for (const { key, limit } of throttleKeys(email, address)) {
@@ -40,7 +44,10 @@ export async function assertNotThrottled(email: string, address: string, now = n
       );
     if ((row?.n ?? 0) >= limit) {
       const oldest = row?.oldest ? new Date(row.oldest).getTime() : now.getTime();
-      const retryAfter = Math.max(1, Math.ceil((oldest + THROTTLE_WINDOW_MS - now.getTime()) / 1000));
+      const retryAfter = Math.max(
+        1,
+        Math.ceil((oldest + THROTTLE_WINDOW_MS - now.getTime()) / 1000),
+      );
       throw new AppError(
         "rate_limited:sign_in",
         `Too many failed sign-ins. Try again in ${Math.ceil(retryAfter / 60)} minute(s).`,
@@ -51,16 +58,24 @@ export async function assertNotThrottled(email: string, address: string, now = n
   }
 }
 
-export async function recordSignInAttempt(email: string, address: string, succeeded: boolean): Promise<void> {
+export async function recordSignInAttempt(
+  email: string,
+  address: string,
+  succeeded: boolean,
+): Promise<void> {
   const db = await getDb();
   const keys = throttleKeys(email, address);
   await db.transaction(async (tx) => {
-    await tx.insert(signInAttempts).values(keys.map(({ key }) => ({ throttleKey: key, succeeded })));
+    await tx
+      .insert(signInAttempts)
+      .values(keys.map(({ key }) => ({ throttleKey: key, succeeded })));
     if (succeeded) {
       // The owner proved they know the password: their own account's count starts over.
       await tx
         .delete(signInAttempts)
-        .where(and(eq(signInAttempts.throttleKey, keys[0]!.key), eq(signInAttempts.succeeded, false)));
+        .where(
+          and(eq(signInAttempts.throttleKey, keys[0]!.key), eq(signInAttempts.succeeded, false)),
+        );
     }
     // Keep the table small: nothing older than the window matters.
     await tx

@@ -30,7 +30,10 @@ export const requestResetSchema = z.object({ email: emailSchema });
 export type RequestResetInput = z.infer<typeof requestResetSchema>;
 
 export const confirmResetSchema = z.object({
-  token: z.string().min(20, "This reset link is not valid.").max(200, "This reset link is not valid."),
+  token: z
+    .string()
+    .min(20, "This reset link is not valid.")
+    .max(200, "This reset link is not valid."),
   newPassword: newPasswordSchema,
 });
 export type ConfirmResetInput = z.infer<typeof confirmResetSchema>;

@@ -23,7 +23,10 @@ function isTimeZone(tz: string): boolean {
 
 const gardenFields = z.object({
   name: z.string().trim().min(1, "Give the garden a name.").max(80, "Use at most 80 characters."),
-  timeZone: z.string().min(1, "Choose a time zone.").refine(isTimeZone, "That is not a time zone we know."),
+  timeZone: z
+    .string()
+    .min(1, "Choose a time zone.")
+    .refine(isTimeZone, "That is not a time zone we know."),
   unitSystem: z.enum(["us", "metric"], { error: "Choose US customary or metric." }),
   lastSpringFrost: isoDay("last spring frost date"),
   firstFallFrost: isoDay("first fall frost date"),
@@ -44,10 +47,14 @@ export const updateGardenSchema = gardenFields.partial().refine(frostOrder, fros
 export type UpdateGardenInput = z.infer<typeof updateGardenSchema>;
 
 export const deleteGardenSchema = z.object({
-  confirmName: z.string({ error: "Type the garden's name to confirm." }).min(1, "Type the garden's name to confirm."),
+  confirmName: z
+    .string({ error: "Type the garden's name to confirm." })
+    .min(1, "Type the garden's name to confirm."),
 });
 
-export const roleSchema = z.enum(roles, { error: "Choose a role: owner, grower, helper or viewer." });
+export const roleSchema = z.enum(roles, {
+  error: "Choose a role: owner, grower, helper or viewer.",
+});
 
 export const inviteSchema = z.object({
   email: z.string().trim().max(254).pipe(z.email("Enter a valid e-mail address.")),
@@ -58,5 +65,8 @@ export type InviteInput = z.infer<typeof inviteSchema>;
 export const changeRoleSchema = z.object({ role: roleSchema });
 
 export const acceptInvitationSchema = z.object({
-  token: z.string().min(20, "This invitation link is not valid.").max(200, "This invitation link is not valid."),
+  token: z
+    .string()
+    .min(20, "This invitation link is not valid.")
+    .max(200, "This invitation link is not valid."),
 });

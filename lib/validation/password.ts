@@ -21,4 +21,7 @@ export const newPasswordSchema = z
   .string({ error: "Enter a password." })
   .min(PASSWORD_MIN, `Use at least ${PASSWORD_MIN} characters.`)
   .max(PASSWORD_MAX, `Use at most ${PASSWORD_MAX} characters.`)
-  .refine((p) => !isCommonPassword(p), "That password is on a list of commonly used ones; pick another.");
+  .refine(
+    (p) => !isCommonPassword(p),
+    "That password is on a list of commonly used ones; pick another.",
+  );

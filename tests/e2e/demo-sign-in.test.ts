@@ -19,7 +19,9 @@ describe("demo garden in a real browser (phone-sized viewport)", () => {
   it("the sign-in page lists the demo accounts in demo mode", async () => {
     const signIn = new SignInPage(session.page, baseUrl);
     await signIn.open();
-    await expect(session.page.getByRole("cell", { name: owner.email }).isVisible()).resolves.toBe(true);
+    await expect(session.page.getByRole("cell", { name: owner.email }).isVisible()).resolves.toBe(
+      true,
+    );
   });
 
   it("the demo owner signs in and sees the garden's name in the shell", async () => {
@@ -34,7 +36,9 @@ describe("demo garden in a real browser (phone-sized viewport)", () => {
     expect(await garden.gardenName().textContent()).toBe(demoGarden.name);
     // The switcher in the header names the current garden too.
     const switcher = page.getByLabel("Switch garden");
-    expect(await switcher.evaluate((el: HTMLSelectElement) => el.selectedOptions[0]?.textContent)).toBe(demoGarden.name);
+    expect(
+      await switcher.evaluate((el: HTMLSelectElement) => el.selectedOptions[0]?.textContent),
+    ).toBe(demoGarden.name);
     // The owner sees Settings; the page passed our CSP without console errors.
     expect(await garden.nav().getByRole("link", { name: "Settings" }).count()).toBe(1);
     expect(session.problems).toEqual([]);
@@ -43,7 +47,9 @@ describe("demo garden in a real browser (phone-sized viewport)", () => {
   it("the page fits a 375 px wide phone without sideways scrolling", async () => {
     const { page } = session;
     await page.setViewportSize({ width: 375, height: 800 });
-    const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
+    const overflow = await page.evaluate(
+      () => document.documentElement.scrollWidth - window.innerWidth,
+    );
     expect(overflow).toBeLessThanOrEqual(0);
   });
 });

@@ -168,7 +168,11 @@ describe("sessions", () => {
     const laptop = await signIn(user.email, user.password);
     const phone = await signIn(user.email, user.password);
     const copied = laptop;
-    const res = await call(session.DELETE, { method: "DELETE", url: "/api/session", cookie: laptop });
+    const res = await call(session.DELETE, {
+      method: "DELETE",
+      url: "/api/session",
+      cookie: laptop,
+    });
     expect(res.status).toBe(200);
     expect(res.setCookie).toMatch(/Max-Age=0/);
     // ASVS 7.4.1 (from memory): sign-out must end the session server-side, not only clear the cookie.

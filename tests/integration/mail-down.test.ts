@@ -14,7 +14,6 @@ import {
   invitationTokenFrom,
   makeGardenWithRoles,
   tableRows,
-  uniqueEmail,
   type GardenWorld,
 } from "@/tests/support/integration/harness";
 

@@ -2,6 +2,9 @@
 
 import { ErrorPanel } from "@/components/shell/error-panel";
 
-export default function ErrorBoundary(props: { error: Error & { digest?: string }; reset: () => void }) {
+export default function ErrorBoundary(props: {
+  error: Error & { digest?: string };
+  reset: () => void;
+}) {
   return <ErrorPanel {...props} />;
 }

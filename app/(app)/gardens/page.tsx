@@ -25,7 +25,10 @@ export default async function GardensPage() {
           <ul className="grid gap-3 sm:grid-cols-2">
             {gardens.map((g) => (
               <li key={g.id}>
-                <Link href={`/g/${g.id}`} className="block rounded-card focus-visible:outline-offset-4">
+                <Link
+                  href={`/g/${g.id}`}
+                  className="block rounded-card focus-visible:outline-offset-4"
+                >
                   <Card className="hover:border-leaf-700">
                     <CardBody className="flex items-center justify-between gap-3">
                       <span className="font-display text-xl">{g.name}</span>

@@ -8,7 +8,9 @@ export default function ForgotPasswordPage() {
   return (
     <>
       <h1 className="text-3xl">Forgot your password?</h1>
-      <p className="text-soil-700">We will e-mail you a link to choose a new one. It works once, for one hour.</p>
+      <p className="text-soil-700">
+        We will e-mail you a link to choose a new one. It works once, for one hour.
+      </p>
       <Card>
         <CardBody>
           <ForgotPasswordForm />

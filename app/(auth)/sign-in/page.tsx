@@ -8,7 +8,11 @@ import { getEnv } from "@/lib/env";
 export const metadata: Metadata = { title: "Sign in" };
 export const dynamic = "force-dynamic";
 
-export default async function SignInPage({ searchParams }: { searchParams: Promise<Record<string, string | string[]>> }) {
+export default async function SignInPage({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | string[]>>;
+}) {
   const next = safeNextPath((await searchParams).next);
   // Demo passwords are public by design and shown only when the demo garden is loaded.
   const demo = getEnv().CASTLINE_DEMO;

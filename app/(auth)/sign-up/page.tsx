@@ -5,7 +5,11 @@ import { safeNextPath } from "@/lib/auth/page-session";
 
 export const metadata: Metadata = { title: "Make an account" };
 
-export default async function SignUpPage({ searchParams }: { searchParams: Promise<Record<string, string | string[]>> }) {
+export default async function SignUpPage({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | string[]>>;
+}) {
   const next = safeNextPath((await searchParams).next);
   return (
     <>

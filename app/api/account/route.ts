@@ -22,9 +22,13 @@ export const POST = route(async (request) => {
     );
   } catch (error) {
     if (error instanceof EmailTakenError) {
-      throw new AppError("conflict:email", "An account with that e-mail already exists. Sign in, or reset its password.", {
-        email: "An account with that e-mail already exists.",
-      });
+      throw new AppError(
+        "conflict:email",
+        "An account with that e-mail already exists. Sign in, or reset its password.",
+        {
+          email: "An account with that e-mail already exists.",
+        },
+      );
     }
     throw error;
   }

@@ -13,7 +13,11 @@ export async function GET(): Promise<Response> {
   } catch (error) {
     console.error("[castline] health check failed", error);
     return Response.json(
-      { status: "error", version: packageJson.version, error: { code: "unavailable", message: "Database unreachable." } },
+      {
+        status: "error",
+        version: packageJson.version,
+        error: { code: "unavailable", message: "Database unreachable." },
+      },
       { status: 503 },
     );
   }

@@ -16,11 +16,14 @@ export default async function OutboxPage() {
     <main className="mx-auto flex max-w-3xl flex-col gap-4 px-4 py-6">
       <h1 className="text-3xl">Local outbox</h1>
       <p className="text-soil-700">
-        E-mail sent while no SMTP server is configured lands here instead of anyone&apos;s inbox. Newest first; kept in
-        memory until the server restarts.
+        E-mail sent while no SMTP server is configured lands here instead of anyone&apos;s inbox.
+        Newest first; kept in memory until the server restarts.
       </p>
       {messages.length === 0 ? (
-        <EmptyState title="No mail yet" text="Invite someone or ask for a password reset, then reload this page." />
+        <EmptyState
+          title="No mail yet"
+          text="Invite someone or ask for a password reset, then reload this page."
+        />
       ) : (
         messages.map((m) => (
           <Card key={m.id} data-testid="outbox-message">

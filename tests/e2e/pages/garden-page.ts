@@ -7,6 +7,15 @@ export class GardenPage {
     return this.page.getByTestId("garden-name");
   }
 
+  /** The overview's header: the garden's name, the member's role badge, the season. */
+  overviewHeader() {
+    return this.page.locator("header", { has: this.gardenName() });
+  }
+
+  roleBadge(role: string) {
+    return this.overviewHeader().getByText(role, { exact: true });
+  }
+
   nav() {
     return this.page.getByRole("navigation", { name: "Garden sections" });
   }

@@ -24,7 +24,9 @@ export interface BrowserSession {
   close: () => Promise<void>;
 }
 
-export async function openBrowser(options: { width?: number; height?: number } = {}): Promise<BrowserSession> {
+export async function openBrowser(
+  options: { width?: number; height?: number } = {},
+): Promise<BrowserSession> {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), "castline-chromium-"));
   const context = await chromium.launchPersistentContext(dir, {
     executablePath: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium",

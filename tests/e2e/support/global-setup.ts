@@ -57,22 +57,26 @@ export async function setup(project: TestProject) {
   let output = "";
   // Node runs Next directly (not through npx) so SIGTERM reaches the server itself.
   const nextBin = path.join(root, "node_modules", "next", "dist", "bin", "next");
-  server = spawn(process.execPath, [nextBin, "start", "--port", String(port), "--hostname", "127.0.0.1"], {
-    cwd: root,
-    env: {
-      ...process.env,
-      NODE_ENV: "production",
-      NEXT_TELEMETRY_DISABLED: "1",
-      NEXT_MANUAL_SIG_HANDLE: "true",
-      PGLITE_DIR: path.join(dataDir, "pglite"),
-      CASTLINE_SECRET_FILE: path.join(dataDir, "auth-secret"),
-      CASTLINE_DEMO: "1",
-      LOCAL_SMTP_PORT: "0",
-      // Mail goes to the in-process catcher, whatever the developer's shell says.
-      SMTP_HOST: "",
+  server = spawn(
+    process.execPath,
+    [nextBin, "start", "--port", String(port), "--hostname", "127.0.0.1"],
+    {
+      cwd: root,
+      env: {
+        ...process.env,
+        NODE_ENV: "production",
+        NEXT_TELEMETRY_DISABLED: "1",
+        NEXT_MANUAL_SIG_HANDLE: "true",
+        PGLITE_DIR: path.join(dataDir, "pglite"),
+        CASTLINE_SECRET_FILE: path.join(dataDir, "auth-secret"),
+        CASTLINE_DEMO: "1",
+        LOCAL_SMTP_PORT: "0",
+        // Mail goes to the in-process catcher, whatever the developer's shell says.
+        SMTP_HOST: "",
+      },
+      stdio: ["ignore", "pipe", "pipe"],
     },
-    stdio: ["ignore", "pipe", "pipe"],
-  });
+  );
   server.stdout?.on("data", (d) => (output += d));
   server.stderr?.on("data", (d) => (output += d));
   const baseUrl = `http://127.0.0.1:${port}`;

@@ -9,10 +9,17 @@ import { formatDay } from "@/lib/format";
 
 export const metadata: Metadata = { title: "Overview" };
 
-export default async function GardenOverviewPage({ params }: { params: Promise<{ gardenId: string }> }) {
+export default async function GardenOverviewPage({
+  params,
+}: {
+  params: Promise<{ gardenId: string }>;
+}) {
   const { gardenId } = await params;
   const member = await requirePageMember(gardenId, "viewer");
-  const [garden, summary] = await Promise.all([getGardenById({ gardenId }), getGardenSummary({ gardenId })]);
+  const [garden, summary] = await Promise.all([
+    getGardenById({ gardenId }),
+    getGardenSummary({ gardenId }),
+  ]);
   if (!garden) return null;
   const figures = [
     { label: "Beds", value: summary.beds },
@@ -33,7 +40,10 @@ export default async function GardenOverviewPage({ params }: { params: Promise<{
           {garden.location ? ` · ${garden.location}` : ""}
         </p>
       </header>
-      <section aria-label="The garden at a glance" className="grid grid-cols-2 gap-3 sm:grid-cols-5">
+      <section
+        aria-label="The garden at a glance"
+        className="grid grid-cols-2 gap-3 sm:grid-cols-5"
+      >
         {figures.map((f) => (
           <Card key={f.label}>
             <CardBody>

@@ -20,7 +20,10 @@ function problemOf(inv: NonNullable<Awaited<ReturnType<typeof getInvitationPrevi
 
 export default async function InvitationPage({ params }: { params: Promise<{ token: string }> }) {
   const { token } = await params;
-  const invitation = token.length >= 20 && token.length <= 200 ? await getInvitationPreview({ tokenHash: hashLinkToken(token) }) : null;
+  const invitation =
+    token.length >= 20 && token.length <= 200
+      ? await getInvitationPreview({ tokenHash: hashLinkToken(token) })
+      : null;
   const problem = invitation ? problemOf(invitation) : invitationProblems.invalid;
   const user = await getPageUser();
   const here = `/invitations/${token}`;
@@ -34,7 +37,8 @@ export default async function InvitationPage({ params }: { params: Promise<{ tok
         <Card>
           <CardBody className="flex flex-col gap-4">
             <p>
-              You are invited as <strong>{roleLabels[invitation.role]}</strong>: {roleDescriptions[invitation.role].toLowerCase()}.
+              You are invited as <strong>{roleLabels[invitation.role]}</strong>:{" "}
+              {roleDescriptions[invitation.role].toLowerCase()}.
             </p>
             {user && user.email !== invitation.email ? (
               <Alert tone="caution">
@@ -48,11 +52,19 @@ export default async function InvitationPage({ params }: { params: Promise<{ tok
               </>
             ) : (
               <div className="flex flex-wrap gap-3">
-                <p className="w-full text-sm text-soil-700">This invitation is for {invitation.email}.</p>
-                <Link className={buttonStyles({ variant: "primary" })} href={`/sign-up?next=${encodeURIComponent(here)}`}>
+                <p className="w-full text-sm text-soil-700">
+                  This invitation is for {invitation.email}.
+                </p>
+                <Link
+                  className={buttonStyles({ variant: "primary" })}
+                  href={`/sign-up?next=${encodeURIComponent(here)}`}
+                >
                   Make an account to join
                 </Link>
-                <Link className={buttonStyles({ variant: "secondary" })} href={`/sign-in?next=${encodeURIComponent(here)}`}>
+                <Link
+                  className={buttonStyles({ variant: "secondary" })}
+                  href={`/sign-in?next=${encodeURIComponent(here)}`}
+                >
                   I have an account
                 </Link>
               </div>

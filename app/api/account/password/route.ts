@@ -18,5 +18,8 @@ export const POST = route(async (request) => {
   }
   await setPassword({ userId: user.id, passwordHash: await hashPassword(input.newPassword) });
   const fresh = await getUserById({ userId: user.id });
-  return Response.json({ ok: true }, { headers: { "Set-Cookie": await issueSessionCookie(fresh!) } });
+  return Response.json(
+    { ok: true },
+    { headers: { "Set-Cookie": await issueSessionCookie(fresh!) } },
+  );
 });

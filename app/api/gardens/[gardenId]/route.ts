@@ -3,7 +3,11 @@ import { deleteGarden, getGardenById, updateGarden } from "@/db/queries/gardens"
 import { requireRole } from "@/lib/auth/require-role";
 import { AppError } from "@/lib/errors";
 import { parseJson, parseParams, parseWith, route } from "@/lib/http";
-import { createGardenSchema, deleteGardenSchema, updateGardenSchema } from "@/lib/validation/garden";
+import {
+  createGardenSchema,
+  deleteGardenSchema,
+  updateGardenSchema,
+} from "@/lib/validation/garden";
 
 const paramsSchema = z.object({ gardenId: z.uuid() });
 type Params = z.infer<typeof paramsSchema>;

@@ -9,10 +9,15 @@ import { acceptInvitationSchema } from "@/lib/validation/garden";
 export const POST = route(async (request) => {
   const user = await requireUser(request);
   const { token } = await parseJson(request, acceptInvitationSchema);
-  const outcome = await acceptInvitation({ tokenHash: hashLinkToken(token), userId: user.id, userEmail: user.email });
+  const outcome = await acceptInvitation({
+    tokenHash: hashLinkToken(token),
+    userId: user.id,
+    userEmail: user.email,
+  });
   if (!outcome.ok && outcome.reason === "wrong_account") {
     throw new AppError("forbidden:invitation_wrong_account", invitationProblems.wrong_account);
   }
-  if (!outcome.ok) throw new AppError(`gone:invitation_${outcome.reason}`, invitationProblems[outcome.reason]);
+  if (!outcome.ok)
+    throw new AppError(`gone:invitation_${outcome.reason}`, invitationProblems[outcome.reason]);
   return Response.json({ gardenId: outcome.gardenId, role: outcome.role });
 });

@@ -12,6 +12,10 @@ export const POST = route(async (request) => {
     tokenHash: hashLinkToken(input.token),
     newPasswordHash: await hashPassword(input.newPassword),
   });
-  if (!outcome.ok) throw new AppError(`gone:reset_${outcome.reason}`, resetProblems[outcome.reason]);
-  return Response.json({ ok: true, message: "Your password is changed. Sign in with the new one." });
+  if (!outcome.ok)
+    throw new AppError(`gone:reset_${outcome.reason}`, resetProblems[outcome.reason]);
+  return Response.json({
+    ok: true,
+    message: "Your password is changed. Sign in with the new one.",
+  });
 });

@@ -7,7 +7,11 @@ import { requirePageMember } from "@/lib/auth/page-session";
 
 export const metadata: Metadata = { title: "Settings" };
 
-export default async function GardenSettingsPage({ params }: { params: Promise<{ gardenId: string }> }) {
+export default async function GardenSettingsPage({
+  params,
+}: {
+  params: Promise<{ gardenId: string }>;
+}) {
   const { gardenId } = await params;
   await requirePageMember(gardenId, "owner");
   const garden = await getGardenById({ gardenId });

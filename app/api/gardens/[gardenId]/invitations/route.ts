@@ -21,8 +21,18 @@ export const POST = route<Params>(async (request, { params }) => {
   const member = await requireRole(request, gardenId, "owner");
   const input = await parseJson(request, inviteSchema);
   const { token, tokenHash } = createLinkToken();
-  const invitation = await createInvitation({ gardenId, ...input, tokenHash, invitedBy: member.user.id });
-  const mailSent = await deliverInvitation({ invitation, token, inviter: member.user, baseUrl: appBaseUrl(request) });
+  const invitation = await createInvitation({
+    gardenId,
+    ...input,
+    tokenHash,
+    invitedBy: member.user.id,
+  });
+  const mailSent = await deliverInvitation({
+    invitation,
+    token,
+    inviter: member.user,
+    baseUrl: appBaseUrl(request),
+  });
   return Response.json(
     {
       invitation: { ...invitation, mailStatus: mailSent ? "sent" : "failed" },

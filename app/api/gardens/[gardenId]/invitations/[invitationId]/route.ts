@@ -10,6 +10,7 @@ const paramsSchema = z.object({ gardenId: z.uuid(), invitationId: z.uuid() });
 export const DELETE = route<z.infer<typeof paramsSchema>>(async (request, { params }) => {
   const { gardenId, invitationId } = await parseParams(params, paramsSchema);
   await requireRole(request, gardenId, "owner");
-  if (!(await revokeInvitation({ gardenId, invitationId }))) throw new AppError("not_found:invitation");
+  if (!(await revokeInvitation({ gardenId, invitationId })))
+    throw new AppError("not_found:invitation");
   return Response.json({ ok: true });
 });

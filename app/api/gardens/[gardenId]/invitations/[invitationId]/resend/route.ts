@@ -13,10 +13,19 @@ export const POST = route<z.infer<typeof paramsSchema>>(async (request, { params
   const { gardenId, invitationId } = await parseParams(params, paramsSchema);
   const member = await requireRole(request, gardenId, "owner");
   const existing = await getInvitation({ gardenId, invitationId });
-  if (!existing || existing.acceptedAt || existing.revokedAt) throw new AppError("not_found:invitation");
+  if (!existing || existing.acceptedAt || existing.revokedAt)
+    throw new AppError("not_found:invitation");
   const { token, tokenHash } = createLinkToken();
   await renewInvitationToken({ invitationId, tokenHash });
   const invitation = (await getInvitation({ gardenId, invitationId }))!;
-  const mailSent = await deliverInvitation({ invitation, token, inviter: member.user, baseUrl: appBaseUrl(request) });
-  return Response.json({ mailSent, invitation: { ...invitation, mailStatus: mailSent ? "sent" : "failed" } });
+  const mailSent = await deliverInvitation({
+    invitation,
+    token,
+    inviter: member.user,
+    baseUrl: appBaseUrl(request),
+  });
+  return Response.json({
+    mailSent,
+    invitation: { ...invitation, mailStatus: mailSent ? "sent" : "failed" },
+  });
 });
