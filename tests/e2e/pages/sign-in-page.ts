@@ -7,7 +7,9 @@ export class SignInPage {
   ) {}
 
   async open(next?: string) {
-    await this.page.goto(`${this.baseUrl}/sign-in${next ? `?next=${encodeURIComponent(next)}` : ""}`);
+    await this.page.goto(
+      `${this.baseUrl}/sign-in${next ? `?next=${encodeURIComponent(next)}` : ""}`,
+    );
   }
 
   async signIn(email: string, password: string) {
