@@ -79,3 +79,19 @@ export async function setPassword(input: {
     .returning({ v: users.sessionVersion });
   return row?.v ?? 0;
 }
+
+/** What a reset link's page shows before the form: usable, or why not. */
+export async function getPasswordResetStatus(input: {
+  tokenHash: string;
+  now?: Date;
+}): Promise<"ok" | "invalid" | "expired" | "used"> {
+  const db = await getDb();
+  const [row] = await db
+    .select({ expiresAt: passwordResetTokens.expiresAt, usedAt: passwordResetTokens.usedAt })
+    .from(passwordResetTokens)
+    .where(eq(passwordResetTokens.tokenHash, input.tokenHash))
+    .limit(1);
+  if (!row) return "invalid";
+  if (row.usedAt) return "used";
+  return row.expiresAt.getTime() <= (input.now ?? new Date()).getTime() ? "expired" : "ok";
+}
