@@ -39,6 +39,25 @@ export const demoGarden = {
   location: "Back plot, next to the Hollis Street community beds",
 };
 
+// The community-garden neighbour: Maren also grows there, so the garden
+// switcher has somewhere to go. Its owner has no published demo password.
+export const neighbourGarden = {
+  garden: {
+    name: "Linden Row community beds",
+    timeZone: "America/Chicago",
+    unitSystem: "us" as const,
+    lastSpringFrost: "2026-04-22",
+    firstFallFrost: "2026-10-18",
+    location: "Shared plots across the alley from Hollis Street",
+  },
+  owner: { email: "jun@example.com", name: "Jun Park" },
+  memberRoles: { owner: "grower", grower: "helper" } as const,
+  beds: [
+    { name: "Plot 3", kind: "bed" as const, lengthM: 10 * FT, widthM: 4 * FT, depthM: 8 * IN },
+    { name: "Plot 4", kind: "bed" as const, lengthM: 10 * FT, widthM: 4 * FT, depthM: 8 * IN },
+  ],
+};
+
 export const demoBins = {
   stack: {
     name: "Cedar stack",

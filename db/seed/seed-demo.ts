@@ -22,6 +22,7 @@ import {
   demoMembers,
   demoPlantings,
   demoWormMove,
+  neighbourGarden,
 } from "./demo-garden";
 import { defaultRuleByClass, ensureStarterCrops } from "./starter-crops";
 
@@ -69,8 +70,29 @@ export async function seedDemoGarden(db: Db): Promise<{ created: boolean }> {
     const plantingRows = await insertPlantings(tx, gardenId, bedIds);
     const lots = await insertBinLogs(tx, gardenId, binIds, userIds.helper!);
     await insertApplications(tx, gardenId, plantingRows, lots, userIds.helper!);
+    await insertNeighbourGarden(tx, userIds, hashes[0]!);
     return { created: true };
   });
+}
+
+async function insertNeighbourGarden(
+  tx: Tx,
+  userIds: Record<string, string>,
+  passwordHash: string,
+) {
+  const { garden, owner, memberRoles, beds: plots } = neighbourGarden;
+  const [row] = await tx.insert(gardens).values(garden).returning({ id: gardens.id });
+  // Not a published demo account: it gets a hash nobody is told the password of.
+  const [neighbour] = await tx
+    .insert(users)
+    .values({ ...owner, passwordHash: `${passwordHash}x` })
+    .returning({ id: users.id });
+  await tx.insert(memberships).values([
+    { gardenId: row!.id, userId: neighbour!.id, role: "owner" },
+    { gardenId: row!.id, userId: userIds.owner!, role: memberRoles.owner },
+    { gardenId: row!.id, userId: userIds.grower!, role: memberRoles.grower },
+  ]);
+  await tx.insert(beds).values(plots.map((p) => ({ gardenId: row!.id, ...p })));
 }
 
 async function insertBins(tx: Tx, gardenId: string) {

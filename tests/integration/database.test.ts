@@ -5,7 +5,7 @@ import { sql } from "drizzle-orm";
 import { afterAll, describe, expect, it } from "vitest";
 import * as gardens from "@/app/api/gardens/route";
 import { getDb, getDbKind, migrationsFolder } from "@/db";
-import { demoGarden, demoMembers } from "@/db/seed/demo-garden";
+import { demoGarden, demoMembers, neighbourGarden } from "@/db/seed/demo-garden";
 import { seedDemoGarden } from "@/db/seed/seed-demo";
 import {
   call,
@@ -68,8 +68,11 @@ describe("demo seed", () => {
     const first = await seedDemoGarden(db);
     expect(first).toEqual({ created: true });
     const afterFirst = await counts();
-    expect(afterFirst.gardens).toBe(1);
-    expect(afterFirst.memberships).toBe(demoMembers.length);
+    // The household plot and its community-garden neighbour (PRODUCT.md demo scenario).
+    expect(afterFirst.gardens).toBe(2);
+    expect(afterFirst.memberships).toBe(
+      demoMembers.length + 1 + Object.keys(neighbourGarden.memberRoles).length,
+    );
     expect(afterFirst.bin_events).toBeGreaterThan(0);
 
     const second = await seedDemoGarden(db);
@@ -81,9 +84,15 @@ describe("demo seed", () => {
     for (const m of demoMembers) {
       const cookie = await signIn(m.email, m.password);
       const res = await call(gardens.GET, { url: "/api/gardens", cookie });
-      expect(res.json.gardens).toEqual([
+      const neighbourRole = (neighbourGarden.memberRoles as Record<string, string>)[m.role];
+      const expected = [
         expect.objectContaining({ name: demoGarden.name, role: m.role }),
-      ]);
+        ...(neighbourRole
+          ? [expect.objectContaining({ name: neighbourGarden.garden.name, role: neighbourRole })]
+          : []),
+      ];
+      expect(res.json.gardens).toEqual(expect.arrayContaining(expected));
+      expect(res.json.gardens).toHaveLength(expected.length);
     }
   });
 });

@@ -24,7 +24,7 @@ export default async function GardenOverviewPage({
   const figures = [
     { label: "Beds", value: summary.beds },
     { label: "Containers", value: summary.containers },
-    { label: "Growing plantings", value: summary.activePlantings },
+    { label: "Plantings, current and planned", value: summary.activePlantings },
     { label: "Worm bins", value: summary.bins },
     { label: "Members", value: summary.members },
   ];
