@@ -1,4 +1,4 @@
-import { count } from "drizzle-orm";
+import { count, eq } from "drizzle-orm";
 import type { Db } from "@/db";
 import {
   applications,
@@ -250,14 +250,15 @@ async function insertApplications(
   lots: Lot[],
   helperId: string,
 ) {
-  const { eq } = await import("drizzle-orm");
   for (const day of ["2026-09-01", "2026-10-01", "2026-11-01"]) {
     for (const row of rows) {
       const p = row.seed;
       const active = p.plantedOn <= day && (!p.endedOn || p.endedOn >= day);
       const indoorBasil = p.bed === "pot-basil";
       const inSeason = day <= "2026-10-18" || indoorBasil;
-      if (!active || !inSeason) continue;
+      // Light feeders' default rule is every second month (September, November).
+      const offMonth = row.feederClass === "light" && day === "2026-10-01";
+      if (!active || !inSeason || offMonth) continue;
       const amount = defaultRuleByClass[row.feederClass].amountSi * p.count;
       // Oldest lot first, the same rule the plan uses.
       const lot = lots.find((l) => l.producedOn <= day && l.remaining >= amount);
