@@ -14,7 +14,7 @@ const nextConfig = {
   allowedDevOrigins: ["127.0.0.1"],
   poweredByHeader: false,
   async headers() {
-    // Kept in step with lib/security-headers.ts (this file is plain ESM and cannot import TypeScript).
+    // Headers every response gets; the page CSP itself (with its nonce) is set in proxy.ts.
     return [
       {
         source: "/:path*",
