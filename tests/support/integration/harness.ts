@@ -44,6 +44,13 @@ export interface CallResult {
   cookie: string | null;
 }
 
+let addressCounter = 0;
+/** A fresh address from 198.18.0.0/15 (RFC 2544, reserved for testing). */
+function nextTestAddress(): string {
+  addressCounter += 1;
+  return `198.${18 + Math.floor(addressCounter / 65_536)}.${Math.floor(addressCounter / 256) % 256}.${addressCounter % 256}`;
+}
+
 export async function call(handler: Handler, options: CallOptions = {}): Promise<CallResult> {
   const headers = new Headers(options.headers);
   let body: string | undefined;
@@ -52,6 +59,8 @@ export async function call(handler: Handler, options: CallOptions = {}): Promise
     if (!headers.has("content-type")) headers.set("content-type", "application/json");
   }
   if (options.cookie) headers.set("cookie", options.cookie);
+  // Each call from its own address (env.ts trusts one proxy), unless the test picks one.
+  if (!headers.has("x-forwarded-for")) headers.set("x-forwarded-for", nextTestAddress());
   const method = options.method ?? (body === undefined ? "GET" : "POST");
   const url = new URL(options.url ?? "/api/test", BASE_URL);
   const request = new Request(url, { method, headers, body });
@@ -101,9 +110,11 @@ export async function signUpUser(label: string, password = TEST_PASSWORD): Promi
     url: "/api/account",
     body: { name, email, password },
   });
-  if (res.status !== 201 || !res.cookie)
+  if (res.status !== 202 || !res.cookie)
     throw new Error(`sign-up failed (${res.status}): ${res.text}`);
-  return { id: res.json.user.id, email, name, password, cookie: res.cookie };
+  const me = await call(accountRoute.GET, { url: "/api/account", cookie: res.cookie });
+  if (me.status !== 200) throw new Error(`sign-up did not sign in (${me.status}): ${me.text}`);
+  return { id: me.json.user.id, email, name, password, cookie: res.cookie };
 }
 
 /** Signs up and returns the session cookie ("castline.session=..."). */
@@ -116,7 +127,7 @@ export async function signUp(
     url: "/api/account",
     body: { name, email, password },
   });
-  if (res.status !== 201 || !res.cookie)
+  if (res.status !== 202 || !res.cookie)
     throw new Error(`sign-up failed (${res.status}): ${res.text}`);
   return res.cookie;
 }

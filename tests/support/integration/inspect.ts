@@ -73,8 +73,15 @@ export async function countRows(table: string): Promise<number> {
   return result.rows[0]!.n;
 }
 
-// sign_in_attempts is left out on purpose: a refused sign-in is meant to be recorded.
-const SNAPSHOT_TABLES = ["users", "gardens", "memberships", "invitations", "password_reset_tokens"];
+// throttle_counters is left out on purpose: a refused request is meant to be counted.
+const SNAPSHOT_TABLES = [
+  "users",
+  "gardens",
+  "memberships",
+  "invitations",
+  "password_reset_tokens",
+  "sessions",
+];
 
 /** Everything a role-gated mutation could touch, as one comparable value. */
 export async function snapshotDb(): Promise<string> {
