@@ -5,6 +5,7 @@ import { memberships } from "@/db/schema";
 import * as accountRoute from "@/app/api/account/route";
 import * as gardensRoute from "@/app/api/gardens/route";
 import * as sessionRoute from "@/app/api/session/route";
+import { settleAfterResponseWork } from "@/lib/after-response";
 import type { Role } from "@/lib/auth/roles";
 import { issueSessionCookie } from "@/lib/auth/session";
 import { stopLocalSmtpServer } from "@/services/mail";
@@ -112,6 +113,8 @@ export async function signUpUser(label: string, password = TEST_PASSWORD): Promi
   });
   if (res.status !== 202 || !res.cookie)
     throw new Error(`sign-up failed (${res.status}): ${res.text}`);
+  // The welcome mail goes out after the response; let it land so tests start quiet.
+  await settleAfterResponseWork();
   const me = await call(accountRoute.GET, { url: "/api/account", cookie: res.cookie });
   if (me.status !== 200) throw new Error(`sign-up did not sign in (${me.status}): ${me.text}`);
   return { id: me.json.user.id, email, name, password, cookie: res.cookie };
