@@ -12,7 +12,9 @@ export function appBaseUrl(): string {
   const configured = env.APP_ORIGIN ?? env.AUTH_URL;
   if (configured) return new URL(configured).origin;
   if (env.NODE_ENV === "production" && !env.CASTLINE_DEMO) {
-    throw new Error("Set APP_ORIGIN (or AUTH_URL) to the public origin, e.g. https://garden.example.org");
+    throw new Error(
+      "Set APP_ORIGIN (or AUTH_URL) to the public origin, e.g. https://garden.example.org",
+    );
   }
   return `http://localhost:${env.PORT ?? 3000}`;
 }

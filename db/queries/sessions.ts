@@ -13,7 +13,9 @@ export async function createSession(input: {
 }): Promise<void> {
   const db = await getDb();
   await db.transaction(async (tx) => {
-    await tx.insert(sessions).values({ id: input.sessionId, userId: input.userId, expiresAt: input.expiresAt });
+    await tx
+      .insert(sessions)
+      .values({ id: input.sessionId, userId: input.userId, expiresAt: input.expiresAt });
     // Rows past their expiry can never be used again; keep the table small.
     await tx.delete(sessions).where(lt(sessions.expiresAt, new Date()));
   });

@@ -7,7 +7,10 @@ import { clientAddress, consumeLimits, limits, returnHits } from "./throttle";
 
 export const BAD_CREDENTIALS_MESSAGE = "That e-mail and password do not match an account.";
 
-const SIGN_IN_REFUSAL = { code: "rate_limited:sign_in" as const, message: "Too many failed sign-ins." };
+const SIGN_IN_REFUSAL = {
+  code: "rate_limited:sign_in" as const,
+  message: "Too many failed sign-ins.",
+};
 
 /**
  * Checks an e-mail and password. Unknown e-mail and wrong password give the same

@@ -38,12 +38,36 @@ export const limits = {
     windowMs: SIGN_IN_WINDOW_MS,
   }),
   // Mail-sending requests: nobody may flood an inbox or our mail server.
-  signUpAddress: (address: string): Limit => ({ key: `signup-address:${address}`, max: 20, windowMs: 60 * MINUTE }),
-  signUpEmail: (email: string): Limit => ({ key: `signup-email:${normalise(email)}`, max: 3, windowMs: 60 * MINUTE }),
-  resetAddress: (address: string): Limit => ({ key: `reset-address:${address}`, max: 20, windowMs: 60 * MINUTE }),
-  resetEmail: (email: string): Limit => ({ key: `reset-email:${normalise(email)}`, max: 3, windowMs: 60 * MINUTE }),
-  inviteGarden: (gardenId: string): Limit => ({ key: `invite-garden:${gardenId}`, max: 20, windowMs: 60 * MINUTE }),
-  inviteEmail: (email: string): Limit => ({ key: `invite-email:${normalise(email)}`, max: 3, windowMs: 60 * MINUTE }),
+  signUpAddress: (address: string): Limit => ({
+    key: `signup-address:${address}`,
+    max: 20,
+    windowMs: 60 * MINUTE,
+  }),
+  signUpEmail: (email: string): Limit => ({
+    key: `signup-email:${normalise(email)}`,
+    max: 3,
+    windowMs: 60 * MINUTE,
+  }),
+  resetAddress: (address: string): Limit => ({
+    key: `reset-address:${address}`,
+    max: 20,
+    windowMs: 60 * MINUTE,
+  }),
+  resetEmail: (email: string): Limit => ({
+    key: `reset-email:${normalise(email)}`,
+    max: 3,
+    windowMs: 60 * MINUTE,
+  }),
+  inviteGarden: (gardenId: string): Limit => ({
+    key: `invite-garden:${gardenId}`,
+    max: 20,
+    windowMs: 60 * MINUTE,
+  }),
+  inviteEmail: (email: string): Limit => ({
+    key: `invite-email:${normalise(email)}`,
+    max: 3,
+    windowMs: 60 * MINUTE,
+  }),
 };
 
 export const INVITE_REFUSAL: { code: ErrorCode; message: string } = {
@@ -81,7 +105,11 @@ export async function consumeLimits(
   now = new Date(),
 ): Promise<void> {
   for (const limit of list) {
-    const { hits, windowStartedAt } = await hitThrottleCounter({ key: limit.key, windowMs: limit.windowMs, now });
+    const { hits, windowStartedAt } = await hitThrottleCounter({
+      key: limit.key,
+      windowMs: limit.windowMs,
+      now,
+    });
     if (hits > limit.max) {
       const retryAfter = Math.max(
         1,

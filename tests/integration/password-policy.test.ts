@@ -43,7 +43,9 @@ describe("password policy", () => {
   it("refuses common passwords, and the own e-mail when changing the password", async () => {
     // "password1" and "iloveyou" head most leaked-password lists (zxcvbn-ts passwords-common).
     for (const password of ["password1", "iloveyou", "12345678"]) {
-      expect((await signUpWith({ name: "Rowan", email: uniqueEmail("c"), password })).status).toBe(400);
+      expect((await signUpWith({ name: "Rowan", email: uniqueEmail("c"), password })).status).toBe(
+        400,
+      );
     }
     const user = await signUpUser("changer");
     const res = await call(accountPassword.POST, {

@@ -37,7 +37,9 @@ describe("server-side session allow-list", () => {
     const user = await signUpUser("revive");
     const cookie = await signIn(user.email, user.password);
     expect((await me(cookie)).status).toBe(200);
-    expect((await call(session.DELETE, { url: "/api/session", method: "DELETE", cookie })).status).toBe(200);
+    expect(
+      (await call(session.DELETE, { url: "/api/session", method: "DELETE", cookie })).status,
+    ).toBe(200);
     expect((await me(cookie)).status).toBe(401);
 
     const revived = await authCall("session", "GET", cookie);
@@ -79,7 +81,9 @@ describe("server-side session allow-list", () => {
     expect((await me(kept)).status).toBe(200);
 
     const tablet = await signIn(user.email, "compost-tea-at-dawn-77");
-    expect((await call(everywhere.POST, { url: "/api/session/everywhere", cookie: kept })).status).toBe(200);
+    expect(
+      (await call(everywhere.POST, { url: "/api/session/everywhere", cookie: kept })).status,
+    ).toBe(200);
     expect((await me(kept)).status).toBe(401);
     expect((await me(tablet)).status).toBe(401);
   });

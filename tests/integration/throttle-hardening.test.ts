@@ -68,7 +68,9 @@ describe("sign-in guessing", () => {
     for (let a = 0; a < 6; a++) {
       const email = uniqueEmail("spray");
       for (let i = 0; i < 9; i++) {
-        const res = await attempt(email, "guess-guess-1", { "x-forwarded-for": `192.0.2.${a * 9 + i + 1}` });
+        const res = await attempt(email, "guess-guess-1", {
+          "x-forwarded-for": `192.0.2.${a * 9 + i + 1}`,
+        });
         statuses.push(res.status);
       }
     }
@@ -87,7 +89,9 @@ describe("sign-in guessing", () => {
       await attempt(owner.email, "wrong-guess-99", { "x-forwarded-for": `203.0.113.${100 + i}` });
     }
     // Untrusted clients are locked out of this account, even with the right password…
-    const untrusted = await attempt(owner.email, owner.password, { "x-forwarded-for": "203.0.113.200" });
+    const untrusted = await attempt(owner.email, owner.password, {
+      "x-forwarded-for": "203.0.113.200",
+    });
     expect(untrusted.status).toBe(429);
     // …but the browser that signed in before carries a device cookie and is let in.
     const trusted = await attempt(owner.email, owner.password, {
@@ -165,9 +169,16 @@ describe("mail floods", () => {
   it("limits invitation sends per invited address and per garden", async () => {
     const world = await makeGardenWithRoles();
     const cookie = await cookieFor(world.owner);
-    const at = { url: `/api/gardens/${world.gardenId}/invitations`, params: { gardenId: world.gardenId } };
+    const at = {
+      url: `/api/gardens/${world.gardenId}/invitations`,
+      params: { gardenId: world.gardenId },
+    };
     const target = uniqueEmail("inviteflood");
-    const created = await call(invitations.POST, { ...at, cookie, body: { email: target, role: "viewer" } });
+    const created = await call(invitations.POST, {
+      ...at,
+      cookie,
+      body: { email: target, role: "viewer" },
+    });
     expect(created.status).toBe(201);
     const invitationId = created.json.invitation.id as string;
     const resends: number[] = [];

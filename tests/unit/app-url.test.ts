@@ -25,14 +25,24 @@ describe("appBaseUrl", () => {
   });
 
   it("defaults to localhost and PORT in development and demo", () => {
-    withEnv({ APP_ORIGIN: undefined, AUTH_URL: undefined, NODE_ENV: "development", PORT: undefined });
+    withEnv({
+      APP_ORIGIN: undefined,
+      AUTH_URL: undefined,
+      NODE_ENV: "development",
+      PORT: undefined,
+    });
     expect(appBaseUrl()).toBe("http://localhost:3000");
     withEnv({ NODE_ENV: "production", CASTLINE_DEMO: "1", PORT: "4100" });
     expect(appBaseUrl()).toBe("http://localhost:4100");
   });
 
   it("refuses to make links on a production server with no configured origin", () => {
-    withEnv({ APP_ORIGIN: undefined, AUTH_URL: undefined, NODE_ENV: "production", CASTLINE_DEMO: "0" });
+    withEnv({
+      APP_ORIGIN: undefined,
+      AUTH_URL: undefined,
+      NODE_ENV: "production",
+      CASTLINE_DEMO: "0",
+    });
     expect(() => appBaseUrl()).toThrow(/APP_ORIGIN/);
   });
 });

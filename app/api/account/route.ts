@@ -36,7 +36,10 @@ export const POST = route(async (request) => {
     headers.append("Set-Cookie", await issueSessionCookie(user));
     headers.append("Set-Cookie", issueDeviceCookie(user.email));
     afterResponse("welcome mail", () =>
-      trySend({ to: user.email, ...welcomeMail({ name: user.name, signInUrl: `${baseUrl}/sign-in` }) }),
+      trySend({
+        to: user.email,
+        ...welcomeMail({ name: user.name, signInUrl: `${baseUrl}/sign-in` }),
+      }),
     );
   } else {
     afterResponse("sign-up attempt mail", async () => {

@@ -10,7 +10,10 @@ import { requestResetSchema } from "@/lib/validation/auth";
 import { passwordResetMail } from "@/services/mail";
 import { trySend } from "@/services/mailer";
 
-const RESET_REFUSAL = { code: "rate_limited:password_reset" as const, message: "Too many reset requests." };
+const RESET_REFUSAL = {
+  code: "rate_limited:password_reset" as const,
+  message: "Too many reset requests.",
+};
 
 // Always the same answer in the same time: the look-up, the token and the mail all
 // happen after the response, so neither words nor timing say whether the address has

@@ -101,7 +101,8 @@ const ownerOnly = (ok: number) => ({
 
 const g = (ctx: RowContext) => ({ gardenId: ctx.world.gardenId });
 // The catch-all's params are a list of path segments.
-const authPath = (path: string) => ({ nextauth: path.split("/") }) as unknown as Record<string, string>;
+const authPath = (path: string) =>
+  ({ nextauth: path.split("/") }) as unknown as Record<string, string>;
 
 async function openInvitation(ctx: RowContext, email = uniqueEmail("invitee")) {
   const { token, tokenHash } = createLinkToken();
