@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { newPasswordSchema } from "./password";
+import { plainText } from "./text";
 
 export const emailSchema = z
   .string({ error: "Enter your e-mail address." })
@@ -14,7 +15,9 @@ export const signInSchema = z.object({
 export type SignInInput = z.infer<typeof signInSchema>;
 
 export const signUpSchema = z.object({
-  name: z.string().trim().min(1, "Enter your name.").max(100, "Use at most 100 characters."),
+  name: plainText("Enter your name.")
+    .min(1, "Enter your name.")
+    .max(100, "Use at most 100 characters."),
   email: emailSchema,
   password: newPasswordSchema,
 });

@@ -2,7 +2,7 @@ import { createUser, EmailTakenError } from "@/db/queries/users";
 import { hashPassword } from "@/lib/auth/password";
 import { issueSessionCookie, requireUser } from "@/lib/auth/session";
 import { AppError } from "@/lib/errors";
-import { parseJson, route } from "@/lib/http";
+import { parseJson, route, refuseOtherMethods } from "@/lib/http";
 import { signUpSchema } from "@/lib/validation/auth";
 
 export const GET = route(async (request) => {
@@ -33,3 +33,6 @@ export const POST = route(async (request) => {
     throw error;
   }
 });
+
+// Any other method: a JSON 405 with an Allow header, not Next's empty one.
+export const { PUT, PATCH, DELETE } = refuseOtherMethods({ GET, POST });

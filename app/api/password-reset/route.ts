@@ -2,7 +2,7 @@ import { createPasswordReset, RESET_TTL_MS } from "@/db/queries/password-resets"
 import { getUserByEmail } from "@/db/queries/users";
 import { createLinkToken } from "@/lib/auth/tokens";
 import { appBaseUrl } from "@/lib/app-url";
-import { parseJson, route } from "@/lib/http";
+import { parseJson, route, refuseOtherMethods } from "@/lib/http";
 import { RESET_REQUESTED_MESSAGE } from "@/lib/messages";
 import { requestResetSchema } from "@/lib/validation/auth";
 import { passwordResetMail } from "@/services/mail";
@@ -23,3 +23,6 @@ export const POST = route(async (request) => {
   }
   return Response.json({ ok: true, message: RESET_REQUESTED_MESSAGE }, { status: 202 });
 });
+
+// Any other method: a JSON 405 with an Allow header, not Next's empty one.
+export const { GET, PUT, PATCH, DELETE } = refuseOtherMethods({ POST });

@@ -392,6 +392,8 @@ export const roleMatrix: MatrixRow[] = [
 
 /** Route files deliberately outside the matrix, with the reason. */
 export const matrixExclusions: Record<string, string> = {
+  "app/api/[...path]/route.ts":
+    "The JSON 404 for /api paths no route claims: the same answer for everyone (request-guards.test.ts).",
   "app/api/auth/[...nextauth]/route.ts":
     "Auth.js's own endpoints (CSRF token + form posts); they share verifyCredentials and the throttle with POST /api/session, which the matrix covers.",
 };

@@ -3,7 +3,7 @@ import { createInvitation, listOpenInvitations } from "@/db/queries/invitations"
 import { requireRole } from "@/lib/auth/require-role";
 import { createLinkToken } from "@/lib/auth/tokens";
 import { appBaseUrl } from "@/lib/app-url";
-import { parseJson, parseParams, route } from "@/lib/http";
+import { parseJson, parseParams, route, refuseOtherMethods } from "@/lib/http";
 import { deliverInvitation } from "@/lib/invitations";
 import { inviteSchema } from "@/lib/validation/garden";
 
@@ -11,13 +11,13 @@ const paramsSchema = z.object({ gardenId: z.uuid() });
 type Params = z.infer<typeof paramsSchema>;
 
 export const GET = route<Params>(async (request, { params }) => {
-  const { gardenId } = await parseParams(params, paramsSchema);
+  const { gardenId } = await parseParams(request, params, paramsSchema);
   await requireRole(request, gardenId, "owner");
   return Response.json({ invitations: await listOpenInvitations({ gardenId }) });
 });
 
 export const POST = route<Params>(async (request, { params }) => {
-  const { gardenId } = await parseParams(params, paramsSchema);
+  const { gardenId } = await parseParams(request, params, paramsSchema);
   const member = await requireRole(request, gardenId, "owner");
   const input = await parseJson(request, inviteSchema);
   const { token, tokenHash } = createLinkToken();
@@ -44,3 +44,6 @@ export const POST = route<Params>(async (request, { params }) => {
     { status: 201 },
   );
 });
+
+// Any other method: a JSON 405 with an Allow header, not Next's empty one.
+export const { PUT, PATCH, DELETE } = refuseOtherMethods({ GET, POST });
