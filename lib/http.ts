@@ -110,7 +110,7 @@ export function refuseOtherMethods<H extends Partial<Record<HttpMethod, unknown>
     toResponse(new AppError("method_not_allowed", undefined, undefined, { Allow: allow }));
   return Object.fromEntries(
     HTTP_METHODS.filter((m) => !(m in implemented)).map((m) => [m, refuse]),
-  ) as Record<Exclude<HttpMethod, keyof H>, Handler<never>>;
+  ) as unknown as Record<Exclude<HttpMethod, keyof H>, Handler<never>>;
 }
 
 export const BODY_LIMIT_BYTES = 1_000_000;
