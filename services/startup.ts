@@ -52,7 +52,10 @@ function installShutdownHandlers(): void {
     // handler finish and are answered, so no write is saved without its reply.
     beginDraining(DRAIN_TIMEOUT_MS)
       .then(async (stillRunning) => {
-        if (stillRunning) console.warn(`[castline] ${stillRunning} request(s) cut off after ${DRAIN_TIMEOUT_MS / 1000} s`);
+        if (stillRunning)
+          console.warn(
+            `[castline] ${stillRunning} request(s) cut off after ${DRAIN_TIMEOUT_MS / 1000} s`,
+          );
         await new Promise((resolve) => setTimeout(resolve, FLUSH_MS));
         console.log(`[castline] ${signal}: closing the database`);
         // PGlite runs one query at a time, so close() waits for the one in flight.

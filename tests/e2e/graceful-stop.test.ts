@@ -63,13 +63,18 @@ async function startWithNpm(port: number) {
   let output = "";
   child.stdout!.on("data", (d) => (output += d));
   child.stderr!.on("data", (d) => (output += d));
-  const exited = new Promise<number | null>((resolve) => child.once("exit", (code) => resolve(code)));
+  const exited = new Promise<number | null>((resolve) =>
+    child.once("exit", (code) => resolve(code)),
+  );
   const base = `http://127.0.0.1:${port}`;
   const deadline = Date.now() + 90_000;
   for (;;) {
     if (child.exitCode !== null) throw new Error(`npm run start exited early:\n${output}`);
     if (Date.now() > deadline) throw new Error(`never healthy:\n${output}`);
-    const ok = await fetch(`${base}/api/health`).then((r) => r.ok, () => false);
+    const ok = await fetch(`${base}/api/health`).then(
+      (r) => r.ok,
+      () => false,
+    );
     if (ok) break;
     await new Promise((r) => setTimeout(r, 300));
   }
@@ -134,14 +139,20 @@ describe("stopping the server", () => {
     await Promise.all(Array.from({ length: 12 }, writer));
     const code = await server.exited;
     // The server itself is gone too: nothing listens and the lock is released.
-    expect(await fetch(`${server.base}/api/health`).then(() => "answered", () => "closed")).toBe(
-      "closed",
-    );
+    expect(
+      await fetch(`${server.base}/api/health`).then(
+        () => "answered",
+        () => "closed",
+      ),
+    ).toBe("closed");
     expect(fs.existsSync(lockFile), server.output()).toBe(false);
     expect(server.output()).toContain("SIGTERM: closing the database");
     expect(code).not.toBeNull();
     // Anything refused during the stop was refused as "restarting", never a 500.
-    expect(refused.every((s) => s === 503), refused.join(",")).toBe(true);
+    expect(
+      refused.every((s) => s === 503),
+      refused.join(","),
+    ).toBe(true);
 
     const db = new PGlite(dataDir);
     const { rows } = await db.query<{ name: string }>(

@@ -12,14 +12,14 @@ import { resetEnvCache } from "@/lib/env";
 
 const tmp = fs.mkdtempSync(path.join(os.tmpdir(), "castline-symlink-"));
 
-function useDir(dir: string) {
+function pointAt(dir: string) {
   process.env.PGLITE_DIR = dir;
   resetEnvCache();
 }
 
 afterEach(closeDb);
 afterAll(() => {
-  useDir("memory://");
+  pointAt("memory://");
   fs.rmSync(tmp, { recursive: true, force: true });
 });
 
@@ -29,7 +29,7 @@ describe("PGLITE_DIR", () => {
     const link = path.join(tmp, "linked-data");
     fs.mkdirSync(real);
     fs.symlinkSync(real, link);
-    useDir(link);
+    pointAt(link);
     const db = await getDb();
     await db.execute(sql`create table probe (n int)`);
     await db.execute(sql`insert into probe values (7)`);
@@ -37,7 +37,7 @@ describe("PGLITE_DIR", () => {
     // The data went to the real directory, and the lock sits beside it and is gone again.
     expect(fs.readdirSync(real).length).toBeGreaterThan(0);
     expect(fs.existsSync(`${real}.lock`)).toBe(false);
-    useDir(link);
+    pointAt(link);
     const again = (await (await getDb()).execute(sql`select n from probe`)) as unknown as {
       rows: { n: number }[];
     };
@@ -48,7 +48,7 @@ describe("PGLITE_DIR", () => {
     const realParent = path.join(tmp, "real-parent");
     fs.mkdirSync(realParent);
     fs.symlinkSync(realParent, path.join(tmp, "linked-parent"));
-    useDir(path.join(tmp, "linked-parent", "pgdata"));
+    pointAt(path.join(tmp, "linked-parent", "pgdata"));
     await getDb();
     expect(fs.existsSync(path.join(realParent, "pgdata.lock"))).toBe(true);
     await closeDb();
@@ -61,7 +61,7 @@ describe("PGLITE_DIR", () => {
     const dangling = path.join(tmp, "dangling");
     fs.symlinkSync(path.join(tmp, "gone"), dangling);
     for (const dir of [file, dangling]) {
-      useDir(dir);
+      pointAt(dir);
       const message = await getDb().then(
         () => "opened",
         (error: Error) => error.message,
