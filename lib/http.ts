@@ -2,8 +2,7 @@ import type { z } from "zod";
 import { requireUser } from "@/lib/auth/session";
 import { enterRequest } from "./draining";
 import { getEnv } from "./env";
-import { AppError, NO_STORE, toResponse } from "./errors";
-import { validationError } from "./errors";
+import { AppError, NO_STORE, toResponse, validationError } from "./errors";
 
 type RouteContext<P> = { params: Promise<P> };
 type Handler<P> = (request: Request, context: RouteContext<P>) => Promise<Response>;
