@@ -17,6 +17,8 @@ export const basisEnum = pgEnum("amount_basis", [
   "per-container-volume",
   "percent-of-mix",
 ]);
+// What a feeding rule's amount measures per basis unit.
+export const amountMeasureEnum = pgEnum("amount_measure", ["mass", "volume", "percent-of-mix"]);
 export const binKindEnum = pgEnum("bin_kind", ["stacked-tray", "single"]);
 export const binEventKindEnum = pgEnum("bin_event_kind", [
   "feeding",
@@ -27,5 +29,4 @@ export const binEventKindEnum = pgEnum("bin_event_kind", [
   "observation",
 ]);
 export const stockMaterialEnum = pgEnum("stock_material", ["castings", "leachate"]);
-export const siUnitEnum = pgEnum("si_unit", ["kg", "L"]);
 export const mailStatusEnum = pgEnum("mail_status", ["pending", "sent", "failed"]);
