@@ -51,6 +51,8 @@ ALTER TABLE "gardens" ALTER COLUMN "castings_price_per_kg" DROP DEFAULT;
 --> statement-breakpoint
 ALTER TABLE "gardens" ALTER COLUMN "castings_price_per_kg" DROP NOT NULL;
 --> statement-breakpoint
+ALTER TABLE "crops" ALTER COLUMN "name" DROP NOT NULL;
+--> statement-breakpoint
 ALTER TABLE "crops" ALTER COLUMN "edible_touches_soil" DROP DEFAULT;
 --> statement-breakpoint
 ALTER TABLE "crops" ALTER COLUMN "edible" DROP DEFAULT;
@@ -214,6 +216,8 @@ ALTER TABLE "beds" ADD CONSTRAINT "beds_size_for_kind" CHECK (("beds"."kind" = '
         or ("beds"."kind" = 'container' and "beds"."container_volume_l" > 0));
 --> statement-breakpoint
 ALTER TABLE "crops" ADD CONSTRAINT "crops_starter_without_rule" CHECK ("crops"."garden_id" is not null or "crops"."feeding_rule_id" is null);
+--> statement-breakpoint
+ALTER TABLE "crops" ADD CONSTRAINT "crops_starter_named" CHECK ("crops"."garden_id" is not null or "crops"."name" is not null);
 --> statement-breakpoint
 ALTER TABLE "feeding_rules" ADD CONSTRAINT "feeding_rules_amount_non_negative" CHECK ("feeding_rules"."amount_si" >= 0);
 --> statement-breakpoint

@@ -100,7 +100,8 @@ export const crops = pgTable(
     id: id(),
     // null = part of the shared starter list every garden sees.
     gardenId: uuid("garden_id").references(() => gardens.id, { onDelete: "cascade" }),
-    name: text("name").notNull(),
+    // null only for a garden's own unnamed crop (a scenario planting without a crop name).
+    name: text("name"),
     feederClass: feederClassEnum("feeder_class").notNull(),
     // Decides 120 vs 90 days for manure-fed outputs (7 CFR 205.203(c)(1)).
     edibleTouchesSoil: boolean("edible_touches_soil").notNull(),
@@ -115,6 +116,7 @@ export const crops = pgTable(
     // The shared starter crops carry no rule (the engine's default for the class
     // applies), so every crop rule there is is checked by the garden-scoped key.
     check("crops_starter_without_rule", sql`${t.gardenId} is not null or ${t.feedingRuleId} is null`),
+    check("crops_starter_named", sql`${t.gardenId} is not null or ${t.name} is not null`),
     foreignKey({
       name: "crops_rule_same_garden_fk",
       columns: [t.gardenId, t.feedingRuleId],
