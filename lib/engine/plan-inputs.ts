@@ -7,15 +7,15 @@ import {
   toDayNumber,
   yearOfDay,
   type DateRange,
-} from "@/lib/engine/dates";
-import { dflt } from "@/lib/engine/defaults";
-import type { BedInput, FeedingRule, PlantingInput } from "@/lib/engine/demand";
-import { EngineInputError } from "@/lib/engine/errors";
-import type { BinForecastInput } from "@/lib/engine/forecast";
-import { trayInsideFromOuter, trayInsideVolumeL } from "@/lib/engine/geometry";
-import type { LeachateInput } from "@/lib/engine/liquid";
-import type { StockLot } from "@/lib/engine/lots";
-import { isBoundedRule } from "@/lib/engine/recurrence";
+} from "@/lib/engine/core/dates";
+import { dflt } from "@/lib/engine/core/defaults";
+import type { BedInput, FeedingRule, PlantingInput } from "@/lib/engine/demand/demand";
+import { EngineInputError } from "@/lib/engine/core/errors";
+import type { BinForecastInput } from "@/lib/engine/supply/forecast";
+import { trayInsideFromOuter, trayInsideVolumeL } from "@/lib/engine/supply/geometry";
+import type { LeachateInput } from "@/lib/engine/supply/liquid";
+import type { StockLot } from "@/lib/engine/balance/lots";
+import { isBoundedRule } from "@/lib/engine/demand/recurrence";
 import type {
   Scenario,
   ScenarioBed,

@@ -5,16 +5,16 @@ import {
   rangeDays,
   toDayNumber,
   type DateRange,
-} from "@/lib/engine/dates";
-import { dflt } from "@/lib/engine/defaults";
+} from "@/lib/engine/core/dates";
+import { dflt } from "@/lib/engine/core/defaults";
 import {
   EngineInputError,
   requireInteger,
   requireNonNegative,
   requirePositive,
-} from "@/lib/engine/errors";
-import { fmt, plural } from "@/lib/engine/format";
-import type { Explanation, IsoDate, SupplyEvent } from "@/lib/engine/types";
+} from "@/lib/engine/core/errors";
+import { fmt, plural } from "@/lib/engine/core/format";
+import type { Explanation, IsoDate, SupplyEvent } from "@/lib/engine/core/types";
 
 export interface HarvestLog {
   date: IsoDate;

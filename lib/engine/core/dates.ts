@@ -1,5 +1,5 @@
-import { EngineInputError } from "@/lib/engine/errors";
-import type { IsoDate } from "@/lib/engine/types";
+import { EngineInputError } from "@/lib/engine/core/errors";
+import type { IsoDate } from "@/lib/engine/core/types";
 
 // Calendar days are handled as whole-day numbers counted from 1970-01-01 and built
 // with Date.UTC, never with local-time Date methods: a floating all-day date must
@@ -133,4 +133,49 @@ export function dayOfYearDate(year: number, [m, d]: [number, number]): number {
 
 export function yearOfDay(day: number): number {
   return new Date(day * MS_PER_DAY).getUTCFullYear();
+}
+
+/** Alias kept for readability where day numbers are turned back into dates. */
+export const isoFromDay = fromDayNumber;
+export const dayNumber = toDayNumber;
+
+const ISO_MONTH = /^(\d{4})-(\d{2})$/;
+
+
+/** "YYYY-MM" of a day number. */
+export function monthKeyOfDay(day: number): string {
+  return fromDayNumber(day).slice(0, 7);
+}
+
+export interface MonthSpan {
+  month: string; // "YYYY-MM"
+  startDay: number; // first day, inclusive
+  endDay: number; // first day of the next month, exclusive
+}
+
+/** Accepts "YYYY-MM" or "YYYY-MM-DD" (the day is ignored: balances run in whole months). */
+export function monthSpans(
+  from: string,
+  months: number,
+  field = "from",
+  maxMonths = 60,
+): MonthSpan[] {
+  const m = ISO_MONTH.exec(from) ?? ISO_DATE.exec(from);
+  if (!m) throw new EngineInputError(field, `must be a month written YYYY-MM (got "${from}")`);
+  const y = Number(m[1]);
+  const mo = Number(m[2]);
+  if (mo < 1 || mo > 12) throw new EngineInputError(field, `month must be 01–12 (got "${from}")`);
+  if (!Number.isInteger(months) || months < 1 || months > maxMonths) {
+    throw new EngineInputError(
+      "months",
+      `must be a whole number from 1 to ${maxMonths} (got ${months})`,
+    );
+  }
+  const spans: MonthSpan[] = [];
+  for (let i = 0; i < months; i++) {
+    const start = Math.round(Date.UTC(y, mo - 1 + i, 1) / MS_PER_DAY);
+    const end = Math.round(Date.UTC(y, mo + i, 1) / MS_PER_DAY);
+    spans.push({ month: fromDayNumber(start).slice(0, 7), startDay: start, endDay: end });
+  }
+  return spans;
 }

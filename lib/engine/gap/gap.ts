@@ -14,11 +14,11 @@
 //   low-priority plantings (all but the best priority number present; all
 //   plantings when they share one), smallest that balances, found by binary
 //   search over whole tenths of a percent; the cut returned was itself run.
-import { computeBalance } from "@/lib/engine/balance";
-import type { BalanceResult } from "@/lib/engine/balance-types";
-import { dayNumber, isoFromDay, monthSpans } from "@/lib/engine/balance-days";
-import { fmt } from "@/lib/engine/balance-explain";
-import type { DemandOccurrence, SupplyEvent } from "@/lib/engine/types";
+import { computeBalance } from "@/lib/engine/balance/balance";
+import type { BalanceResult } from "@/lib/engine/balance/types";
+import { dayNumber, isoFromDay, monthSpans } from "@/lib/engine/core/dates";
+import { fmt } from "@/lib/engine/balance/explain";
+import type { DemandOccurrence, SupplyEvent } from "@/lib/engine/core/types";
 import type {
   BalanceProof,
   ExtraTraysSuggestion,
@@ -27,7 +27,7 @@ import type {
   GapSuggestion,
   RateCutSuggestion,
   SecondBinSuggestion,
-} from "@/lib/engine/gap-types";
+} from "@/lib/engine/gap/types";
 
 type Outcome<T> = { ok: T } | { why: string };
 

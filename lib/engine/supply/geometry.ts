@@ -1,4 +1,4 @@
-import { EngineInputError, requirePositive } from "@/lib/engine/errors";
+import { EngineInputError, requirePositive } from "@/lib/engine/core/errors";
 
 // Lengths in metres, volumes in litres, areas in m². The maxima catch typing
 // slips (a 40 ft tray, a 400 m bed) rather than describe physics.

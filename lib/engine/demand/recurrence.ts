@@ -5,9 +5,9 @@ import {
   toDayNumber,
   utcDateToIso,
   type DateRange,
-} from "@/lib/engine/dates";
-import { EngineInputError } from "@/lib/engine/errors";
-import type { IsoDate } from "@/lib/engine/types";
+} from "@/lib/engine/core/dates";
+import { EngineInputError } from "@/lib/engine/core/errors";
+import type { IsoDate } from "@/lib/engine/core/types";
 
 // RRULE strings are expanded as floating all-day dates: every date handed to the
 // rrule library is midnight UTC of the calendar day, and results are read back

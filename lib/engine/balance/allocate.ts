@@ -2,7 +2,7 @@
 // number first), then feeder class (heavy > medium > light), then due date.
 // Claims equal on all three form a tier, and a tier that cannot be filled is
 // split pro rata to need, so no planting in it is favoured by input order.
-import type { FeederClass } from "@/lib/engine/types";
+import type { FeederClass } from "@/lib/engine/core/types";
 
 export const FEEDER_RANK: Record<FeederClass, number> = { heavy: 0, medium: 1, light: 2 };
 

@@ -1,6 +1,6 @@
-import type { DateRange } from "@/lib/engine/dates";
-import type { FeedingRule } from "@/lib/engine/feeding-rules";
-import type { BlockedOccurrence, DemandOccurrence, FeederClass, IsoDate } from "@/lib/engine/types";
+import type { DateRange } from "@/lib/engine/core/dates";
+import type { FeedingRule } from "@/lib/engine/demand/feeding-rules";
+import type { BlockedOccurrence, DemandOccurrence, FeederClass, IsoDate } from "@/lib/engine/core/types";
 
 export interface BedInput {
   id: string;

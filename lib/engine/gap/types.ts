@@ -5,8 +5,8 @@ import type {
   CastingsMonth,
   PoolMonth,
   PoolTotals,
-} from "@/lib/engine/balance-types";
-import type { Explanation, IsoDate, SupplyEvent } from "@/lib/engine/types";
+} from "@/lib/engine/balance/types";
+import type { Explanation, IsoDate, SupplyEvent } from "@/lib/engine/core/types";
 
 export interface GapContext {
   base: BalanceInput;

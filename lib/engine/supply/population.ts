@@ -1,10 +1,10 @@
-import { dflt } from "@/lib/engine/defaults";
+import { dflt } from "@/lib/engine/core/defaults";
 import {
   EngineInputError,
   requireInteger,
   requireNonNegative,
   requirePositive,
-} from "@/lib/engine/errors";
+} from "@/lib/engine/core/errors";
 
 // Stage-structured worm population, one step a day. Cocoons and juveniles sit
 // in ring buffers indexed by day (a delay line), so a day costs O(maturation)
@@ -61,6 +61,13 @@ export interface PopulationInput {
   days: number;
   start?: StartStructure;
   params?: Partial<PopulationParams>;
+  /**
+   * Surface the worms occupy on day t, m² (e.g. every tray in a growing stack);
+   * the density ceiling follows it. Default: `surfaceM2` every day.
+   */
+  surfaceOnDay?: (t: number) => number;
+  /** Worms added (positive) or removed (negative), or a counted total (`set`), on day t; taken from adults and juveniles in proportion. */
+  changes?: ReadonlyMap<number, { add?: number; set?: number }>;
 }
 
 export interface PopulationDay {
@@ -124,7 +131,8 @@ export function simulatePopulation(input: PopulationInput, field = "population")
   }
 
   const adultKg = LB_KG / p.wormsPerLb;
-  const ceilingKg = p.densityCeilingLbPerFt2 * (surface / FT2_M2) * LB_KG;
+  const ceilingKgFor = (m2: number) => p.densityCeilingLbPerFt2 * (m2 / FT2_M2) * LB_KG;
+  const ceilingKg = ceilingKgFor(surface);
   const I = p.incubationDays;
   const M = p.maturationDays;
   const layPerAdultDay = p.cocoonsPerAdultPerWeek / 7;
@@ -134,7 +142,7 @@ export function simulatePopulation(input: PopulationInput, field = "population")
   const cocoons = new Float64Array(I); // slot d % I: laid on day d
   const juveniles = new Float64Array(M); // slot d % M: hatched on day d
   let adults = start;
-  const ceilingWorms = ceilingKg / adultKg;
+  let ceilingWorms = ceilingKg / adultKg;
   const density = (committed: number) => Math.max(0, 1 - committed / ceilingWorms);
   let pipeline = 0; // juveniles + hatchlings still inside cocoons
   if (structure === "adults-with-cocoons") {
@@ -171,6 +179,19 @@ export function simulatePopulation(input: PopulationInput, field = "population")
 
   const series: PopulationDay[] = [snapshot(0)];
   for (let t = 1; t <= days; t++) {
+    if (input.surfaceOnDay) ceilingWorms = ceilingKgFor(input.surfaceOnDay(t)) / adultKg;
+    const change = input.changes?.get(t);
+    if (change) {
+      let j = 0;
+      for (let s = 0; s < M; s++) j += juveniles[s] as number;
+      const total = adults + j;
+      const target = Math.max(0, change.set ?? total + (change.add ?? 0));
+      if (total > 0) {
+        const k = target / total;
+        adults *= k;
+        for (let s = 0; s < M; s++) juveniles[s] = (juveniles[s] as number) * k;
+      } else adults = target;
+    }
     const ci = t % I;
     const ji = t % M;
     const hatched = (cocoons[ci] as number) * yieldPerCocoon;

@@ -1,10 +1,13 @@
 // Options of the balance, checked, with their defaults and sources.
-import { EngineInputError, requireNonNegative } from "@/lib/engine/errors";
-import type { BalanceInput, PoolTotals } from "@/lib/engine/balance-types";
+import { EngineInputError, requireNonNegative } from "@/lib/engine/core/errors";
+import type { BalanceInput, PoolTotals } from "@/lib/engine/balance/types";
 
-export const DEFAULT_SHELF_LIFE_DAYS = 60; // Harit et al. 2014, J. Applied Horticulture 16(2)
-export const DEFAULT_PRICE_PER_LB = 1.0; // common retail, from memory
-export const KG_PER_LB = 0.45359237; // exact, NIST Handbook 44 Appendix C
+import { dflt } from "@/lib/engine/core/defaults";
+import { toSi } from "@/lib/units";
+
+export const DEFAULT_SHELF_LIFE_DAYS = dflt("castingsShelfLifeDays");
+export const DEFAULT_PRICE_PER_LB = dflt("pricePerLb");
+export const KG_PER_LB = toSi(1, "lb");
 
 export interface Resolved {
   shelfLifeDays: number;

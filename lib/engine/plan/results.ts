@@ -2,7 +2,7 @@
 // screens show. All quantities SI (kg castings, L leachate / tea, m², days);
 // no text with a unit baked in: every figure carries an Explanation whose
 // inputs are tagged SI values, rendered by the UI in the garden's units.
-import type { IsoDate, Material, Method } from "@/lib/engine/types";
+import type { IsoDate, Material, Method } from "@/lib/engine/core/types";
 
 /** A tagged value inside an explanation. The UI converts `unit` to the garden's units. */
 export type ExplainValue =

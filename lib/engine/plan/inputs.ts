@@ -8,7 +8,7 @@
 // dates "YYYY-MM-DD". A `null` engine parameter means "use the engine default"
 // (see lib/engine/defaults.ts for every default and its source): adapters never
 // copy a default into the inputs, so a later change of default reaches every garden.
-import type { Basis, FeederClass, IsoDate, Material, Method } from "@/lib/engine/types";
+import type { Basis, FeederClass, IsoDate, Material, Method } from "@/lib/engine/core/types";
 
 export type UnitSystem = "us" | "metric";
 

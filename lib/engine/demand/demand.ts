@@ -1,19 +1,19 @@
-import { ruleAmount } from "@/lib/engine/demand-amount";
+import { ruleAmount } from "@/lib/engine/demand/amount";
 import type {
   BedInput,
   DemandOptions,
   DemandResult,
   GardenSeason,
   PlantingInput,
-} from "@/lib/engine/demand-types";
-import { fromDayNumber, parseMonthDay, rangeDays, toDayNumber } from "@/lib/engine/dates";
-import { dflt } from "@/lib/engine/defaults";
-import { EngineInputError, requireFinite, requirePositive } from "@/lib/engine/errors";
-import { defaultRuleFor } from "@/lib/engine/feeding-rules";
-import { expandRecurrence } from "@/lib/engine/recurrence";
-import type { IsoDate } from "@/lib/engine/types";
+} from "@/lib/engine/demand/types";
+import { fromDayNumber, parseMonthDay, rangeDays, toDayNumber } from "@/lib/engine/core/dates";
+import { dflt } from "@/lib/engine/core/defaults";
+import { EngineInputError, requireFinite, requirePositive } from "@/lib/engine/core/errors";
+import { defaultRuleFor } from "@/lib/engine/demand/feeding-rules";
+import { expandRecurrence } from "@/lib/engine/demand/recurrence";
+import type { IsoDate } from "@/lib/engine/core/types";
 
-export type { FeedingRule } from "@/lib/engine/feeding-rules";
+export type { FeedingRule } from "@/lib/engine/demand/feeding-rules";
 export type {
   BedInput,
   DemandOptions,
@@ -21,7 +21,7 @@ export type {
   DemandWarning,
   GardenSeason,
   PlantingInput,
-} from "@/lib/engine/demand-types";
+} from "@/lib/engine/demand/types";
 
 export const DEFAULT_PRIORITY = 3;
 

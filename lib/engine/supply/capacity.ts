@@ -1,6 +1,6 @@
-import { dflt } from "@/lib/engine/defaults";
-import { requireNonNegative, requirePositive } from "@/lib/engine/errors";
-import { fmt } from "@/lib/engine/format";
+import { dflt } from "@/lib/engine/core/defaults";
+import { requireNonNegative, requirePositive } from "@/lib/engine/core/errors";
+import { fmt } from "@/lib/engine/core/format";
 
 // The surface rule, 1 ft² per lb of food per week, turned into SI with exact
 // NIST factors (1 lb = 0.45359237 kg, 1 ft² = 0.09290304 m²).

@@ -1,9 +1,9 @@
-import type { BedInput, PlantingInput } from "@/lib/engine/demand-types";
-import { dflt } from "@/lib/engine/defaults";
-import { EngineInputError, requireNonNegative, requirePositive } from "@/lib/engine/errors";
-import type { FeedingRule } from "@/lib/engine/feeding-rules";
-import { fmt, plural } from "@/lib/engine/format";
-import type { Explanation } from "@/lib/engine/types";
+import type { BedInput, PlantingInput } from "@/lib/engine/demand/types";
+import { dflt } from "@/lib/engine/core/defaults";
+import { EngineInputError, requireNonNegative, requirePositive } from "@/lib/engine/core/errors";
+import type { FeedingRule } from "@/lib/engine/demand/feeding-rules";
+import { fmt, plural } from "@/lib/engine/core/format";
+import type { Explanation } from "@/lib/engine/core/types";
 
 /**
  * Amount of one application in SI (castings kg, leachate L undiluted, tea L),

@@ -1,8 +1,8 @@
 // The balance's closing figures: first shortfall, surplus and its value, blocked dates.
-import { AMOUNT_EPSILON } from "@/lib/engine/lots";
-import { explainSurplus, fmt } from "@/lib/engine/balance-explain";
-import { summariseCoverage } from "@/lib/engine/balance-coverage";
-import { KG_PER_LB, type Resolved } from "@/lib/engine/balance-options";
+import { AMOUNT_EPSILON } from "@/lib/engine/balance/lots";
+import { explainSurplus, fmt } from "@/lib/engine/balance/explain";
+import { summariseCoverage } from "@/lib/engine/balance/coverage";
+import { KG_PER_LB, type Resolved } from "@/lib/engine/balance/options";
 import type {
   BalanceResult,
   CastingsMonth,
@@ -10,8 +10,8 @@ import type {
   Pool,
   PoolTotals,
   PoolMonth,
-} from "@/lib/engine/balance-types";
-import type { BlockedOccurrence, Explanation } from "@/lib/engine/types";
+} from "@/lib/engine/balance/types";
+import type { BlockedOccurrence, Explanation } from "@/lib/engine/core/types";
 
 export function finish(a: {
   spans: { month: string }[];

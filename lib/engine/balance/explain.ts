@@ -1,6 +1,6 @@
 // Words for the balance's numbers. Amounts are written in SI here; `inputs`
 // carry the raw figures so the UI can re-render them in the garden's units.
-import type { Explanation } from "@/lib/engine/types";
+import type { Explanation } from "@/lib/engine/core/types";
 
 /** One decimal, never "-0.0", never NaN (callers only pass finite numbers). */
 export function fmt(n: number, digits = 1): string {

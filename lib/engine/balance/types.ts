@@ -7,8 +7,8 @@ import type {
   IsoDate,
   Material,
   SupplyEvent,
-} from "@/lib/engine/types";
-import type { StockLot } from "@/lib/engine/lots";
+} from "@/lib/engine/core/types";
+import type { StockLot } from "@/lib/engine/balance/lots";
 
 /** Stock pools: tea has none of its own, it is brewed from castings on the day. */
 export type Pool = "castings" | "leachate";

@@ -1,7 +1,7 @@
 // Stock kept as dated lots so that ageing and "oldest first" are exact rather
 // than averaged. One shelf per pool: castings (keeps `keepDays`, default 60)
 // and leachate (keeps one day: it is collected and used, never stored).
-import type { IsoDate } from "@/lib/engine/types";
+import type { IsoDate } from "@/lib/engine/core/types";
 
 /** Amounts below this are float dust from pro-rata splits, not stock. */
 export const AMOUNT_EPSILON = 1e-9;

@@ -4,19 +4,19 @@
 // on its own date, oldest first; so a lot is never used before it is harvested
 // nor after it ages out, and a later high-priority feed can reserve stock ahead
 // of an earlier low-priority one. Tea is brewed from castings on its day.
-import { EngineInputError, requireFinite, requireNonNegative } from "@/lib/engine/errors";
-import type { DemandOccurrence } from "@/lib/engine/types";
-import { AMOUNT_EPSILON, LotShelf } from "@/lib/engine/lots";
-import { grantMonth, orderIntoTiers, type Claim } from "@/lib/engine/allocate";
-import { dayNumber, isoFromDay, monthSpans } from "@/lib/engine/balance-days";
-import { explainPoolMonth, fmt } from "@/lib/engine/balance-explain";
+import { EngineInputError, requireFinite, requireNonNegative } from "@/lib/engine/core/errors";
+import type { DemandOccurrence } from "@/lib/engine/core/types";
+import { AMOUNT_EPSILON, LotShelf } from "@/lib/engine/balance/lots";
+import { grantMonth, orderIntoTiers, type Claim } from "@/lib/engine/balance/allocate";
+import { dayNumber, isoFromDay, monthSpans } from "@/lib/engine/core/dates";
+import { explainPoolMonth, fmt } from "@/lib/engine/balance/explain";
 import {
   DEFAULT_PRICE_PER_LB,
   DEFAULT_SHELF_LIFE_DAYS,
   emptyTotals,
   resolveOptions,
-} from "@/lib/engine/balance-options";
-import { finish } from "@/lib/engine/balance-result";
+} from "@/lib/engine/balance/options";
+import { finish } from "@/lib/engine/balance/result";
 import type {
   BalanceInput,
   BalanceResult,
@@ -24,8 +24,8 @@ import type {
   OccurrenceResult,
   Pool,
   PoolMonth,
-} from "@/lib/engine/balance-types";
-import type { Explanation, SupplyEvent } from "@/lib/engine/types";
+} from "@/lib/engine/balance/types";
+import type { Explanation, SupplyEvent } from "@/lib/engine/core/types";
 
 export { DEFAULT_PRICE_PER_LB, DEFAULT_SHELF_LIFE_DAYS };
 

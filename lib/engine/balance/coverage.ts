@@ -1,7 +1,7 @@
 // Coverage per planting per month per material, summed from occurrences.
-import { explainCoverage } from "@/lib/engine/balance-explain";
-import type { OccurrenceResult, PlantingCoverage } from "@/lib/engine/balance-types";
-import type { Material } from "@/lib/engine/types";
+import { explainCoverage } from "@/lib/engine/balance/explain";
+import type { OccurrenceResult, PlantingCoverage } from "@/lib/engine/balance/types";
+import type { Material } from "@/lib/engine/core/types";
 
 interface Group {
   plantingId: string;

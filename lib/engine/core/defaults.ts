@@ -119,6 +119,35 @@ export const DEFAULTS = {
     value: 20,
     source: "warn above 20 % castings by volume (Atiyeh et al. 2000, Pedobiologia 44)",
   },
+  castingsShelfLifeDays: {
+    value: 60,
+    source: "quality fell after 60 days (Harit et al. 2014, J. Applied Horticulture 16(2))",
+  },
+  liquidMaxAgeDays: {
+    value: 7,
+    source: "from memory: collected leachate is used within about a week; edit per garden",
+  },
+  pricePerLb: {
+    value: 1.0,
+    source: "common retail price of castings, about $1.00 per lb (from memory)",
+  },
+  foodKgPerCastingsKg: {
+    value: 1,
+    source:
+      "our choice, a floor: a tray of castings took at least its own mass of food and bedding (worms lose mass as they digest, so the real figure is higher)",
+  },
+  plantingPriority: {
+    value: 3,
+    source: "our choice: the middle of 1 (fed first) to 5",
+  },
+  startBinWorms: {
+    value: 2000,
+    source: "common practice: a new stacked bin is started with about 2,000 worms (about 2 lb)",
+  },
+  startBinTrays: {
+    value: 4,
+    source: "common practice: a four-tray stack",
+  },
   preHarvestDaysSoilContact: {
     value: 120,
     source:

@@ -1,5 +1,5 @@
-import { dflt } from "@/lib/engine/defaults";
-import type { Basis, FeederClass, Material, Method } from "@/lib/engine/types";
+import { dflt } from "@/lib/engine/core/defaults";
+import type { Basis, FeederClass, Material, Method } from "@/lib/engine/core/types";
 
 /**
  * What a planting is fed. `amount` is per unit of `basis`, in SI:
