@@ -19,6 +19,8 @@ export interface DrawInput {
 }
 
 export interface RecordApplicationInput {
+  /** Set by an import that keeps its file's order; otherwise the database makes one. */
+  id?: string;
   gardenId: string;
   plantingId: string;
   appliedOn: string;
@@ -82,6 +84,7 @@ export async function insertApplicationWithDraws(
   const [row] = await tx
     .insert(applications)
     .values({
+      id: input.id,
       gardenId,
       plantingId: input.plantingId,
       material: input.material,
@@ -127,6 +130,8 @@ async function drawnSoFar(tx: DbOrTx, gardenId: string, lotIds: string[]) {
 }
 
 export interface RecordYieldInput {
+  /** Ids for the event and its lot, set by an import that keeps its file's order. */
+  ids?: { eventId: string; lotId: string };
   gardenId: string;
   binId: string;
   on: string;
@@ -142,6 +147,7 @@ export async function insertHarvest(
   const [event] = await tx
     .insert(binEvents)
     .values({
+      id: input.ids?.eventId,
       gardenId: input.gardenId,
       binId: input.binId,
       kind: "harvest",
@@ -166,6 +172,7 @@ export async function insertDrain(
   const [event] = await tx
     .insert(binEvents)
     .values({
+      id: input.ids?.eventId,
       gardenId: input.gardenId,
       binId: input.binId,
       kind: "liquid-drained",
@@ -191,6 +198,7 @@ async function insertLotFor(
   const [lot] = await tx
     .insert(stockLots)
     .values({
+      id: input.ids?.lotId,
       gardenId: input.gardenId,
       binId: input.binId,
       sourceEventId: eventId,
