@@ -12,6 +12,8 @@ import * as schema from "./schema";
 
 export type Db = PgDatabase<PgQueryResultHKT, typeof schema>;
 export type DbKind = "pglite" | "postgres";
+/** The client or a transaction on it: query helpers that must join the caller's transaction take this. */
+export type DbOrTx = Db | Parameters<Parameters<Db["transaction"]>[0]>[0];
 
 interface Handle {
   db: Db;

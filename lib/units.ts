@@ -1,4 +1,4 @@
-import { EngineInputError } from "@/lib/engine/errors";
+import { EngineInputError } from "@/lib/engine/core/errors";
 
 // SI inside the product: litre (volume), kilogram (mass), square metre (area),
 // metre (length). Every factor is built from the exact NIST Handbook 44

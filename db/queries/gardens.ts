@@ -24,7 +24,7 @@ export type GardenDto = {
   lastSpringFrost: string;
   firstFallFrost: string;
   location: string | null;
-  castingsPricePerKg: number;
+  castingsPricePerKg: number | null;
   currency: string;
 };
 

@@ -1,6 +1,9 @@
+import { sql } from "drizzle-orm";
 import {
   boolean,
+  check,
   date,
+  foreignKey,
   index,
   integer,
   pgTable,
@@ -12,13 +15,15 @@ import {
   uuid,
 } from "drizzle-orm/pg-core";
 import { users } from "./accounts";
-import { beds, plantings } from "./beds";
+import { plantings } from "./beds";
 import { stockLots } from "./bins";
 import { createdAt, id, quantity } from "./columns";
-import { materialEnum, methodEnum, siUnitEnum } from "./enums";
+import { materialEnum, methodEnum } from "./enums";
 import { gardens } from "./gardens";
 
-// One top-dressing, drench or mix actually done in the garden.
+// One top-dressing, drench or mix actually done in the garden. The stock it
+// used is in application_draws (one row per lot), written with it by
+// db/queries/lots.ts.
 export const applications = pgTable(
   "applications",
   {
@@ -26,20 +31,18 @@ export const applications = pgTable(
     gardenId: uuid("garden_id")
       .notNull()
       .references(() => gardens.id, { onDelete: "cascade" }),
-    plantingId: uuid("planting_id")
-      .notNull()
-      .references(() => plantings.id, { onDelete: "cascade" }),
-    bedId: uuid("bed_id")
-      .notNull()
-      .references(() => beds.id, { onDelete: "cascade" }),
-    lotId: uuid("lot_id").references(() => stockLots.id, { onDelete: "set null" }),
+    // The bed is the planting's; it is not repeated here.
+    plantingId: uuid("planting_id").notNull(),
     material: materialEnum("material").notNull(),
     method: methodEnum("method").notNull(),
+    // As applied: kg of castings, or L of diluted leachate or tea.
     amountSi: quantity("amount_si").notNull(),
-    siUnit: siUnitEnum("si_unit").notNull(),
     appliedOn: date("applied_on").notNull(),
     // The plan date this application fulfils, if it came from the plan.
     plannedFor: date("planned_for"),
+    // The engine's stable id of the planned feeding it fulfils; null for an
+    // unplanned feeding. Unique per garden, so one planned feeding is logged once.
+    plannedKey: text("planned_key"),
     loggedBy: uuid("logged_by").references(() => users.id, { onDelete: "set null" }),
     note: text("note"),
     createdAt: createdAt(),
@@ -47,6 +50,45 @@ export const applications = pgTable(
   (t) => [
     index("applications_garden_idx").on(t.gardenId),
     index("applications_planting_idx").on(t.plantingId),
+    unique("applications_garden_id_id").on(t.gardenId, t.id),
+    unique("applications_planned_once").on(t.gardenId, t.plannedKey),
+    check("applications_amount_positive", sql`${t.amountSi} > 0`),
+    foreignKey({
+      name: "applications_planting_same_garden_fk",
+      columns: [t.gardenId, t.plantingId],
+      foreignColumns: [plantings.gardenId, plantings.id],
+    }).onDelete("cascade"),
+  ],
+);
+
+// What an application took from each lot: castings for a top-dressing or for
+// brewing tea, leachate for a drench. A lot's remaining amount is its initial
+// amount less the sum of these.
+export const applicationDraws = pgTable(
+  "application_draws",
+  {
+    gardenId: uuid("garden_id")
+      .notNull()
+      .references(() => gardens.id, { onDelete: "cascade" }),
+    applicationId: uuid("application_id").notNull(),
+    lotId: uuid("lot_id").notNull(),
+    // In the lot's unit: kg of castings (for tea, the castings steeped), L of undiluted leachate.
+    amountSi: quantity("amount_si").notNull(),
+  },
+  (t) => [
+    primaryKey({ columns: [t.applicationId, t.lotId] }),
+    index("application_draws_lot_idx").on(t.lotId),
+    check("application_draws_amount_positive", sql`${t.amountSi} > 0`),
+    foreignKey({
+      name: "application_draws_application_same_garden_fk",
+      columns: [t.gardenId, t.applicationId],
+      foreignColumns: [applications.gardenId, applications.id],
+    }).onDelete("cascade"),
+    foreignKey({
+      name: "application_draws_lot_same_garden_fk",
+      columns: [t.gardenId, t.lotId],
+      foreignColumns: [stockLots.gardenId, stockLots.id],
+    }),
   ],
 );
 

@@ -1,9 +1,36 @@
-import { boolean, date, index, integer, pgTable, text, uuid } from "drizzle-orm/pg-core";
+import { sql } from "drizzle-orm";
+import {
+  boolean,
+  check,
+  date,
+  foreignKey,
+  index,
+  integer,
+  pgTable,
+  smallint,
+  text,
+  unique,
+  uuid,
+} from "drizzle-orm/pg-core";
 import { createdAt, id, quantity } from "./columns";
-import { basisEnum, bedKindEnum, feederClassEnum, materialEnum, methodEnum } from "./enums";
+import {
+  amountMeasureEnum,
+  basisEnum,
+  bedKindEnum,
+  feederClassEnum,
+  materialEnum,
+  methodEnum,
+} from "./enums";
 import { gardens } from "./gardens";
 
+// Garden scoping: every table a garden owns has a unique (garden_id, id), and
+// every reference between them is a composite foreign key (garden_id, x_id) →
+// parent (garden_id, id), so the database itself refuses a row that points into
+// another garden. Nullable engine parameters mean "the engine's default"
+// (lib/engine/defaults.ts); no default is copied into a column.
+
 // A feeding rule is owned by a crop (its default) or by a planting (an override).
+// garden_id is null only for the shared starter list's rules.
 export const feedingRules = pgTable(
   "feeding_rules",
   {
@@ -12,14 +39,31 @@ export const feedingRules = pgTable(
     material: materialEnum("material").notNull(),
     method: methodEnum("method").notNull(),
     basis: basisEnum("basis").notNull(),
-    // SI per basis unit: kg (castings) or L (liquids) per plant, per m², per L of
-    // container; or a percentage of mix volume for "percent-of-mix".
+    // What amount_si measures per basis unit (plant, m² of bed, L of container):
+    // kg ("mass"), L ("volume"; liquids as applied), or percent 0–100 of the mix volume.
+    amountMeasure: amountMeasureEnum("amount_measure").notNull(),
     amountSi: quantity("amount_si").notNull(),
+    // Leachate: parts of water per part of leachate; null = the engine's default.
+    dilutionWaterParts: quantity("dilution_water_parts"),
+    // Tea: litres of castings per litre of water; null = the garden's setting.
+    teaCastingsPerWater: quantity("tea_castings_per_water"),
     // RFC 5545 RRULE body, e.g. "FREQ=MONTHLY;BYMONTHDAY=1".
     rrule: text("rrule").notNull(),
     createdAt: createdAt(),
   },
-  (t) => [index("feeding_rules_garden_idx").on(t.gardenId)],
+  (t) => [
+    index("feeding_rules_garden_idx").on(t.gardenId),
+    unique("feeding_rules_garden_id_id").on(t.gardenId, t.id),
+    check("feeding_rules_amount_non_negative", sql`${t.amountSi} >= 0`),
+    check(
+      "feeding_rules_percent_of_mix",
+      sql`(${t.basis} = 'percent-of-mix') = (${t.amountMeasure} = 'percent-of-mix')`,
+    ),
+    check(
+      "feeding_rules_liquids_by_volume",
+      sql`${t.material} = 'castings' or ${t.amountMeasure} = 'volume'`,
+    ),
+  ],
 );
 
 export const beds = pgTable(
@@ -37,9 +81,21 @@ export const beds = pgTable(
     depthM: quantity("depth_m"),
     containerVolumeL: quantity("container_volume_l"),
     notes: text("notes"),
+    // Archived beds keep their history (plantings, logged applications) but
+    // leave the plan; there is no hard delete while logs refer to a bed.
+    archivedOn: date("archived_on"),
     createdAt: createdAt(),
   },
-  (t) => [index("beds_garden_idx").on(t.gardenId)],
+  (t) => [
+    index("beds_garden_idx").on(t.gardenId),
+    unique("beds_garden_id_id").on(t.gardenId, t.id),
+    // A bed is fed per area, a container per volume: each needs its size.
+    check(
+      "beds_size_for_kind",
+      sql`(${t.kind} = 'bed' and ${t.lengthM} > 0 and ${t.widthM} > 0)
+        or (${t.kind} = 'container' and ${t.containerVolumeL} > 0)`,
+    ),
+  ],
 );
 
 export const crops = pgTable(
@@ -48,17 +104,37 @@ export const crops = pgTable(
     id: id(),
     // null = part of the shared starter list every garden sees.
     gardenId: uuid("garden_id").references(() => gardens.id, { onDelete: "cascade" }),
-    name: text("name").notNull(),
+    // null only for a garden's own unnamed crop (a scenario planting without a crop name).
+    name: text("name"),
     feederClass: feederClassEnum("feeder_class").notNull(),
     // Decides 120 vs 90 days for manure-fed outputs (7 CFR 205.203(c)(1)).
-    edibleTouchesSoil: boolean("edible_touches_soil").notNull().default(false),
-    edible: boolean("edible").notNull().default(true),
-    feedingRuleId: uuid("feeding_rule_id").references(() => feedingRules.id, {
-      onDelete: "set null",
-    }),
+    edibleTouchesSoil: boolean("edible_touches_soil").notNull(),
+    edible: boolean("edible").notNull(),
+    // null = the engine's default rule for the feeder class.
+    feedingRuleId: uuid("feeding_rule_id"),
+    // Typical days from planting to harvest and spacing between plants; null =
+    // not known (a garden's own crop entered without them).
+    daysToHarvest: smallint("days_to_harvest"),
+    spacingM: quantity("spacing_m"),
+    archivedOn: date("archived_on"),
     createdAt: createdAt(),
   },
-  (t) => [index("crops_garden_idx").on(t.gardenId)],
+  (t) => [
+    index("crops_garden_idx").on(t.gardenId),
+    unique("crops_garden_id_id").on(t.gardenId, t.id),
+    // The shared starter crops carry no rule (the engine's default for the class
+    // applies), so every crop rule there is is checked by the garden-scoped key.
+    check(
+      "crops_starter_without_rule",
+      sql`${t.gardenId} is not null or ${t.feedingRuleId} is null`,
+    ),
+    check("crops_starter_named", sql`${t.gardenId} is not null or ${t.name} is not null`),
+    foreignKey({
+      name: "crops_rule_same_garden_fk",
+      columns: [t.gardenId, t.feedingRuleId],
+      foreignColumns: [feedingRules.gardenId, feedingRules.id],
+    }),
+  ],
 );
 
 export const plantings = pgTable(
@@ -68,25 +144,45 @@ export const plantings = pgTable(
     gardenId: uuid("garden_id")
       .notNull()
       .references(() => gardens.id, { onDelete: "cascade" }),
-    bedId: uuid("bed_id")
-      .notNull()
-      .references(() => beds.id, { onDelete: "cascade" }),
-    cropId: uuid("crop_id")
-      .notNull()
-      .references(() => crops.id, { onDelete: "restrict" }),
-    plantCount: integer("plant_count").notNull().default(1),
+    bedId: uuid("bed_id").notNull(),
+    // A crop of this garden's own list (the starter list is copied in when used),
+    // so the composite key below can hold.
+    cropId: uuid("crop_id").notNull(),
+    // Whole plants: an integer here and in the scenario file.
+    plantCount: integer("plant_count").notNull(),
     // Part of the bed this planting covers, for per-area rules; null = whole bed.
     areaM2: quantity("area_m2"),
     plantedOn: date("planted_on").notNull(),
     expectedHarvestOn: date("expected_harvest_on"),
     endedOn: date("ended_on"),
-    // 1 is fed first when stock is short.
-    priority: integer("priority").notNull().default(3),
-    feedingRuleId: uuid("feeding_rule_id").references(() => feedingRules.id, {
-      onDelete: "set null",
-    }),
+    // 1 is fed first when stock is short; null = the engine's default.
+    priority: integer("priority"),
+    // An override of the crop's rule; null = the crop's rule.
+    feedingRuleId: uuid("feeding_rule_id"),
     notes: text("notes"),
+    archivedOn: date("archived_on"),
     createdAt: createdAt(),
   },
-  (t) => [index("plantings_garden_idx").on(t.gardenId), index("plantings_bed_idx").on(t.bedId)],
+  (t) => [
+    index("plantings_garden_idx").on(t.gardenId),
+    index("plantings_bed_idx").on(t.bedId),
+    unique("plantings_garden_id_id").on(t.gardenId, t.id),
+    check("plantings_plant_count_positive", sql`${t.plantCount} > 0`),
+    check("plantings_end_after_start", sql`${t.endedOn} is null or ${t.endedOn} >= ${t.plantedOn}`),
+    foreignKey({
+      name: "plantings_bed_same_garden_fk",
+      columns: [t.gardenId, t.bedId],
+      foreignColumns: [beds.gardenId, beds.id],
+    }).onDelete("cascade"),
+    foreignKey({
+      name: "plantings_crop_same_garden_fk",
+      columns: [t.gardenId, t.cropId],
+      foreignColumns: [crops.gardenId, crops.id],
+    }),
+    foreignKey({
+      name: "plantings_rule_same_garden_fk",
+      columns: [t.gardenId, t.feedingRuleId],
+      foreignColumns: [feedingRules.gardenId, feedingRules.id],
+    }),
+  ],
 );

@@ -17,9 +17,12 @@ export const basisEnum = pgEnum("amount_basis", [
   "per-container-volume",
   "percent-of-mix",
 ]);
-export const binKindEnum = pgEnum("bin_kind", ["stacked-tray", "single"]);
+// What a feeding rule's amount measures per basis unit.
+export const amountMeasureEnum = pgEnum("amount_measure", ["mass", "volume", "percent-of-mix"]);
+export const binKindEnum = pgEnum("bin_kind", ["stacked-tray", "single", "flow-through"]);
 export const binEventKindEnum = pgEnum("bin_event_kind", [
   "feeding",
+  "bedding-added",
   "tray-added",
   "harvest",
   "liquid-drained",
@@ -27,5 +30,11 @@ export const binEventKindEnum = pgEnum("bin_event_kind", [
   "observation",
 ]);
 export const stockMaterialEnum = pgEnum("stock_material", ["castings", "leachate"]);
-export const siUnitEnum = pgEnum("si_unit", ["kg", "L"]);
 export const mailStatusEnum = pgEnum("mail_status", ["pending", "sent", "failed"]);
+// Why a lot was changed by hand rather than by a feeding.
+export const stockAdjustmentReasonEnum = pgEnum("stock_adjustment_reason", [
+  "spilled",
+  "given-away",
+  "spoiled",
+  "correction",
+]);

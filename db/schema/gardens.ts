@@ -1,4 +1,13 @@
-import { date, index, pgTable, primaryKey, text, timestamp, uuid } from "drizzle-orm/pg-core";
+import {
+  date,
+  index,
+  pgTable,
+  primaryKey,
+  smallint,
+  text,
+  timestamp,
+  uuid,
+} from "drizzle-orm/pg-core";
 import { users } from "./accounts";
 import { createdAt, id, quantity } from "./columns";
 import { mailStatusEnum, roleEnum, unitSystemEnum } from "./enums";
@@ -11,8 +20,14 @@ export const gardens = pgTable("gardens", {
   lastSpringFrost: date("last_spring_frost").notNull(),
   firstFallFrost: date("first_fall_frost").notNull(),
   location: text("location"),
+  // Engine parameters of the whole garden; null = the engine's default.
   // Purchase price of bought castings, used to value surplus (per kg in SI).
-  castingsPricePerKg: quantity("castings_price_per_kg").notNull().default(2.204623),
+  castingsPricePerKg: quantity("castings_price_per_kg"),
+  shelfLifeDays: smallint("shelf_life_days"),
+  // Days collected or drained leachate stays usable before it is discarded.
+  liquidMaxAgeDays: smallint("liquid_max_age_days"),
+  // Tea recipe: volume of castings per volume of water.
+  teaCastingsPerWater: quantity("tea_castings_per_water"),
   currency: text("currency").notNull().default("USD"),
   createdAt: createdAt(),
   updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),

@@ -1,23 +1,16 @@
 import { isNull } from "drizzle-orm";
 import type { Db } from "@/db";
-import { crops, feedingRules } from "@/db/schema";
+import { crops } from "@/db/schema";
 
 // The crop list every garden starts with. Feeder classes are common practice;
 // "edible touches soil" decides the 120- vs 90-day interval for manure-fed
 // outputs (7 CFR 205.203(c)(1)). Growers add their own crops per garden.
 
-// 1 US cup = 236.5882365 mL (NIST HB 44 App. C) × 0.7 kg/L default castings
-// bulk density (PRODUCT.md) → kg of castings in one cup.
-const CUP_OF_CASTINGS_KG = 0.2365882365 * 0.7;
+// Starter crops carry no feeding rule: null means the engine's default rule
+// for the feeder class (lib/engine/defaults.ts), so a change of default reaches
+// every crop. A garden copies a starter crop into its own list when it uses it.
 
-export const defaultRuleByClass = {
-  // Common practice: heavy feeders ¾–1 cup per plant per month.
-  heavy: { amountSi: CUP_OF_CASTINGS_KG, rrule: "FREQ=MONTHLY;BYMONTHDAY=1" },
-  medium: { amountSi: CUP_OF_CASTINGS_KG / 2, rrule: "FREQ=MONTHLY;BYMONTHDAY=1" },
-  light: { amountSi: CUP_OF_CASTINGS_KG / 2, rrule: "FREQ=MONTHLY;INTERVAL=2;BYMONTHDAY=1" },
-} as const;
-
-type FeederClass = keyof typeof defaultRuleByClass;
+type FeederClass = "heavy" | "medium" | "light";
 
 export const starterCrops: {
   name: string;
@@ -56,27 +49,15 @@ export async function ensureStarterCrops(db: Db): Promise<number> {
       .where(isNull(crops.gardenId))
       .limit(1);
     if (existing.length) return 0;
-    for (const crop of starterCrops) {
-      const rule = defaultRuleByClass[crop.feederClass];
-      const [row] = await tx
-        .insert(feedingRules)
-        .values({
-          gardenId: null,
-          material: "castings",
-          method: "top-dress",
-          basis: "per-plant",
-          ...rule,
-        })
-        .returning({ id: feedingRules.id });
-      await tx.insert(crops).values({
+    await tx.insert(crops).values(
+      starterCrops.map((crop) => ({
         gardenId: null,
         name: crop.name,
         feederClass: crop.feederClass,
         edibleTouchesSoil: crop.touchesSoil,
         edible: crop.edible,
-        feedingRuleId: row!.id,
-      });
-    }
+      })),
+    );
     return starterCrops.length;
   });
 }

@@ -1,24 +1,33 @@
-// The engine's public face: import from "@/lib/engine" rather than from its files.
-export * from "@/lib/engine/types";
-export * from "@/lib/engine/errors";
-export * from "@/lib/engine/dates";
-export * from "@/lib/engine/defaults";
-export * from "@/lib/engine/geometry";
-export * from "@/lib/engine/forecast";
-export * from "@/lib/engine/population";
-export * from "@/lib/engine/capacity";
-export * from "@/lib/engine/liquid";
-export * from "@/lib/engine/recurrence";
-export * from "@/lib/engine/feeding-rules";
-export * from "@/lib/engine/demand";
-export * from "@/lib/engine/lots";
-export * from "@/lib/engine/allocate";
-export * from "@/lib/engine/balance-types";
+// The engine's one public entry: import from "@/lib/engine", never from its folders.
+//   core/     shared types, dates, errors, the defaults table with sources
+//   supply/   what bins make: tray geometry, castings forecast, leachate, worms, capacity
+//   demand/   what plantings want: feeding rules, RRULE expansion, amounts
+//   balance/  the stock ledger: lots, allocation, the month-by-month walk
+//   gap/      how to close a shortfall
+//   plan/     GardenInputs → computePlan → GardenPlan
+export type * from "@/lib/engine/plan/inputs";
+export type * from "@/lib/engine/plan/results";
+export { computePlan } from "@/lib/engine/plan/compute-plan";
+export { feedingId } from "@/lib/engine/plan/demand";
+export type { IsoDate, Material, Method, Basis, FeederClass } from "@/lib/engine/core/types";
+export { EngineInputError } from "@/lib/engine/core/errors";
+export * from "@/lib/engine/core/dates";
+export { DEFAULTS, dflt, type DefaultName, type Sourced } from "@/lib/engine/core/defaults";
+export * from "@/lib/engine/supply/geometry";
+export { forecastCastings, harvestDates, calibrate } from "@/lib/engine/supply/forecast";
 export {
-  computeBalance,
-  DEFAULT_PRICE_PER_LB,
-  DEFAULT_SHELF_LIFE_DAYS,
-} from "@/lib/engine/balance";
-export * from "@/lib/engine/gap-types";
-export { closeGap, toProof } from "@/lib/engine/gap";
-export * from "@/lib/engine/plan";
+  simulatePopulation,
+  wormsToKg,
+  kgToWorms,
+  daysToMultiply,
+} from "@/lib/engine/supply/population";
+export { checkCapacity } from "@/lib/engine/supply/capacity";
+export {
+  dilute,
+  leachateForSolution,
+  leachateRate,
+  teaCastingsNeeded,
+} from "@/lib/engine/supply/liquid";
+export { expandRecurrence, isBoundedRule, parseRecurrence } from "@/lib/engine/demand/recurrence";
+export { defaultRuleFor } from "@/lib/engine/demand/feeding-rules";
+export { runLedger } from "@/lib/engine/balance/ledger";

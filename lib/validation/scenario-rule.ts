@@ -1,6 +1,6 @@
 import { z } from "zod";
-import { EngineInputError } from "@/lib/engine/errors";
-import { parseRecurrence } from "@/lib/engine/recurrence";
+import { EngineInputError } from "@/lib/engine";
+import { parseRecurrence } from "@/lib/engine";
 import {
   basisSchema,
   materialSchema,

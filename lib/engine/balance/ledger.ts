@@ -1,0 +1,385 @@
+// The stock ledger: every lot the garden ever had (stock, logged harvests and
+// drains, forecast harvests and daily leachate), every logged application and
+// every planned one, walked month by month from the first day of history to
+// the end of the plan. Replay and forecast are the same walk: before `asOf`
+// only logged applications draw, after it only planned ones.
+//
+// Per month and pool: opening + supplied − allocated − aged out = closing.
+// - Logged applications draw first from the lots they name, then oldest first.
+// - Planned claims are served in tier order (priority, feeder class, day);
+//   a tier that cannot be filled is split pro rata to need.
+// - A claim marked cleanOnly (an edible planting inside its pre-harvest
+//   interval, 7 CFR 205.203(c)(1)) never draws from a manure-fed lot; other
+//   claims draw manure-fed lots first, so clean stock is left for those that need it.
+// - A lot is usable from the day it is made until the day before madeDay + keepDays.
+import type { FeederClass, Material } from "@/lib/engine/core/types";
+
+/** Amounts below this are float dust from pro-rata splits, not stock. */
+export const AMOUNT_EPSILON = 1e-9;
+
+/** Heavy feeders before medium before light when priorities tie. */
+export const FEEDER_RANK: Record<FeederClass, number> = { heavy: 0, medium: 1, light: 2 };
+
+export type Pool = "castings" | "leachate";
+
+export interface LedgerLot {
+  id: string;
+  pool: Pool;
+  madeDay: number;
+  amount: number;
+  binId: string | null;
+  manure: boolean;
+}
+
+export interface LedgerClaim {
+  pool: Pool;
+  day: number;
+  need: number;
+  priority: number;
+  feederClass: FeederClass;
+  cleanOnly: boolean;
+}
+
+export interface LedgerLogged {
+  pool: Pool;
+  day: number;
+  need: number;
+  draws: { lotId: string; amount: number }[];
+}
+
+export interface LedgerSpan {
+  month: string;
+  startDay: number;
+  endDay: number; // exclusive
+}
+
+export interface LedgerInput {
+  lots: readonly LedgerLot[];
+  planned: readonly LedgerClaim[];
+  logged: readonly LedgerLogged[];
+  keepDays: Record<Pool, number>;
+  spans: readonly LedgerSpan[];
+  /** Record which lot each claim on or after this day drew from (for explanations; off in the gap search). */
+  recordDrawsFrom?: number;
+  /** Return the lots as they stand at the start of this month index (to resume from there). */
+  snapshotAtMonth?: number;
+}
+
+export interface LedgerRow {
+  month: string;
+  pool: Pool;
+  opening: number;
+  supplied: number;
+  demand: number;
+  allocated: number;
+  agedOut: number;
+  closing: number;
+  shortfall: number;
+}
+
+export interface LedgerResult {
+  rows: LedgerRow[]; // spans × [castings, leachate]
+  plannedGot: Float64Array;
+  loggedGot: Float64Array;
+  /** Manure-fed stock a cleanOnly claim could not take although it was on hand (per planned claim). */
+  manureRefused: Float64Array;
+  plannedDraws?: ({ lotId: string; amount: number }[] | undefined)[];
+  loggedDraws?: ({ lotId: string; amount: number }[] | undefined)[];
+  /** Every lot that aged out with something left, on the day it expired. */
+  agedOut: { lotId: string; pool: Pool; day: number; amount: number; binId: string | null }[];
+  /** Logged draws that named an unknown lot or more than it held (taken oldest first instead). */
+  overdrawn: { loggedIndex: number; lotId: string; amount: number }[];
+  /** Lots still on the shelves (or yet to be made) at the start of `snapshotAtMonth`. */
+  snapshot?: LedgerLot[];
+}
+
+interface Live {
+  id: string;
+  made: number;
+  expires: number;
+  remaining: number;
+  manure: boolean;
+  binId: string | null;
+}
+
+const CLEAN_ONLY = [false] as const;
+const MANURE_FIRST = [true, false] as const;
+
+class Shelf {
+  lots: Live[];
+  made: Float64Array;
+  head = 0;
+  constructor(lots: readonly LedgerLot[], keep: number) {
+    this.lots = lots
+      .map((l) => ({
+        id: l.id,
+        made: l.madeDay,
+        expires: l.madeDay + keep,
+        remaining: l.amount,
+        manure: l.manure,
+        binId: l.binId,
+      }))
+      .sort((a, b) => a.made - b.made);
+    this.made = Float64Array.from(this.lots, (l) => l.made);
+  }
+  private firstMadeAfter(day: number): number {
+    let lo = this.head;
+    let hi = this.lots.length;
+    while (lo < hi) {
+      const mid = (lo + hi) >> 1;
+      if (this.made[mid]! <= day) lo = mid + 1;
+      else hi = mid;
+    }
+    return lo;
+  }
+  /** [lo, hi) of lots usable on `day` (keep is the same for every lot of a pool). */
+  range(day: number, keep: number): [number, number] {
+    return [this.firstMadeAfter(day - keep), this.firstMadeAfter(day)];
+  }
+  available(lo: number, hi: number, cleanOnly: boolean): number {
+    let s = 0;
+    for (let i = lo; i < hi; i++) {
+      const l = this.lots[i]!;
+      if (!cleanOnly || !l.manure) s += l.remaining;
+    }
+    return s;
+  }
+  /** Draws oldest first; `manureFirst` takes manure-fed lots before clean ones; cleanOnly skips them. */
+  draw(
+    lo: number,
+    hi: number,
+    amount: number,
+    mode: "clean-only" | "manure-first",
+    out?: { lotId: string; amount: number }[],
+  ): number {
+    let left = amount;
+    const passes = mode === "clean-only" ? CLEAN_ONLY : MANURE_FIRST;
+    for (const wantManure of passes) {
+      for (let i = lo; i < hi && left > AMOUNT_EPSILON; i++) {
+        const l = this.lots[i]!;
+        if (l.manure !== wantManure || l.remaining <= 0) continue;
+        const take = Math.min(l.remaining, left);
+        l.remaining -= take;
+        if (l.remaining < AMOUNT_EPSILON) l.remaining = 0;
+        left -= take;
+        out?.push({ lotId: l.id, amount: take });
+      }
+    }
+    return amount - Math.max(0, left);
+  }
+  /** Stock made before `day` and still on the shelf. */
+  onHand(day: number): number {
+    let s = 0;
+    for (let i = this.head; i < this.lots.length && this.made[i]! < day; i++)
+      s += this.lots[i]!.remaining;
+    return s;
+  }
+  made_in(from: number, to: number): number {
+    let s = 0;
+    for (let i = this.firstMadeAfter(from - 1); i < this.lots.length && this.made[i]! < to; i++)
+      s += this.lots[i]!.remaining;
+    return s;
+  }
+  /** Drops lots expired by `day` (a prefix: expiry is made + keep). */
+  ageOut(day: number, pool: Pool, out: LedgerResult["agedOut"]): number {
+    let lost = 0;
+    while (this.head < this.lots.length && this.lots[this.head]!.expires <= day) {
+      const l = this.lots[this.head]!;
+      if (l.remaining > AMOUNT_EPSILON) {
+        lost += l.remaining;
+        out.push({ lotId: l.id, pool, day: l.expires, amount: l.remaining, binId: l.binId });
+      }
+      this.head++;
+    }
+    return lost;
+  }
+}
+
+function compareClaims(a: LedgerClaim, b: LedgerClaim): number {
+  return (
+    a.priority - b.priority ||
+    FEEDER_RANK[a.feederClass] - FEEDER_RANK[b.feederClass] ||
+    a.day - b.day
+  );
+}
+
+export function runLedger(input: LedgerInput): LedgerResult {
+  const pools: Pool[] = ["castings", "leachate"];
+  const shelves: Record<Pool, Shelf> = {
+    castings: new Shelf(
+      input.lots.filter((l) => l.pool === "castings"),
+      input.keepDays.castings,
+    ),
+    leachate: new Shelf(
+      input.lots.filter((l) => l.pool === "leachate"),
+      input.keepDays.leachate,
+    ),
+  };
+  const byId = new Map<string, { shelf: Shelf; index: number; pool: Pool }>();
+  for (const pool of pools)
+    shelves[pool].lots.forEach((l, index) => byId.set(l.id, { shelf: shelves[pool], index, pool }));
+
+  const spans = input.spans;
+  const monthIndex = (day: number): number => {
+    let lo = 0;
+    let hi = spans.length - 1;
+    if (spans.length === 0 || day < spans[0]!.startDay || day >= spans[hi]!.endDay) return -1;
+    while (lo < hi) {
+      const mid = (lo + hi + 1) >> 1;
+      if (spans[mid]!.startDay <= day) lo = mid;
+      else hi = mid - 1;
+    }
+    return lo;
+  };
+  const slot = (m: number, pool: Pool) => m * 2 + (pool === "castings" ? 0 : 1);
+  const plannedByMonth: number[][] = Array.from({ length: spans.length * 2 }, () => []);
+  input.planned.forEach((c, i) => {
+    const m = monthIndex(c.day);
+    if (m >= 0 && c.need > 0) plannedByMonth[slot(m, c.pool)]!.push(i);
+  });
+  const loggedByMonth: number[][] = Array.from({ length: spans.length * 2 }, () => []);
+  input.logged.forEach((c, i) => {
+    const m = monthIndex(c.day);
+    if (m >= 0) loggedByMonth[slot(m, c.pool)]!.push(i);
+  });
+
+  const from = input.recordDrawsFrom;
+  const record = from !== undefined;
+  const result: LedgerResult = {
+    rows: [],
+    plannedGot: new Float64Array(input.planned.length),
+    loggedGot: new Float64Array(input.logged.length),
+    manureRefused: new Float64Array(input.planned.length),
+    plannedDraws: record ? input.planned.map((c) => (c.day >= from ? [] : undefined)) : undefined,
+    loggedDraws: record ? input.logged.map((c) => (c.day >= from ? [] : undefined)) : undefined,
+    agedOut: [],
+    overdrawn: [],
+  };
+
+  spans.forEach((span, m) => {
+    if (m === input.snapshotAtMonth) {
+      result.snapshot = [];
+      for (const pool of pools) {
+        const shelf = shelves[pool];
+        for (let i = shelf.head; i < shelf.lots.length; i++) {
+          const l = shelf.lots[i]!;
+          if (l.remaining > 0)
+            result.snapshot.push({
+              id: l.id,
+              pool,
+              madeDay: l.made,
+              amount: l.remaining,
+              binId: l.binId,
+              manure: l.manure,
+            });
+        }
+      }
+    }
+    for (const pool of pools) {
+      const shelf = shelves[pool];
+      const keep = input.keepDays[pool];
+      // Anything that expired before this month started was counted in the month it expired.
+      const opening = shelf.onHand(span.startDay);
+      const supplied = shelf.made_in(span.startDay, span.endDay);
+      let demand = 0;
+      let allocated = 0;
+
+      // 1. What was done: logged applications, in date order.
+      const logged = loggedByMonth[slot(m, pool)]!;
+      logged.sort((a, b) => input.logged[a]!.day - input.logged[b]!.day || a - b);
+      for (const i of logged) {
+        const c = input.logged[i]!;
+        const out = result.loggedDraws?.[i];
+        let got = 0;
+        for (const d of c.draws) {
+          const at = byId.get(d.lotId);
+          const lot = at && at.pool === pool ? at.shelf.lots[at.index]! : undefined;
+          const take = lot ? Math.min(lot.remaining, Math.max(0, d.amount)) : 0;
+          if (lot && take > 0) {
+            lot.remaining -= take;
+            out?.push({ lotId: lot.id, amount: take });
+          }
+          got += take;
+          if (take < d.amount - AMOUNT_EPSILON)
+            result.overdrawn.push({ loggedIndex: i, lotId: d.lotId, amount: d.amount - take });
+        }
+        if (c.need - got > AMOUNT_EPSILON) {
+          const [lo, hi] = shelf.range(c.day, keep);
+          got += shelf.draw(lo, hi, c.need - got, "manure-first", out);
+        }
+        result.loggedGot[i] = got;
+        demand += c.need;
+        allocated += got;
+      }
+
+      // 2. What is planned: tier by tier.
+      const planned = plannedByMonth[slot(m, pool)]!;
+      planned.sort((a, b) => compareClaims(input.planned[a]!, input.planned[b]!) || a - b);
+      for (let t = 0; t < planned.length;) {
+        const head = input.planned[planned[t]!]!;
+        let end = t + 1;
+        while (end < planned.length && compareClaims(head, input.planned[planned[end]!]!) === 0)
+          end++;
+        const [lo, hi] = shelf.range(head.day, keep);
+        let need = 0;
+        let needClean = 0;
+        for (let k = t; k < end; k++) {
+          const c = input.planned[planned[k]!]!;
+          need += c.need;
+          if (c.cleanOnly) needClean += c.need;
+        }
+        const all = shelf.available(lo, hi, false);
+        const clean = shelf.available(lo, hi, true);
+        // Clean-only claims can have at most the clean stock; the rest shares what is left.
+        const shareClean = needClean > 0 ? Math.min(1, clean / needClean, all / need) : 1;
+        const shareAll = Math.min(1, all / need);
+        // Clean-only claims first, so the manure-first draws of the others do not matter to them.
+        const order = planned.slice(t, end).sort((a, b) => {
+          const ca = input.planned[a]!.cleanOnly ? 0 : 1;
+          const cb = input.planned[b]!.cleanOnly ? 0 : 1;
+          return ca - cb || a - b;
+        });
+        for (const i of order) {
+          const c = input.planned[i]!;
+          const want = c.need * (c.cleanOnly ? shareClean : shareAll);
+          const got = shelf.draw(
+            lo,
+            hi,
+            want,
+            c.cleanOnly ? "clean-only" : "manure-first",
+            result.plannedDraws?.[i],
+          );
+          result.plannedGot[i] = got;
+          if (c.cleanOnly && got < c.need - AMOUNT_EPSILON) {
+            result.manureRefused[i] = Math.min(c.need - got, all - clean);
+          }
+          demand += c.need;
+          allocated += got;
+        }
+        t = end;
+      }
+
+      const agedOut = shelf.ageOut(span.endDay, pool, result.agedOut);
+      const closing = shelf.onHand(span.endDay);
+      const gap = demand - allocated;
+      result.rows.push({
+        month: span.month,
+        pool,
+        opening,
+        supplied,
+        demand,
+        allocated,
+        agedOut,
+        closing,
+        shortfall: gap > AMOUNT_EPSILON * Math.max(1, demand) ? gap : 0,
+      });
+    }
+  });
+  return result;
+}
+
+export const POOL_OF: Record<Material, Pool> = {
+  castings: "castings",
+  tea: "castings",
+  leachate: "leachate",
+};

@@ -1,0 +1,127 @@
+import type { BedInput, PlantingInput } from "@/lib/engine/demand/types";
+import { dflt } from "@/lib/engine/core/defaults";
+import { EngineInputError, requireNonNegative, requirePositive } from "@/lib/engine/core/errors";
+import type { FeedingRule } from "@/lib/engine/demand/feeding-rules";
+import { fmt, plural } from "@/lib/engine/core/format";
+import type { Explanation } from "@/lib/engine/core/types";
+
+/**
+ * Amount of one application in SI (castings kg, leachate L undiluted, tea L),
+ * with the arithmetic in words. The same for every date of a planting, so the
+ * caller computes it once and shares the explanation object.
+ */
+export interface RuleAmount {
+  amount: number;
+  explanation: Explanation;
+  warnings: string[];
+}
+
+export function ruleAmount(
+  rule: FeedingRule,
+  planting: PlantingInput,
+  bed: BedInput,
+  density: number,
+  field: string,
+): RuleAmount {
+  const r = `${field}.rule`;
+  if (!["castings", "leachate", "tea"].includes(rule.material)) {
+    throw new EngineInputError(`${r}.material`, `must be castings, leachate or tea`);
+  }
+  if (!["top-dress", "side-dress", "soil-mix", "drench"].includes(rule.method)) {
+    throw new EngineInputError(`${r}.method`, `must be top-dress, side-dress, soil-mix or drench`);
+  }
+  const per = requireNonNegative(
+    rule.amount,
+    `${r}.amount`,
+    rule.basis === "percent-of-mix" ? 100 : 1000,
+  );
+  const unit =
+    rule.amountUnit ??
+    (rule.material === "castings" && rule.basis !== "percent-of-mix" ? "L" : "L");
+  if (unit !== "L" && unit !== "kg")
+    throw new EngineInputError(`${r}.amountUnit`, `must be "L" or "kg"`);
+  if (unit === "kg" && rule.material !== "castings") {
+    throw new EngineInputError(
+      `${r}.amountUnit`,
+      "only castings can be measured in kg; liquids are litres",
+    );
+  }
+  const warnings: string[] = [];
+  let base: number;
+  let how: string;
+  switch (rule.basis) {
+    case "per-plant": {
+      const n = requirePositive(planting.plantCount, `${field}.plantCount`, 100_000);
+      base = per * n;
+      how = `${plural(n, "plant")} × ${fmt(per, 3)} ${unit}`;
+      break;
+    }
+    case "per-area": {
+      const area = planting.areaM2 ?? bed.areaM2;
+      const a = requirePositive(area, `${field}.areaM2`, 10_000);
+      base = per * a;
+      how = `${fmt(a, 2)} m² × ${fmt(per, 3)} ${unit}/m²`;
+      if (rule.material === "castings" && unit === "L" && per > 12.7 + 1e-9) {
+        warnings.push(`top-dressing ${fmt(per, 1)} mm deep is more than ½ in (12.7 mm)`);
+      }
+      break;
+    }
+    case "per-container-volume":
+    case "percent-of-mix": {
+      const v = requirePositive(
+        planting.containerVolumeL ?? bed.containerVolumeL,
+        `${field}.containerVolumeL`,
+        2000,
+      );
+      if (rule.basis === "percent-of-mix") {
+        if (rule.material !== "castings") {
+          throw new EngineInputError(`${r}.basis`, "percent-of-mix applies to castings only");
+        }
+        base = (per / 100) * v;
+        how = `${fmt(per, 1)} % of ${fmt(v, 1)} L mix`;
+        if (per > dflt("pottingMixWarnAbovePercent")) {
+          warnings.push(
+            `${fmt(per, 1)} % castings is above the 20 % by volume Atiyeh et al. (2000) recommend`,
+          );
+        }
+      } else {
+        base = per * v;
+        how = `${fmt(v, 1)} L container × ${fmt(per, 3)} ${unit}/L`;
+      }
+      break;
+    }
+    default:
+      throw new EngineInputError(`${r}.basis`, `unknown basis "${String(rule.basis)}"`);
+  }
+
+  if (rule.material === "castings") {
+    const kg = unit === "kg" ? base : base * density;
+    const text =
+      unit === "kg"
+        ? `${how} = ${fmt(kg, 3)} kg castings`
+        : `${how} × ${fmt(density, 2)} kg/L = ${fmt(kg, 3)} kg castings`;
+    return {
+      amount: kg,
+      explanation: { text, inputs: { amountPer: per, bulkDensityKgPerL: density } },
+      warnings,
+    };
+  }
+  if (rule.material === "leachate") {
+    const parts = requireNonNegative(
+      rule.dilutionWaterParts ?? dflt("leachateDilutionWaterParts"),
+      `${r}.dilutionWaterParts`,
+      1000,
+    );
+    const undiluted = base / (1 + parts);
+    const text =
+      parts > 0
+        ? `${how} of solution ÷ ${1 + parts} (1 part leachate to ${parts} water) = ${fmt(undiluted, 3)} L leachate`
+        : `${how} = ${fmt(undiluted, 3)} L leachate, undiluted`;
+    return {
+      amount: undiluted,
+      explanation: { text, inputs: { solutionL: base, waterParts: parts } },
+      warnings,
+    };
+  }
+  return { amount: base, explanation: { text: `${how} = ${fmt(base, 3)} L tea` }, warnings };
+}

@@ -1,0 +1,164 @@
+import { ruleAmount } from "@/lib/engine/demand/amount";
+import type {
+  BedInput,
+  DemandOptions,
+  DemandResult,
+  GardenSeason,
+  PlantingInput,
+} from "@/lib/engine/demand/types";
+import { fromDayNumber, parseMonthDay, rangeDays, toDayNumber } from "@/lib/engine/core/dates";
+import { dflt } from "@/lib/engine/core/defaults";
+import { EngineInputError, requireFinite, requirePositive } from "@/lib/engine/core/errors";
+import { defaultRuleFor } from "@/lib/engine/demand/feeding-rules";
+import { expandRecurrence } from "@/lib/engine/demand/recurrence";
+import type { IsoDate } from "@/lib/engine/core/types";
+
+export type { FeedingRule } from "@/lib/engine/demand/feeding-rules";
+export type {
+  BedInput,
+  DemandOptions,
+  DemandResult,
+  DemandWarning,
+  GardenSeason,
+  PlantingInput,
+} from "@/lib/engine/demand/types";
+
+export const DEFAULT_PRIORITY = 3;
+
+interface Season {
+  from: number; // month * 100 + day
+  to: number;
+  text: string;
+}
+
+/** Checks frost dates; the last spring frost must come before the first fall frost. */
+export function parseSeason(season: GardenSeason, field = "season"): Season {
+  const [sm, sd] = parseMonthDay(season?.lastSpringFrost, `${field}.lastSpringFrost`);
+  const [fm, fd] = parseMonthDay(season?.firstFallFrost, `${field}.firstFallFrost`);
+  const from = sm * 100 + sd;
+  const to = fm * 100 + fd;
+  if (to <= from) {
+    throw new EngineInputError(
+      `${field}.firstFallFrost`,
+      `must come after the last spring frost (${season.lastSpringFrost}), got ${season.firstFallFrost}`,
+    );
+  }
+  return { from, to, text: `${season.lastSpringFrost} → ${season.firstFallFrost}` };
+}
+
+function inSeason(date: IsoDate, s: Season): boolean {
+  const md = Number(date.slice(5, 7)) * 100 + Number(date.slice(8, 10));
+  return md >= s.from && md <= s.to;
+}
+
+/** Days before harvest during which manure-fed outputs are not applied, or 0 when none applies. */
+export function preHarvestDays(
+  planting: Pick<PlantingInput, "edible" | "edibleTouchesSoil">,
+): number {
+  if (planting.edible === false) return 0;
+  return planting.edibleTouchesSoil
+    ? dflt("preHarvestDaysSoilContact")
+    : dflt("preHarvestDaysOther");
+}
+
+/** First calendar day on which manure-fed outputs may no longer go on this planting, or null. */
+export function preHarvestBlockStart(planting: PlantingInput, field = "planting"): IsoDate | null {
+  const days = preHarvestDays(planting);
+  if (days === 0) return null;
+  const harvest = toDayNumber(planting.harvestDate ?? planting.endDate, `${field}.harvestDate`);
+  // 7 CFR 205.203(c)(1): harvest "not less than" N days after application → day harvest − N is still allowed.
+  return fromDayNumber(harvest - days + 1);
+}
+
+/** Dated applications for one planting within the range, season and pre-harvest interval. */
+export function expandPlanting(
+  planting: PlantingInput,
+  bed: BedInput,
+  options: DemandOptions,
+  field = "planting",
+): DemandResult {
+  if (typeof planting.id !== "string" || planting.id === "")
+    throw new EngineInputError(`${field}.id`, "must be a non-empty id");
+  const season = parseSeason(options.season);
+  const range = rangeDays(options.range, "range");
+  const start = toDayNumber(planting.startDate, `${field}.startDate`);
+  const end = toDayNumber(planting.endDate, `${field}.endDate`);
+  if (end < start)
+    throw new EngineInputError(
+      `${field}.endDate`,
+      `must not be before startDate (${planting.startDate})`,
+    );
+  const density = requirePositive(
+    options.bulkDensityKgPerL ?? dflt("castingsBulkDensityKgPerL"),
+    "bulkDensityKgPerL",
+    2,
+  );
+  const priority = requireFinite(planting.priority ?? DEFAULT_PRIORITY, `${field}.priority`);
+  if (!["heavy", "medium", "light"].includes(planting.feederClass)) {
+    throw new EngineInputError(`${field}.feederClass`, `must be heavy, medium or light`);
+  }
+  const rule = planting.rule ?? defaultRuleFor(planting.feederClass);
+  const { amount, explanation, warnings } = ruleAmount(rule, planting, bed, density, field);
+  const result: DemandResult = {
+    occurrences: [],
+    blocked: [],
+    warnings: warnings.map((text) => ({
+      plantingId: planting.id,
+      field: `${field}.rule.amount`,
+      text,
+    })),
+  };
+  const from = Math.max(range.from, start);
+  const to = Math.min(range.to, end);
+  if (to < from) return result;
+  const dates = expandRecurrence(
+    rule.recurrence,
+    { from: fromDayNumber(from), to: fromDayNumber(to) },
+    { anchor: planting.startDate, field: `${field}.rule.recurrence` },
+  );
+  const phiStart = options.manureFeedstock ? preHarvestBlockStart(planting, field) : null;
+  const phiReason = phiStart
+    ? `pre-harvest interval: a source bin is fed manure, so nothing within ${preHarvestDays(planting)} days before harvest on ${planting.harvestDate ?? planting.endDate} (7 CFR 205.203(c)(1))`
+    : "";
+  const seasonReason = `outside the growing season (${season.text}); the bed is outdoors`;
+  for (const date of dates) {
+    if (!bed.indoor && !inSeason(date, season)) {
+      result.blocked.push({ plantingId: planting.id, date, reason: seasonReason });
+    } else if (phiStart && date >= phiStart) {
+      result.blocked.push({ plantingId: planting.id, date, reason: phiReason });
+    } else {
+      result.occurrences.push({
+        plantingId: planting.id,
+        bedId: planting.bedId,
+        date,
+        material: rule.material,
+        method: rule.method,
+        amount,
+        priority,
+        feederClass: planting.feederClass,
+        explanation,
+      });
+    }
+  }
+  return result;
+}
+
+/** Every planting's applications, with the beds looked up by id. */
+export function expandDemand(input: {
+  plantings: readonly PlantingInput[];
+  beds: readonly BedInput[];
+  options: DemandOptions;
+}): DemandResult {
+  const beds = new Map(input.beds.map((b) => [b.id, b]));
+  parseSeason(input.options.season);
+  const out: DemandResult = { occurrences: [], blocked: [], warnings: [] };
+  input.plantings.forEach((p, i) => {
+    const bed = beds.get(p.bedId);
+    if (!bed) throw new EngineInputError(`plantings[${i}].bedId`, `no bed with id "${p.bedId}"`);
+    const r = expandPlanting(p, bed, input.options, `plantings[${i}]`);
+    for (const o of r.occurrences) out.occurrences.push(o);
+    for (const b of r.blocked) out.blocked.push(b);
+    for (const w of r.warnings) out.warnings.push(w);
+  });
+  return out;
+}

@@ -1,0 +1,375 @@
+// One call for the whole garden: replay the history up to asOf, forecast every
+// bin and planting after it, balance month by month, check the worms, and say
+// how to close a shortfall. Returns everything the screens and the CLI show.
+import {
+  AMOUNT_EPSILON,
+  runLedger,
+  type LedgerInput,
+  type Pool,
+} from "@/lib/engine/balance/ledger";
+import { fromDayNumber } from "@/lib/engine/core/dates";
+import { closePlanGap } from "@/lib/engine/gap/close";
+import { buildBins } from "@/lib/engine/plan/bins";
+import { planContext } from "@/lib/engine/plan/context";
+import { buildDemand, feedingId } from "@/lib/engine/plan/demand";
+import type { GardenInputs, PlanOptions } from "@/lib/engine/plan/inputs";
+import type {
+  BedDemand,
+  GardenPlan,
+  MonthRow,
+  PlannedFeeding,
+  PlanWarning,
+  PlantingCoverage,
+} from "@/lib/engine/plan/results";
+import { buildSupply } from "@/lib/engine/plan/supply";
+
+const POOLS: Pool[] = ["castings", "leachate"];
+
+export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): GardenPlan {
+  const ctx = planContext(inputs, options);
+  const warnings: PlanWarning[] = [];
+  const supply = buildSupply(inputs, ctx, warnings);
+  const demand = buildDemand(inputs, ctx, warnings);
+  const ledgerInput: LedgerInput = {
+    lots: supply.lots.map((l) => l.lot),
+    planned: demand.planned,
+    logged: demand.logged,
+    keepDays: { castings: ctx.shelfLifeDays, leachate: ctx.liquidMaxAgeDays },
+    spans: ctx.spans,
+  };
+  // The gap search re-runs only the months from asOf on, resuming from the lots as they stood then.
+  const resumeMonth = Math.max(
+    0,
+    ctx.spans.findIndex((s) => s.endDay > ctx.asOfDay + 1),
+  );
+  const ledger = runLedger({
+    ...ledgerInput,
+    recordDrawsFrom: ctx.planStartDay,
+    snapshotAtMonth: resumeMonth,
+  });
+  const planSpans = ctx.spans.slice(ctx.firstPlanMonth);
+  const inPlan = (day: number) => day >= ctx.planStartDay && day <= ctx.planEndDay;
+  const monthOf = (date: string) => date.slice(0, 7);
+
+  // Month × pool rows.
+  const rows: MonthRow[] = [];
+  const teaByMonth = new Map<string, { litres: number; need: number; got: number }>();
+  demand.planned.forEach((c, i) => {
+    if (c.material !== "tea" || !inPlan(c.day)) return;
+    const t = teaByMonth.get(monthOf(c.date)) ?? { litres: 0, need: 0, got: 0 };
+    t.litres += c.amount;
+    t.need += c.need;
+    t.got += ledger.plannedGot[i]!;
+    teaByMonth.set(monthOf(c.date), t);
+  });
+  demand.logged.forEach((c, i) => {
+    const a = inputs.logs.applications[c.index]!;
+    if (a.material !== "tea" || !inPlan(c.day)) return;
+    const t = teaByMonth.get(monthOf(a.date)) ?? { litres: 0, need: 0, got: 0 };
+    t.litres += a.amount;
+    t.need += c.need;
+    t.got += ledger.loggedGot[i]!;
+    teaByMonth.set(monthOf(a.date), t);
+  });
+  for (const r of ledger.rows.slice(ctx.firstPlanMonth * POOLS.length)) {
+    const span = planSpans.find((s) => s.month === r.month)!;
+    const unit = r.pool === "castings" ? "kg" : "L";
+    const tea = teaByMonth.get(r.month);
+    rows.push({
+      ...r,
+      tea:
+        r.pool === "castings"
+          ? {
+              litres: tea?.litres ?? 0,
+              castingsDemandKg: tea?.need ?? 0,
+              castingsAllocatedKg: tea?.got ?? 0,
+            }
+          : undefined,
+      replayed: span.startDay <= ctx.asOfDay,
+      explanation: {
+        kind: "pool-month",
+        inputs: {
+          pool: { text: r.pool },
+          opening: { unit, value: r.opening },
+          supplied: { unit, value: r.supplied },
+          allocated: { unit, value: r.allocated },
+          agedOut: { unit, value: r.agedOut },
+          closing: { unit, value: r.closing },
+          demand: { unit, value: r.demand },
+          shortfall: { unit, value: r.shortfall },
+        },
+      },
+    });
+  }
+
+  // Feedings in the plan's months, planned and logged, with their stable ids.
+  const feedings: PlannedFeeding[] = [];
+  const blockedByPlanting = new Map<string, { dates: string[]; kg: number }>();
+  demand.planned.forEach((c, i) => {
+    if (!inPlan(c.day)) return;
+    const got = ledger.plannedGot[i]!;
+    const refused = ledger.manureRefused[i]!;
+    const blocked = c.cleanOnly && got <= AMOUNT_EPSILON && refused > AMOUNT_EPSILON;
+    if (c.cleanOnly && refused > AMOUNT_EPSILON) {
+      const b = blockedByPlanting.get(c.plantingId) ?? { dates: [], kg: 0 };
+      b.dates.push(c.date);
+      b.kg += refused;
+      blockedByPlanting.set(c.plantingId, b);
+    }
+    feedings.push({
+      id: c.id,
+      plantingId: c.plantingId,
+      bedId: c.bedId,
+      date: c.date,
+      material: c.material,
+      method: c.method,
+      amount: c.amount,
+      need: c.need,
+      allocated: got,
+      coveragePct: c.need > 0 ? (100 * got) / c.need : 100,
+      status: blocked ? "blocked" : "planned",
+      draws: ledger.plannedDraws?.[i] ?? [],
+      explanation: c.cleanOnly
+        ? {
+            kind: "pre-harvest-clean-lots",
+            inputs: {
+              planting: { ref: "planting", id: c.plantingId },
+              need: { unit: c.pool === "castings" ? "kg" : "L", value: c.need },
+              fromCleanLots: { unit: c.pool === "castings" ? "kg" : "L", value: got },
+              manureStockRefused: { unit: c.pool === "castings" ? "kg" : "L", value: refused },
+            },
+            parts: [c.explanation],
+          }
+        : c.explanation,
+    });
+  });
+  const bedOf = new Map(inputs.plantings.map((p) => [p.id, p.bedId]));
+  demand.logged.forEach((c, i) => {
+    if (!inPlan(c.day)) return;
+    const a = inputs.logs.applications[c.index]!;
+    const got = ledger.loggedGot[i]!;
+    feedings.push({
+      id: a.plannedFeedingId ?? feedingId(a.plantingId, a.material, a.date),
+      plantingId: a.plantingId,
+      bedId: bedOf.get(a.plantingId)!,
+      date: a.date,
+      material: a.material,
+      method: a.method,
+      amount: a.amount,
+      need: c.need,
+      allocated: got,
+      coveragePct: c.need > 0 ? (100 * got) / c.need : 100,
+      status: "logged",
+      draws: ledger.loggedDraws?.[i] ?? [],
+      explanation: {
+        kind: "application-logged",
+        inputs: {
+          planting: { ref: "planting", id: a.plantingId },
+          applied: { unit: a.material === "castings" ? "kg" : "L", value: a.amount },
+          drawn: { unit: c.pool === "leachate" ? "L" : "kg", value: c.need },
+          drawnFromStock: { unit: c.pool === "leachate" ? "L" : "kg", value: got },
+        },
+      },
+    });
+  });
+  feedings.sort((a, b) => (a.date < b.date ? -1 : a.date > b.date ? 1 : a.id < b.id ? -1 : 1));
+
+  for (const [plantingId, b] of blockedByPlanting) {
+    warnings.push({
+      kind: "pre-harvest-block",
+      plantingId,
+      date: b.dates[0],
+      explanation: {
+        kind: "pre-harvest-block",
+        inputs: {
+          planting: { ref: "planting", id: plantingId },
+          first: { date: b.dates[0]! },
+          feedings: { unit: "count", value: b.dates.length },
+          manureStockRefused: { unit: "kg", value: b.kg },
+          rule: {
+            text: "7 CFR 205.203(c)(1): 120 days before harvest if the edible part touches soil, 90 otherwise",
+          },
+        },
+      },
+    });
+  }
+
+  // Aged out: castings lot by lot; leachate summed per bin and month (a lot a day).
+  const liquid = new Map<string, { binId: string | null; day: number; amount: number }>();
+  for (const a of ledger.agedOut) {
+    if (a.amount <= AMOUNT_EPSILON) continue;
+    if (a.pool === "castings") {
+      warnings.push({
+        kind: "aged-out",
+        lotId: a.lotId,
+        binId: a.binId ?? undefined,
+        date: fromDayNumber(a.day),
+        explanation: {
+          kind: "castings-aged-out",
+          inputs: {
+            lot: { ref: "lot", id: a.lotId },
+            amount: { unit: "kg", value: a.amount },
+            shelfLife: { unit: "days", value: ctx.shelfLifeDays },
+            on: { date: fromDayNumber(a.day) },
+          },
+        },
+      });
+    } else {
+      const key = `${a.binId}:${fromDayNumber(a.day).slice(0, 7)}`;
+      const l = liquid.get(key) ?? { binId: a.binId, day: a.day, amount: 0 };
+      l.amount += a.amount;
+      liquid.set(key, l);
+    }
+  }
+  for (const l of liquid.values()) {
+    if (l.day < ctx.planStartDay || l.day > ctx.planEndDay) continue;
+    warnings.push({
+      kind: "aged-out",
+      binId: l.binId ?? undefined,
+      date: fromDayNumber(l.day),
+      explanation: {
+        kind: "liquid-aged-out",
+        inputs: {
+          month: { text: fromDayNumber(l.day).slice(0, 7) },
+          amount: { unit: "L", value: l.amount },
+          maxAge: { unit: "days", value: ctx.liquidMaxAgeDays },
+        },
+      },
+    });
+  }
+
+  // Coverage per planting and month; demand per bed and month.
+  const cov = new Map<string, PlantingCoverage>();
+  const beds = new Map<
+    string,
+    Map<string, BedDemand["months"][number] & { need: number; got: number }>
+  >();
+  for (const f of feedings) {
+    const month = monthOf(f.date);
+    const key = `${f.plantingId}|${month}|${f.material}`;
+    const c = cov.get(key) ?? {
+      plantingId: f.plantingId,
+      month,
+      material: f.material,
+      need: 0,
+      allocated: 0,
+      coveragePct: 100,
+      explanation: { kind: "coverage", inputs: {} },
+    };
+    c.need += f.need;
+    c.allocated += f.allocated;
+    cov.set(key, c);
+    const bm = beds.get(f.bedId) ?? new Map();
+    const row = bm.get(month) ?? {
+      month,
+      castingsKg: 0,
+      leachateL: 0,
+      teaL: 0,
+      coveragePct: 100,
+      need: 0,
+      got: 0,
+    };
+    if (f.material === "castings") row.castingsKg += f.amount;
+    else if (f.material === "leachate") row.leachateL += f.amount;
+    else row.teaL += f.amount;
+    row.need += f.need;
+    row.got += f.allocated;
+    bm.set(month, row);
+    beds.set(f.bedId, bm);
+  }
+  const coverage = [...cov.values()].map((c) => {
+    const pct = c.need > 0 ? (100 * c.allocated) / c.need : 100;
+    const unit = c.material === "leachate" ? "L" : "kg";
+    return {
+      ...c,
+      coveragePct: pct,
+      explanation: {
+        kind: "coverage" as const,
+        inputs: {
+          planting: { ref: "planting" as const, id: c.plantingId },
+          need: { unit, value: c.need } as const,
+          allocated: { unit, value: c.allocated } as const,
+          coverage: { unit: "percent" as const, value: pct },
+        },
+      },
+    };
+  });
+  const bedDemand: BedDemand[] = [...beds.entries()].map(([bedId, bm]) => ({
+    bedId,
+    months: [...bm.values()].map(({ need, got, ...m }) => ({
+      ...m,
+      coveragePct: need > 0 ? (100 * got) / need : 100,
+    })),
+  }));
+
+  const bins = buildBins(supply.bins, supply.lots, ledger, inputs, ctx, warnings);
+
+  // First shortfall per pool in the plan's months.
+  const first: Record<Pool, string | null> = { castings: null, leachate: null };
+  for (const f of feedings) {
+    if (f.need - f.allocated <= Math.max(AMOUNT_EPSILON, f.need * 1e-9)) continue;
+    const pool: Pool = f.material === "leachate" ? "leachate" : "castings";
+    if (first[pool] === null || f.date < first[pool]!) first[pool] = f.date;
+  }
+  const castingsRows = rows.filter((r) => r.pool === "castings");
+  const agedKg = castingsRows.reduce((s, r) => s + r.agedOut, 0);
+  const closingKg = castingsRows[castingsRows.length - 1]?.closing ?? 0;
+  const harvestedKg = castingsRows.reduce((s, r) => s + r.supplied, 0);
+  const surplusKg = agedKg + closingKg;
+
+  const plan: GardenPlan = {
+    garden: inputs.garden,
+    asOf: inputs.asOf,
+    range: { from: fromDayNumber(ctx.planStartDay), to: fromDayNumber(ctx.planEndDay) },
+    months: planSpans.map((s) => s.month),
+    rows,
+    bins,
+    beds: bedDemand,
+    feedings,
+    coverage,
+    firstShortfall: first,
+    surplus: {
+      castingsKg: surplusKg,
+      value: surplusKg * ctx.pricePerKg,
+      explanation: {
+        kind: "surplus",
+        inputs: {
+          agedOut: { unit: "kg", value: agedKg },
+          leftAtEnd: { unit: "kg", value: closingKg },
+          price: { unit: "money/kg", value: ctx.pricePerKg },
+        },
+      },
+    },
+    outputValue: {
+      castingsKg: harvestedKg,
+      value: harvestedKg * ctx.pricePerKg,
+      explanation: {
+        kind: "output-value",
+        inputs: {
+          harvested: { unit: "kg", value: harvestedKg },
+          price: { unit: "money/kg", value: ctx.pricePerKg },
+        },
+      },
+    },
+    warnings,
+    gap: null,
+  };
+  if (options.suggestions !== false) {
+    const resumeDay = ctx.spans[resumeMonth]!.startDay;
+    const logged = demand.logged.filter((c) => c.day >= resumeDay);
+    plan.gap = closePlanGap({
+      inputs,
+      ctx,
+      ledgerInput: {
+        ...ledgerInput,
+        lots: ledger.snapshot ?? ledgerInput.lots,
+        logged,
+        spans: ctx.spans.slice(resumeMonth),
+      },
+      supply,
+      demand,
+      plan,
+    });
+  }
+  return plan;
+}

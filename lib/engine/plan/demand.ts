@@ -1,0 +1,207 @@
+// Planted feedings after asOf, and logged applications, as ledger claims.
+import { dflt } from "@/lib/engine/core/defaults";
+import { dayOfYearDate, fromDayNumber, toDayNumber, yearOfDay } from "@/lib/engine/core/dates";
+import { EngineInputError } from "@/lib/engine/core/errors";
+import type { IsoDate, Material, Method } from "@/lib/engine/core/types";
+import { POOL_OF, type LedgerClaim, type LedgerLogged } from "@/lib/engine/balance/ledger";
+import { expandPlanting, preHarvestBlockStart, preHarvestDays } from "@/lib/engine/demand/demand";
+import type { FeedingRule } from "@/lib/engine/demand/feeding-rules";
+import type {
+  BedInput as DemandBed,
+  PlantingInput as DemandPlanting,
+} from "@/lib/engine/demand/types";
+import { isBoundedRule } from "@/lib/engine/demand/recurrence";
+import type { FeedingRuleInput, GardenInputs, MonthDay } from "@/lib/engine/plan/inputs";
+import type { PlanContext } from "@/lib/engine/plan/context";
+import type { Explanation, PlanWarning } from "@/lib/engine/plan/results";
+
+export interface PlannedClaim extends LedgerClaim {
+  id: string;
+  plantingId: string;
+  bedId: string;
+  date: IsoDate;
+  material: Material;
+  method: Method;
+  /** As expanded: kg castings, L undiluted leachate, L tea. */
+  amount: number;
+  explanation: Explanation;
+}
+
+/** A logged application as the ledger needs it; `index` points into inputs.logs.applications. */
+export interface LoggedClaim extends LedgerLogged {
+  index: number;
+}
+
+export const feedingId = (plantingId: string, material: Material, date: IsoDate) =>
+  `${plantingId}:${material}:${date}`;
+
+const md = (m: MonthDay) => `${String(m.month).padStart(2, "0")}-${String(m.day).padStart(2, "0")}`;
+
+export function toEngineRule(rule: FeedingRuleInput): FeedingRule {
+  return {
+    material: rule.material,
+    method: rule.method,
+    basis: rule.basis,
+    amount: rule.amount,
+    amountUnit: rule.measure === "mass" ? "kg" : "L",
+    recurrence: rule.recurrence,
+    dilutionWaterParts: rule.dilutionWaterParts ?? undefined,
+  };
+}
+
+function seasonEnd(startDay: number, frost: MonthDay): number {
+  const year = yearOfDay(startDay);
+  const f = dayOfYearDate(year, [frost.month, frost.day]);
+  return f >= startDay ? f : dayOfYearDate(year + 1, [frost.month, frost.day]);
+}
+
+export function buildDemand(
+  inputs: GardenInputs,
+  ctx: PlanContext,
+  warnings: PlanWarning[],
+): { planned: PlannedClaim[]; logged: LoggedClaim[] } {
+  const beds = new Map(inputs.beds.map((b) => [b.id, b]));
+  const season = {
+    lastSpringFrost: md(inputs.settings.lastSpringFrost),
+    firstFallFrost: md(inputs.settings.firstFallFrost),
+  };
+  const from = ctx.asOfDay + 1;
+  const range = { from: fromDayNumber(from), to: fromDayNumber(Math.max(from, ctx.planEndDay)) };
+  const planted: PlannedClaim[] = [];
+  const plantings = new Map<string, { p: DemandPlanting; rule: FeedingRuleInput | null }>();
+  const density = ctx.castingsDensityKgPerL;
+
+  inputs.plantings.forEach((p, i) => {
+    const field = `plantings[${i}]`;
+    const bed = beds.get(p.bedId);
+    if (!bed) throw new EngineInputError(`${field}.bedId`, `no bed with id "${p.bedId}"`);
+    if (!Number.isInteger(p.plantCount) || p.plantCount < 1)
+      throw new EngineInputError(`${field}.plantCount`, `must be a whole number of plants ≥ 1`);
+    const rule = p.rule ? toEngineRule(p.rule) : undefined;
+    let end = p.endDate;
+    if (end === null) {
+      const start = toDayNumber(p.startDate, `${field}.startDate`);
+      if (isBoundedRule(rule?.recurrence ?? "FREQ=MONTHLY", `${field}.rule.recurrence`))
+        end = fromDayNumber(Math.max(start, ctx.planEndDay));
+      else if (!bed.indoor) end = fromDayNumber(seasonEnd(start, inputs.settings.firstFallFrost));
+      else
+        throw new EngineInputError(
+          `${field}.endDate`,
+          "is needed: the rule never ends and an indoor bed has no season",
+        );
+    }
+    const dp: DemandPlanting = {
+      id: p.id,
+      bedId: p.bedId,
+      feederClass: p.feederClass,
+      plantCount: p.plantCount,
+      startDate: p.startDate,
+      endDate: end,
+      harvestDate: p.harvestDate ?? undefined,
+      priority: p.priority ?? undefined,
+      edible: p.edible,
+      edibleTouchesSoil: p.edibleTouchesSoil,
+      rule,
+    };
+    plantings.set(p.id, { p: dp, rule: p.rule });
+    const db: DemandBed = {
+      id: bed.id,
+      indoor: bed.indoor,
+      areaM2: bed.areaM2 ?? undefined,
+      containerVolumeL: bed.containerVolumeL ?? undefined,
+    };
+    const r = expandPlanting(dp, db, { range, season, bulkDensityKgPerL: density }, field);
+    for (const w of r.warnings)
+      warnings.push({
+        kind: "mix-above-limit",
+        plantingId: p.id,
+        explanation: {
+          kind: "mix-above-limit",
+          inputs: {
+            planting: { ref: "planting", id: p.id },
+            limit: { unit: "percent", value: dflt("pottingMixWarnAbovePercent") },
+            note: { text: w.text },
+          },
+        },
+      });
+    const phi = preHarvestBlockStart(dp, field);
+    const teaRatio = p.rule?.teaCastingsPerWater ?? ctx.teaCastingsPerWater;
+    // One explanation per planting and material: every date of a planting needs the same amount.
+    const first = r.occurrences[0];
+    const need1 = first
+      ? first.material === "tea"
+        ? first.amount * teaRatio * density
+        : first.amount
+      : 0;
+    const explanation: Explanation | undefined = !first
+      ? undefined
+      : first.material === "tea"
+        ? {
+            kind: "tea-brewed",
+            inputs: {
+              planting: { ref: "planting", id: p.id },
+              tea: { unit: "L", value: first.amount },
+              castingsPerWater: { unit: "ratio", value: teaRatio },
+              bulkDensity: { unit: "ratio", value: density },
+              castings: { unit: "kg", value: need1 },
+            },
+          }
+        : {
+            kind: "demand-amount",
+            inputs: {
+              planting: { ref: "planting", id: p.id },
+              basis: { text: (rule ?? { basis: "per-plant" }).basis },
+              plants: { unit: "count", value: p.plantCount },
+              amount: { unit: first.material === "castings" ? "kg" : "L", value: first.amount },
+            },
+          };
+    for (const o of r.occurrences) {
+      const day = toDayNumber(o.date);
+      const need = o.material === "tea" ? o.amount * teaRatio * density : o.amount;
+      planted.push({
+        id: feedingId(p.id, o.material, o.date),
+        plantingId: p.id,
+        bedId: p.bedId,
+        date: o.date,
+        material: o.material,
+        method: o.method,
+        amount: o.amount,
+        explanation: explanation!,
+        pool: POOL_OF[o.material],
+        day,
+        need,
+        priority: o.priority,
+        feederClass: o.feederClass,
+        cleanOnly: phi !== null && o.date >= phi,
+      });
+    }
+  });
+
+  const logged: LoggedClaim[] = [];
+  const replaced = new Set<string>();
+  inputs.logs.applications.forEach((a, i) => {
+    const pl = plantings.get(a.plantingId);
+    if (!pl)
+      throw new EngineInputError(
+        `logs.applications[${i}].plantingId`,
+        `no planting with id "${a.plantingId}"`,
+      );
+    const day = toDayNumber(a.date, "logs.applications[].date");
+    let need: number;
+    if (a.draws.length > 0) need = a.draws.reduce((s, d) => s + d.amount, 0);
+    else if (a.material === "castings") need = a.amount;
+    else if (a.material === "tea")
+      need = a.amount * (pl.rule?.teaCastingsPerWater ?? ctx.teaCastingsPerWater) * density;
+    else
+      need = a.amount / (1 + (pl.rule?.dilutionWaterParts ?? dflt("leachateDilutionWaterParts")));
+    // Planned feedings all fall after asOf: only a log that names one, or is dated after asOf, can replace it.
+    if (a.plannedFeedingId !== null) replaced.add(a.plannedFeedingId);
+    else if (day > ctx.asOfDay) replaced.add(feedingId(a.plantingId, a.material, a.date));
+    logged.push({ index: i, pool: POOL_OF[a.material], day, need, draws: a.draws });
+  });
+  // A logged application replaces the planned occurrence it fulfils.
+  const planned = planted.filter((c) => !replaced.has(c.id));
+  return { planned, logged };
+}
+
+export { preHarvestDays };
