@@ -44,7 +44,9 @@ export function binWorms(
   changes.delete(0);
   const startWorms = Math.max(0, start?.set ?? bin.startingWorms + (start?.add ?? 0));
   const ceilingPerM2 = bin.densityCeilingKgPerM2;
-  const run = simulatePopulation({
+  const worms = new Float64Array(days + 1);
+  const kg = new Float64Array(days + 1);
+  simulatePopulation({
     startWorms,
     surfaceM2: areaM2,
     days,
@@ -56,9 +58,8 @@ export function binWorms(
     // The stack grows by one tray every P days until it is full; worms spread into every tray.
     surfaceOnDay: (t) => Math.min(bin.trays, 1 + Math.floor(t / P)) * areaM2,
     changes,
+    totalsOnly: { worms, kg },
   });
-  const worms = Float64Array.from(run.series, (d) => d.worms);
-  const kg = Float64Array.from(run.series, (d) => d.biomassKg);
   return { startDay, worms, kg };
 }
 
