@@ -5,7 +5,6 @@
 import { dflt } from "@/lib/engine/core/defaults";
 import { fromDayNumber, toDayNumber } from "@/lib/engine/core/dates";
 import { simulatePopulation } from "@/lib/engine/supply/population";
-import type { LedgerResult } from "@/lib/engine/balance/ledger";
 import type { GardenInputs } from "@/lib/engine/plan/inputs";
 import type { PlanContext } from "@/lib/engine/plan/context";
 import type { BinSupplyInfo, LotInfo } from "@/lib/engine/plan/supply";
@@ -66,7 +65,6 @@ export function binWorms(
 export function buildBins(
   infos: BinSupplyInfo[],
   lots: LotInfo[],
-  ledger: LedgerResult,
   inputs: GardenInputs,
   ctx: PlanContext,
   warnings: PlanWarning[],
@@ -181,7 +179,6 @@ export function buildBins(
       next += maxAge;
     }
     tasks.sort((a, b) => (a.date < b.date ? -1 : a.date > b.date ? 1 : a.kind < b.kind ? -1 : 1));
-    void ledger;
     return {
       binId: bin.id,
       name: bin.name,

@@ -303,7 +303,7 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
     })),
   }));
 
-  const bins = buildBins(supply.bins, supply.lots, ledger, inputs, ctx, warnings);
+  const bins = buildBins(supply.bins, supply.lots, inputs, ctx, warnings);
 
   // First shortfall per pool in the plan's months.
   const first: Record<Pool, string | null> = { castings: null, leachate: null };
