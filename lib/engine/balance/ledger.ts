@@ -61,6 +61,8 @@ export interface LedgerInput {
   spans: readonly LedgerSpan[];
   /** Record which lot each claim on or after this day drew from (for explanations; off in the gap search). */
   recordDrawsFrom?: number;
+  /** Return the lots as they stand at the start of this month index (to resume from there). */
+  snapshotAtMonth?: number;
 }
 
 export interface LedgerRow {
@@ -87,6 +89,8 @@ export interface LedgerResult {
   agedOut: { lotId: string; pool: Pool; day: number; amount: number; binId: string | null }[];
   /** Logged draws that named an unknown lot or more than it held (taken oldest first instead). */
   overdrawn: { loggedIndex: number; lotId: string; amount: number }[];
+  /** Lots still on the shelves (or yet to be made) at the start of `snapshotAtMonth`. */
+  snapshot?: LedgerLot[];
 }
 
 interface Live {
@@ -253,6 +257,24 @@ export function runLedger(input: LedgerInput): LedgerResult {
   };
 
   spans.forEach((span, m) => {
+    if (m === input.snapshotAtMonth) {
+      result.snapshot = [];
+      for (const pool of pools) {
+        const shelf = shelves[pool];
+        for (let i = shelf.head; i < shelf.lots.length; i++) {
+          const l = shelf.lots[i]!;
+          if (l.remaining > 0)
+            result.snapshot.push({
+              id: l.id,
+              pool,
+              madeDay: l.made,
+              amount: l.remaining,
+              binId: l.binId,
+              manure: l.manure,
+            });
+        }
+      }
+    }
     for (const pool of pools) {
       const shelf = shelves[pool];
       const keep = input.keepDays[pool];

@@ -37,7 +37,16 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
     keepDays: { castings: ctx.shelfLifeDays, leachate: ctx.liquidMaxAgeDays },
     spans: ctx.spans,
   };
-  const ledger = runLedger({ ...ledgerInput, recordDrawsFrom: ctx.planStartDay });
+  // The gap search re-runs only the months from asOf on, resuming from the lots as they stood then.
+  const resumeMonth = Math.max(
+    0,
+    ctx.spans.findIndex((s) => s.endDay > ctx.asOfDay + 1),
+  );
+  const ledger = runLedger({
+    ...ledgerInput,
+    recordDrawsFrom: ctx.planStartDay,
+    snapshotAtMonth: resumeMonth,
+  });
   const planSpans = ctx.spans.slice(ctx.firstPlanMonth);
   const inPlan = (day: number) => day >= ctx.planStartDay && day <= ctx.planEndDay;
   const monthOf = (date: string) => date.slice(0, 7);
@@ -346,7 +355,21 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
     gap: null,
   };
   if (options.suggestions !== false) {
-    plan.gap = closePlanGap({ inputs, ctx, ledgerInput, supply, demand, plan });
+    const resumeDay = ctx.spans[resumeMonth]!.startDay;
+    const logged = demand.logged.filter((c) => c.day >= resumeDay);
+    plan.gap = closePlanGap({
+      inputs,
+      ctx,
+      ledgerInput: {
+        ...ledgerInput,
+        lots: ledger.snapshot ?? ledgerInput.lots,
+        logged,
+        spans: ctx.spans.slice(resumeMonth),
+      },
+      supply,
+      demand,
+      plan,
+    });
   }
   return plan;
 }

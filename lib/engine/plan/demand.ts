@@ -185,11 +185,13 @@ export function buildDemand(
   const logged: LoggedClaim[] = [];
   const replaced = new Set<string>();
   inputs.logs.applications.forEach((a, i) => {
-    const field = `logs.applications[${i}]`;
     const pl = plantings.get(a.plantingId);
     if (!pl)
-      throw new EngineInputError(`${field}.plantingId`, `no planting with id "${a.plantingId}"`);
-    const day = toDayNumber(a.date, `${field}.date`);
+      throw new EngineInputError(
+        `logs.applications[${i}].plantingId`,
+        `no planting with id "${a.plantingId}"`,
+      );
+    const day = toDayNumber(a.date, "logs.applications[].date");
     let need: number;
     if (a.draws.length > 0) need = a.draws.reduce((s, d) => s + d.amount, 0);
     else if (a.material === "castings") need = a.amount;
@@ -197,7 +199,9 @@ export function buildDemand(
       need = a.amount * (pl.rule?.teaCastingsPerWater ?? ctx.teaCastingsPerWater) * density;
     else
       need = a.amount / (1 + (pl.rule?.dilutionWaterParts ?? dflt("leachateDilutionWaterParts")));
-    replaced.add(a.plannedFeedingId ?? feedingId(a.plantingId, a.material, a.date));
+    // Planned feedings all fall after asOf: only a log that names one, or is dated after asOf, can replace it.
+    if (a.plannedFeedingId !== null) replaced.add(a.plannedFeedingId);
+    else if (day > ctx.asOfDay) replaced.add(feedingId(a.plantingId, a.material, a.date));
     logged.push({ index: i, pool: POOL_OF[a.material], day, need, draws: a.draws });
   });
   // A logged application replaces the planned occurrence it fulfils.
