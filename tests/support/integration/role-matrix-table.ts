@@ -1,6 +1,7 @@
 import { eq } from "drizzle-orm";
 import * as accountPassword from "@/app/api/account/password/route";
 import * as account from "@/app/api/account/route";
+import * as authJs from "@/app/api/auth/[...nextauth]/route";
 import * as devOutbox from "@/app/api/dev/outbox/route";
 import * as resend from "@/app/api/gardens/[gardenId]/invitations/[invitationId]/resend/route";
 import * as invitation from "@/app/api/gardens/[gardenId]/invitations/[invitationId]/route";
@@ -57,8 +58,11 @@ export interface MatrixRow {
   /** Which variant of the call, when one route appears more than once. */
   variant?: string;
   handler: Handler;
-  /** True when a 2xx answer must change the database (proves the snapshot can see a change). */
-  mutates: boolean;
+  /**
+   * True when a 2xx answer must change the database (proves the snapshot can see a change);
+   * a function when that depends on the caller (signing out changes nothing when signed out).
+   */
+  mutates: boolean | ((actor: Actor) => boolean);
   expect: Record<Actor, number>;
   /** Builds the call; may set up what it needs (an invitation, a reset token) first. */
   request: (
@@ -103,6 +107,9 @@ const ownerOnly = (ok: number) => ({
 });
 
 const g = (ctx: RowContext) => ({ gardenId: ctx.world.gardenId });
+// The catch-all's params are a list of path segments.
+const authPath = (path: string) =>
+  ({ nextauth: path.split("/") }) as unknown as Record<string, string>;
 
 async function openInvitation(ctx: RowContext, email = uniqueEmail("invitee")) {
   const { token, tokenHash } = createLinkToken();
@@ -172,9 +179,10 @@ export const roleMatrix: MatrixRow[] = [
     file: "app/api/dev/outbox/route.ts",
     handler: devOutbox.GET,
     mutates: false,
-    // Open to anyone, but only while mail is caught locally outside production
-    // (services/mailer.ts isOutboxEnabled); these tests run with NODE_ENV=test.
-    expect: everyone(200),
+    // Only while mail is caught locally outside production (services/mailer.ts
+    // isOutboxEnabled; these tests run with NODE_ENV=test), and only a signed-in
+    // person's own mail (outbox-privacy.test.ts).
+    expect: signedIn(200),
     request: () => ({ url: "/api/dev/outbox" }),
   },
   {
@@ -182,7 +190,8 @@ export const roleMatrix: MatrixRow[] = [
     file: "app/api/session/route.ts",
     variant: "sign in with own password",
     handler: session.POST,
-    mutates: false,
+    // A new row in the sessions allow-list.
+    mutates: true,
     expect: everyone(200),
     request: ({ user }) => ({
       url: "/api/session",
@@ -193,7 +202,8 @@ export const roleMatrix: MatrixRow[] = [
     method: "DELETE",
     file: "app/api/session/route.ts",
     handler: session.DELETE,
-    mutates: false,
+    // Deletes the caller's session row; a signed-out caller has none.
+    mutates: (actor) => actor !== "signedOut",
     expect: everyone(200),
     request: () => ({ url: "/api/session" }),
   },
@@ -219,7 +229,8 @@ export const roleMatrix: MatrixRow[] = [
     variant: "sign up a new address",
     handler: account.POST,
     mutates: true,
-    expect: everyone(201),
+    // 202 for a new and a known address alike (account-enumeration.test.ts).
+    expect: everyone(202),
     request: () => ({
       url: "/api/account",
       body: {
@@ -228,6 +239,50 @@ export const roleMatrix: MatrixRow[] = [
         password: "a-fresh-bed-of-leaves",
       },
     }),
+  },
+  {
+    method: "POST",
+    file: "app/api/account/route.ts",
+    variant: "sign up an address that has an account",
+    handler: account.POST,
+    // Nothing is made; the address's owner is e-mailed after the response.
+    mutates: false,
+    expect: everyone(202),
+    request: ({ user }) => ({
+      url: "/api/account",
+      body: { name: "Someone Else", email: user.email, password: "a-fresh-bed-of-leaves" },
+    }),
+  },
+  {
+    method: "GET",
+    file: "app/api/auth/[...nextauth]/route.ts",
+    variant: "Auth.js session endpoint (switched off)",
+    handler: authJs.GET as Handler,
+    mutates: false,
+    expect: everyone(404),
+    request: () => ({ url: "/api/auth/session", params: authPath("session") }),
+  },
+  {
+    method: "POST",
+    file: "app/api/auth/[...nextauth]/route.ts",
+    variant: "Auth.js credentials callback (switched off)",
+    handler: authJs.POST as Handler,
+    mutates: false,
+    expect: everyone(404),
+    request: ({ user }) => ({
+      url: "/api/auth/callback/credentials",
+      params: authPath("callback/credentials"),
+      body: { email: user.email, password: user.password },
+    }),
+  },
+  {
+    method: "POST",
+    file: "app/api/auth/[...nextauth]/route.ts",
+    variant: "Auth.js sign-out (ends the session like DELETE /api/session)",
+    handler: authJs.POST as Handler,
+    mutates: (actor) => actor !== "signedOut",
+    expect: everyone(200),
+    request: () => ({ url: "/api/auth/signout", params: authPath("signout") }),
   },
   {
     method: "POST",
@@ -480,7 +535,4 @@ export const roleMatrix: MatrixRow[] = [
 ];
 
 /** Route files deliberately outside the matrix, with the reason. */
-export const matrixExclusions: Record<string, string> = {
-  "app/api/auth/[...nextauth]/route.ts":
-    "Auth.js's own endpoints (CSRF token + form posts); they share verifyCredentials and the throttle with POST /api/session, which the matrix covers.",
-};
+export const matrixExclusions: Record<string, string> = {};
