@@ -133,3 +133,37 @@ export function formatMoney(dollars: number): string {
   if (!Number.isFinite(dollars)) return "—";
   return new Intl.NumberFormat("en-US", { style: "currency", currency: "USD" }).format(dollars);
 }
+
+/**
+ * The one unit a table column of `kind` is in (a CSV column or a sortable table
+ * column cannot switch to oz or fl oz for its small rows the way a label does).
+ */
+export function columnUnit(kind: AmountKind, system: UnitSystem): UnitName {
+  const units = displayUnits(system);
+  switch (kind) {
+    case "castings-mass":
+      return units.castingsMass;
+    case "castings-volume":
+      return units.castingsVolume;
+    case "liquid":
+      return units.liquid;
+    case "area":
+      return units.area;
+    case "length":
+      return units.length;
+    case "depth":
+      return units.depth;
+    case "tray-volume":
+      return units.trayVolume;
+  }
+}
+
+/** An SI amount as a number in its column's unit, rounded as on screen (44, 1.2, 0.75). */
+export function toColumnValue(si: number, kind: AmountKind, system: UnitSystem): number {
+  return roundForDisplay(fromSi(si, columnUnit(kind, system)));
+}
+
+/** "Castings opening (lb)": a column header with its unit. */
+export function columnHeader(title: string, kind: AmountKind, system: UnitSystem): string {
+  return `${title} (${unitLabel(columnUnit(kind, system))})`;
+}

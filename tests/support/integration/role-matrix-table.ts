@@ -1,3 +1,4 @@
+import { eq } from "drizzle-orm";
 import * as accountPassword from "@/app/api/account/password/route";
 import * as account from "@/app/api/account/route";
 import * as authJs from "@/app/api/auth/[...nextauth]/route";
@@ -7,7 +8,11 @@ import * as invitation from "@/app/api/gardens/[gardenId]/invitations/[invitatio
 import * as invitations from "@/app/api/gardens/[gardenId]/invitations/route";
 import * as member from "@/app/api/gardens/[gardenId]/members/[userId]/route";
 import * as members from "@/app/api/gardens/[gardenId]/members/route";
+import * as balance from "@/app/api/gardens/[gardenId]/balance/route";
+import * as gardenExport from "@/app/api/gardens/[gardenId]/export/route";
 import * as garden from "@/app/api/gardens/[gardenId]/route";
+import * as whatIf from "@/app/api/gardens/[gardenId]/what-if/route";
+import * as gardenImport from "@/app/api/gardens/import/route";
 import * as gardens from "@/app/api/gardens/route";
 import * as health from "@/app/api/health/route";
 import * as accept from "@/app/api/invitations/accept/route";
@@ -15,7 +20,9 @@ import * as resetConfirm from "@/app/api/password-reset/confirm/route";
 import * as resetRequest from "@/app/api/password-reset/route";
 import * as everywhere from "@/app/api/session/everywhere/route";
 import * as session from "@/app/api/session/route";
+import { getDb } from "@/db";
 import { createInvitation } from "@/db/queries/invitations";
+import { bins } from "@/db/schema";
 import { createPasswordReset } from "@/db/queries/password-resets";
 import { createLinkToken } from "@/lib/auth/tokens";
 import {
@@ -115,6 +122,48 @@ async function openInvitation(ctx: RowContext, email = uniqueEmail("invitee")) {
   });
   return { token, invitationId: inv.id };
 }
+
+/** A bin in the world's garden for a what-if to change (made once; the matrix garden starts empty). */
+async function aBin(ctx: RowContext): Promise<string> {
+  const db = await getDb();
+  const [existing] = await db
+    .select({ id: bins.id })
+    .from(bins)
+    .where(eq(bins.gardenId, ctx.world.gardenId))
+    .limit(1);
+  if (existing) return existing.id;
+  // 21 × 17 × 5½ in inside (PRODUCT.md's 24 × 20 in 2×6 tray), in metres.
+  const [row] = await db
+    .insert(bins)
+    .values({
+      gardenId: ctx.world.gardenId,
+      name: "Matrix stack",
+      trayLengthM: 0.5334,
+      trayWidthM: 0.4318,
+      trayDepthM: 0.1397,
+      trayCount: 4,
+      startedOn: "2026-02-01",
+      startingWormCount: 1500,
+    })
+    .returning({ id: bins.id });
+  return row!.id;
+}
+
+/** A small valid scenario file (an invented one-bin porch garden). */
+const tinyScenario = {
+  format: "castline-scenario",
+  version: 1,
+  garden: { name: "Matrix Porch" },
+  settings: {
+    unitSystem: "us",
+    timeZone: "America/Chicago",
+    lastSpringFrost: "04-15",
+    firstFallFrost: "10-20",
+  },
+  bins: [],
+  beds: [],
+  plantings: [],
+};
 
 export const roleMatrix: MatrixRow[] = [
   {
@@ -320,6 +369,46 @@ export const roleMatrix: MatrixRow[] = [
       params: g(ctx),
       body: { confirmName: ctx.world.gardenName },
     }),
+  },
+  {
+    method: "GET",
+    file: "app/api/gardens/[gardenId]/balance/route.ts",
+    handler: balance.GET,
+    mutates: false,
+    expect: viewerPlus,
+    request: (ctx) => ({
+      url: `/api/gardens/${ctx.world.gardenId}/balance?months=6`,
+      params: g(ctx),
+    }),
+  },
+  {
+    method: "POST",
+    file: "app/api/gardens/[gardenId]/what-if/route.ts",
+    handler: whatIf.POST,
+    // A viewer may try what-ifs: nothing is written (the matrix checks the database is unchanged).
+    mutates: false,
+    expect: viewerPlus,
+    request: async (ctx) => ({
+      url: `/api/gardens/${ctx.world.gardenId}/what-if`,
+      params: g(ctx),
+      body: { months: 3, changes: [{ kind: "bin-trays", binId: await aBin(ctx), trays: 5 }] },
+    }),
+  },
+  {
+    method: "GET",
+    file: "app/api/gardens/[gardenId]/export/route.ts",
+    handler: gardenExport.GET,
+    mutates: false,
+    expect: viewerPlus,
+    request: (ctx) => ({ url: `/api/gardens/${ctx.world.gardenId}/export`, params: g(ctx) }),
+  },
+  {
+    method: "POST",
+    file: "app/api/gardens/import/route.ts",
+    handler: gardenImport.POST,
+    mutates: true,
+    expect: signedIn(201),
+    request: () => ({ url: "/api/gardens/import", body: tinyScenario }),
   },
   {
     method: "GET",
