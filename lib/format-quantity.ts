@@ -216,3 +216,15 @@ export function formatDensity(kgPerL: number, system: UnitSystem): string {
   const lbPerFt3 = fromSi(kgPerL * toSi(1, "ft3"), "lb");
   return `${numberFormat.format(roundForDisplay(lbPerFt3))} lb per ft³`;
 }
+
+/** The one unit a chart axis uses for a pool (no switching to ounces below 1 lb). */
+export function chartUnit(pool: PoolKind, system: UnitSystem): { unit: UnitName; label: string } {
+  const units = displayUnits(system);
+  const unit = pool === "castings" ? units.castingsMass : units.liquid;
+  return { unit, label: unitLabel(unit) };
+}
+
+/** A pool amount as a plain number in its chart unit, rounded for display. */
+export function toChartValue(si: number, pool: PoolKind, system: UnitSystem): number {
+  return roundForDisplay(fromSi(si, chartUnit(pool, system).unit));
+}
