@@ -80,17 +80,18 @@ export function buildBins(
       const i = Math.min(t, pop.worms.length - 1);
       return { worms: pop.worms[i]!, kg: pop.kg[i]! };
     };
-    const months: BinMonth[] = planSpans.map((span) => {
-      let castingsKg = 0;
-      let leachateL = 0;
-      for (const l of lots) {
-        if (l.lot.binId !== bin.id || l.source === "stock") continue;
-        if (l.lot.madeDay < span.startDay || l.lot.madeDay >= span.endDay) continue;
-        if (l.lot.pool === "castings") castingsKg += l.lot.amount;
-        else leachateL += l.lot.amount;
-      }
+    const made = planSpans.map(() => ({ castingsKg: 0, leachateL: 0 }));
+    for (const l of lots) {
+      if (l.lot.binId !== bin.id || l.source === "stock") continue;
+      const d = l.lot.madeDay;
+      if (d < ctx.planStartDay || d > ctx.planEndDay) continue;
+      const m = planSpans.findIndex((s) => d < s.endDay);
+      if (l.lot.pool === "castings") made[m]!.castingsKg += l.lot.amount;
+      else made[m]!.leachateL += l.lot.amount;
+    }
+    const months: BinMonth[] = planSpans.map((span, m) => {
       const w = wormsOn(span.endDay - 1);
-      return { month: span.month, castingsKg, leachateL, worms: w.worms, wormMassKg: w.kg };
+      return { month: span.month, ...made[m]!, worms: w.worms, wormMassKg: w.kg };
     });
 
     // Capacity: food for the month's forecast castings (at least their own mass) per week,
@@ -101,7 +102,10 @@ export function buildBins(
     const surfaceKgPerWeek =
       (topTrayM2 / toSi(1, "ft2") / dflt("surfaceFt2PerLbFoodPerWeek")) * toSi(1, "lb");
     const over = { intake: [] as number[], surface: [] as number[] };
-    let worst = { intake: { need: 0, limit: 0, month: "" }, surface: { need: 0, limit: 0, month: "" } };
+    let worst = {
+      intake: { need: 0, limit: 0, month: "" },
+      surface: { need: 0, limit: 0, month: "" },
+    };
     planSpans.forEach((span, m) => {
       const row = months[m]!;
       if (row.castingsKg <= 0) return;
@@ -112,12 +116,18 @@ export function buildBins(
       if (needPerWeek > intakePerWeek + 1e-12) {
         over.intake.push(m);
         if (needPerWeek - intakePerWeek > worst.intake.need - worst.intake.limit)
-          worst = { ...worst, intake: { need: needPerWeek, limit: intakePerWeek, month: span.month } };
+          worst = {
+            ...worst,
+            intake: { need: needPerWeek, limit: intakePerWeek, month: span.month },
+          };
       }
       if (needPerWeek > surfaceKgPerWeek + 1e-12) {
         over.surface.push(m);
         if (needPerWeek - surfaceKgPerWeek > worst.surface.need - worst.surface.limit)
-          worst = { ...worst, surface: { need: needPerWeek, limit: surfaceKgPerWeek, month: span.month } };
+          worst = {
+            ...worst,
+            surface: { need: needPerWeek, limit: surfaceKgPerWeek, month: span.month },
+          };
       }
     });
     for (const kind of ["intake", "surface"] as const) {
@@ -198,7 +208,9 @@ function task(binId: string, kind: BinTask["kind"], day: number, amount: number 
       kind: kind === "drain" ? "leachate-collected" : "harvest-forecast",
       inputs: {
         bin: { ref: "bin", id: binId },
-        ...(amount === null ? {} : { amount: { unit: kind === "drain" ? "L" : "kg", value: amount } }),
+        ...(amount === null
+          ? {}
+          : { amount: { unit: kind === "drain" ? "L" : "kg", value: amount } }),
       },
     },
   };
