@@ -8,8 +8,8 @@ import { formatDensity, formatTagged } from "@/lib/format-quantity";
 const LB_KG = 0.45359237;
 const GAL_L = 3.785411784;
 
-const names = (ref: string, id: string) =>
-  ({ "bin:b1": "Cedar stack", "planting:p1": "Tomatoes in Bed 1" })[`${ref}:${id}`];
+const knownNames: Record<string, string> = { "bin:b1": "Cedar stack", "planting:p1": "Tomatoes in Bed 1" };
+const names = (ref: string, id: string): string | undefined => knownNames[`${ref}:${id}`];
 
 describe("explain: a month of castings", () => {
   const month: Explanation = {
