@@ -217,14 +217,42 @@ export function formatDensity(kgPerL: number, system: UnitSystem): string {
   return `${numberFormat.format(roundForDisplay(lbPerFt3))} lb per ft³`;
 }
 
-/** The one unit a chart axis uses for a pool (no switching to ounces below 1 lb). */
-export function chartUnit(pool: PoolKind, system: UnitSystem): { unit: UnitName; label: string } {
+/**
+ * The one unit a table column of `kind` is in (a CSV column or a sortable table
+ * column cannot switch to oz or fl oz for its small rows the way a label does).
+ */
+export function columnUnit(kind: AmountKind, system: UnitSystem): UnitName {
   const units = displayUnits(system);
-  const unit = pool === "castings" ? units.castingsMass : units.liquid;
-  return { unit, label: unitLabel(unit) };
+  switch (kind) {
+    case "castings-mass":
+      return units.castingsMass;
+    case "castings-volume":
+      return units.castingsVolume;
+    case "liquid":
+      return units.liquid;
+    case "area":
+      return units.area;
+    case "length":
+      return units.length;
+    case "depth":
+      return units.depth;
+    case "tray-volume":
+      return units.trayVolume;
+  }
 }
 
-/** A pool amount as a plain number in its chart unit, rounded for display. */
-export function toChartValue(si: number, pool: PoolKind, system: UnitSystem): number {
-  return roundForDisplay(fromSi(si, chartUnit(pool, system).unit));
+/** An SI amount as a number in its column's unit, rounded as on screen (44, 1.2, 0.75). */
+export function toColumnValue(si: number, kind: AmountKind, system: UnitSystem): number {
+  return roundForDisplay(fromSi(si, columnUnit(kind, system)));
+}
+
+/** "Castings opening (lb)": a column header with its unit. */
+export function columnHeader(title: string, kind: AmountKind, system: UnitSystem): string {
+  return `${title} (${unitLabel(columnUnit(kind, system))})`;
+}
+
+/** An amount in its column's fixed unit, e.g. "0.75 lb" (the table beside its CSV shows the same number). */
+export function formatColumnAmount(si: number, kind: AmountKind, system: UnitSystem): string {
+  if (!Number.isFinite(si)) return "—";
+  return `${numberFormat.format(toColumnValue(si, kind, system))} ${unitLabel(columnUnit(kind, system))}`;
 }

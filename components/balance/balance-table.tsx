@@ -5,7 +5,7 @@ import { Table, TBody, Td, Th, THead, Tr, buttonStyles, cn } from "@/components/
 import { Figure } from "@/components/balance/explanation";
 import { coverageOf, nextSort, sortRows, type SortKey, type SortState } from "@/components/balance/balance-rows";
 import type { MonthRow } from "@/lib/engine";
-import { formatAmount, formatPercent, formatPoolAmount } from "@/lib/format-quantity";
+import { formatAmount, formatColumnAmount, formatPercent } from "@/lib/format-quantity";
 import type { UnitSystem } from "@/lib/units";
 import { monthLabel } from "@/components/balance/month-label";
 
@@ -34,7 +34,9 @@ export function BalanceTable({
 }) {
   const [sort, setSort] = useState<SortState>({ key: "month", direction: "ascending" });
   const sorted = sortRows(rows, sort);
-  const amount = (row: MonthRow, si: number) => formatPoolAmount(si, row.pool, system);
+  // Fixed units per column (no switch to oz for small rows), so the table reads like its CSV.
+  const amount = (row: MonthRow, si: number) =>
+    formatColumnAmount(si, row.pool === "castings" ? "castings-mass" : "liquid", system);
   return (
     <section aria-labelledby="balance-table-heading" className="flex flex-col gap-2">
       <div className="flex flex-wrap items-center justify-between gap-2">

@@ -13,7 +13,8 @@ import {
 } from "recharts";
 import { cn } from "@/components/ui";
 import type { MonthRow, PoolName } from "@/lib/engine";
-import { chartUnit, toChartValue } from "@/lib/format-quantity";
+import { columnUnit, toColumnValue } from "@/lib/format-quantity";
+import { unitLabel } from "@/lib/units";
 import type { UnitSystem } from "@/lib/units";
 import { formatDay } from "@/lib/format";
 import { palette } from "@/tailwind.config";
@@ -29,14 +30,15 @@ const series = [
 
 export function SupplyChart({ rows, system }: { rows: MonthRow[]; system: UnitSystem }) {
   const [pool, setPool] = useState<PoolName>("castings");
-  const { label: unit } = chartUnit(pool, system);
+  const kind = pool === "castings" ? "castings-mass" : "liquid";
+  const unit = unitLabel(columnUnit(kind, system));
   const data = rows
     .filter((r) => r.pool === pool)
     .map((r) => ({
       month: formatDay(`${r.month}-01`, { month: "short" }),
-      available: toChartValue(r.opening + r.supplied, pool, system),
-      wanted: toChartValue(r.demand, pool, system),
-      short: toChartValue(r.shortfall, pool, system),
+      available: toColumnValue(r.opening + r.supplied, kind, system),
+      wanted: toColumnValue(r.demand, kind, system),
+      short: toColumnValue(r.shortfall, kind, system),
     }));
   return (
     <section aria-labelledby="supply-chart-heading" className="flex flex-col gap-2">

@@ -2,6 +2,7 @@ import "server-only";
 import { and, asc, eq, inArray, sql } from "drizzle-orm";
 import { getDb, type DbOrTx } from "@/db";
 import { applicationDraws, applications, binEvents, stockLots } from "@/db/schema";
+import { markGardenInputsChanged } from "@/db/queries/garden-inputs-version";
 import { AppError } from "@/lib/errors";
 
 // The one place that writes stock: lots (from harvests and drains) and the
@@ -36,7 +37,9 @@ export interface RecordApplicationInput {
 /** Logs an application and its draws in one transaction; refuses a draw larger than what is left. */
 export async function recordApplication(input: RecordApplicationInput): Promise<{ id: string }> {
   const db = await getDb();
-  return db.transaction((tx) => insertApplicationWithDraws(tx, input));
+  const result = await db.transaction((tx) => insertApplicationWithDraws(tx, input));
+  markGardenInputsChanged(input.gardenId); // after commit: see garden-inputs-version.ts
+  return result;
 }
 
 /** recordApplication inside the caller's transaction (the import uses it for every logged application). */
@@ -208,12 +211,16 @@ export async function recordHarvest(
   input: RecordYieldInput & { castingsKg: number; predictedKg?: number | null },
 ) {
   const db = await getDb();
-  return db.transaction((tx) => insertHarvest(tx, input));
+  const result = await db.transaction((tx) => insertHarvest(tx, input));
+  markGardenInputsChanged(input.gardenId);
+  return result;
 }
 
 export async function recordDrain(input: RecordYieldInput & { litres: number }) {
   const db = await getDb();
-  return db.transaction((tx) => insertDrain(tx, input));
+  const result = await db.transaction((tx) => insertDrain(tx, input));
+  markGardenInputsChanged(input.gardenId);
+  return result;
 }
 
 export interface LotStock {
