@@ -251,8 +251,11 @@ export function columnHeader(title: string, kind: AmountKind, system: UnitSystem
   return `${title} (${unitLabel(columnUnit(kind, system))})`;
 }
 
+// toColumnValue has already rounded (two significant figures below 1): show every digit it kept.
+const columnNumber = new Intl.NumberFormat("en-US", { maximumFractionDigits: 6 });
+
 /** An amount in its column's fixed unit, e.g. "0.75 lb" (the table beside its CSV shows the same number). */
 export function formatColumnAmount(si: number, kind: AmountKind, system: UnitSystem): string {
   if (!Number.isFinite(si)) return "—";
-  return `${numberFormat.format(toColumnValue(si, kind, system))} ${unitLabel(columnUnit(kind, system))}`;
+  return `${columnNumber.format(toColumnValue(si, kind, system))} ${unitLabel(columnUnit(kind, system))}`;
 }

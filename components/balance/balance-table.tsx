@@ -38,7 +38,7 @@ export function BalanceTable({
   const amount = (row: MonthRow, si: number) =>
     formatColumnAmount(si, row.pool === "castings" ? "castings-mass" : "liquid", system);
   return (
-    <section aria-labelledby="balance-table-heading" className="flex flex-col gap-2">
+    <section aria-labelledby="balance-table-heading" className="flex min-w-0 flex-col gap-2">
       <div className="flex flex-wrap items-center justify-between gap-2">
         <h2 id="balance-table-heading" className="text-xl">
           Month by month
@@ -49,7 +49,12 @@ export function BalanceTable({
           </a>
         ) : null}
       </div>
-      <Table caption="Supply and demand per month and material" hideCaption data-testid="balance-table">
+      <Table
+        caption="Supply and demand per month and material"
+        hideCaption
+        data-testid="balance-table"
+        className="text-sm sm:text-sm [&_td]:px-2 [&_th]:px-2"
+      >
         <THead>
           <Tr>
             {columns.map((c) => (
@@ -125,7 +130,7 @@ export function BalanceTable({
                     "even"
                   )}
                 </Td>
-                <Td numeric data-col="coverage">{formatPercent(coverageOf(row))}</Td>
+                <Td numeric data-col="coverage">{row.demand > 0 ? formatPercent(coverageOf(row)) : "—"}</Td>
               </Tr>
             );
           })}

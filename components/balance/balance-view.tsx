@@ -72,7 +72,7 @@ export function BalanceView({
   const plan = balance.data?.plan;
   return (
     <ExplanationProvider system={system} nameOf={nameOf}>
-      <header className="flex flex-col gap-2">
+      <header className="flex min-w-0 flex-col gap-2">
         <h1 className="text-3xl">Balance</h1>
         <p className="text-soil-700">
           What your bins make against what your plantings want, month by month. Press any figure to see where it comes
@@ -119,7 +119,7 @@ export function BalanceView({
               requestAnimationFrame(() => detailRef.current?.scrollIntoView({ behavior: "smooth" }));
             }}
           />
-          <div ref={detailRef}>
+          <div ref={detailRef} className="min-w-0">
             {month ? <MonthDetail plan={plan} month={month} names={names} system={system} /> : null}
           </div>
           {plan.gap ? (
@@ -133,7 +133,7 @@ export function BalanceView({
               }}
             />
           ) : null}
-          <div ref={whatIfRef}>
+          <div ref={whatIfRef} className="min-w-0">
             <WhatIfPanel
               gardenId={gardenId}
               range={range}

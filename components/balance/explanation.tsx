@@ -106,7 +106,7 @@ export function Figure({
         (className ?? "")
       }
     >
-      {children}
+      <span data-figure="">{children}</span>
       <span className="sr-only">, {title}: where this comes from</span>
     </button>
   );

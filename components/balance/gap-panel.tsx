@@ -35,7 +35,7 @@ export function GapPanel({
   if (!gap.needed) return null;
   const nameOf = nameLookup(names);
   return (
-    <section aria-labelledby="gap-heading" className="flex flex-col gap-3" data-testid="gap-panel">
+    <section aria-labelledby="gap-heading" className="flex min-w-0 flex-col gap-3" data-testid="gap-panel">
       <h2 id="gap-heading" className="text-xl">
         Closing the gap
       </h2>

@@ -61,7 +61,7 @@ export function MonthDetail({
   const anyBlocked = plan.warnings.some((w) => w.kind === "pre-harvest-block" && w.date?.startsWith(month));
   const groups: Group[] = ["not", "partly", "covered"];
   return (
-    <section aria-labelledby="month-detail-heading" className="flex flex-col gap-3" data-testid="month-detail">
+    <section aria-labelledby="month-detail-heading" className="flex min-w-0 flex-col gap-3" data-testid="month-detail">
       <h2 id="month-detail-heading" className="text-xl">
         {monthLabel(month)} in detail
       </h2>
@@ -117,7 +117,7 @@ export function MonthDetail({
             <h3 className="text-lg">
               {groupTitle[g]} <Badge tone={g === "covered" ? "positive" : g === "partly" ? "caution" : "danger"}>{items.length}</Badge>
             </h3>
-            <ul className="flex flex-col gap-2">
+            <ul className="flex min-w-0 flex-col gap-2">
               {items.map((c) => {
                 const own = feedings.filter((f) => f.plantingId === c.plantingId && f.material === c.material);
                 return (

@@ -41,7 +41,7 @@ export function SupplyChart({ rows, system }: { rows: MonthRow[]; system: UnitSy
       short: toColumnValue(r.shortfall, kind, system),
     }));
   return (
-    <section aria-labelledby="supply-chart-heading" className="flex flex-col gap-2">
+    <section aria-labelledby="supply-chart-heading" className="flex min-w-0 flex-col gap-2">
       <div className="flex flex-wrap items-center justify-between gap-2">
         <h2 id="supply-chart-heading" className="text-xl">
           Supply against demand ({unit})

@@ -70,7 +70,7 @@ export function WhatIfPanel({
   }
 
   return (
-    <section aria-labelledby="what-if-heading" className="flex flex-col gap-3" data-testid="what-if">
+    <section aria-labelledby="what-if-heading" className="flex min-w-0 flex-col gap-3" data-testid="what-if">
       <h2 id="what-if-heading" className="text-xl">
         What if…
       </h2>
@@ -117,7 +117,7 @@ export function WhatIfPanel({
         </Button>
       </form>
       {changes.length > 0 ? (
-        <div className="flex flex-col gap-2">
+        <div className="flex min-w-0 flex-col gap-2">
           <ul className="flex flex-col gap-1" aria-label="Changes being tried">
             {changes.map((c, i) => (
               <li key={i} className="flex flex-wrap items-center gap-2">
