@@ -21,6 +21,8 @@ import { AppError } from "@/lib/errors";
 // no conversion to the grower's units and back. A null engine parameter stays
 // null (the engine's default). One query per table, each scoped by gardenId,
 // all in one read transaction so they see the same moment of the garden.
+// Rows come in the order they were written (created_at, then the time-ordered
+// ids of an import), so a garden plans in the same order as the file it came from.
 
 function monthDay(date: string): MonthDay {
   return { month: Number(date.slice(5, 7)), day: Number(date.slice(8, 10)) };
@@ -61,24 +63,24 @@ export async function readGardenInputs(
     .select()
     .from(bins)
     .where(eq(bins.gardenId, gardenId))
-    .orderBy(asc(bins.startedOn), asc(bins.name), asc(bins.id));
+    .orderBy(asc(bins.createdAt), asc(bins.id));
   const bedRows = await tx
     .select()
     .from(beds)
     .where(eq(beds.gardenId, gardenId))
-    .orderBy(asc(beds.name), asc(beds.id));
+    .orderBy(asc(beds.createdAt), asc(beds.id));
   const plantingRows = await tx
     .select()
     .from(plantings)
     .where(eq(plantings.gardenId, gardenId))
-    .orderBy(asc(plantings.plantedOn), asc(plantings.id));
+    .orderBy(asc(plantings.createdAt), asc(plantings.id));
   const cropRows = await tx.select().from(crops).where(eq(crops.gardenId, gardenId));
   const ruleRows = await tx.select().from(feedingRules).where(eq(feedingRules.gardenId, gardenId));
   const lotRows = await tx
     .select()
     .from(stockLots)
     .where(and(eq(stockLots.gardenId, gardenId), lte(stockLots.producedOn, asOf)))
-    .orderBy(asc(stockLots.producedOn), asc(stockLots.id));
+    .orderBy(asc(stockLots.createdAt), asc(stockLots.id));
   const eventRows = await tx
     .select()
     .from(binEvents)
@@ -89,12 +91,12 @@ export async function readGardenInputs(
         inArray(binEvents.kind, ["harvest", "liquid-drained", "observation"]),
       ),
     )
-    .orderBy(asc(binEvents.occurredOn), asc(binEvents.id));
+    .orderBy(asc(binEvents.createdAt), asc(binEvents.id));
   const applicationRows = await tx
     .select()
     .from(applications)
     .where(and(eq(applications.gardenId, gardenId), lte(applications.appliedOn, asOf)))
-    .orderBy(asc(applications.appliedOn), asc(applications.id));
+    .orderBy(asc(applications.createdAt), asc(applications.id));
   const drawRows = await tx
     .select()
     .from(applicationDraws)
@@ -104,7 +106,7 @@ export async function readGardenInputs(
     .select()
     .from(wormMoves)
     .where(and(eq(wormMoves.gardenId, gardenId), lte(wormMoves.movedOn, asOf)))
-    .orderBy(asc(wormMoves.movedOn), asc(wormMoves.id));
+    .orderBy(asc(wormMoves.createdAt), asc(wormMoves.id));
 
   const cropById = byId(cropRows);
   const ruleById = byId(ruleRows);

@@ -20,6 +20,8 @@ export interface DrawInput {
 }
 
 export interface RecordApplicationInput {
+  /** Set by an import that keeps its file's order; otherwise the database makes one. */
+  id?: string;
   gardenId: string;
   plantingId: string;
   appliedOn: string;
@@ -85,6 +87,7 @@ export async function insertApplicationWithDraws(
   const [row] = await tx
     .insert(applications)
     .values({
+      id: input.id,
       gardenId,
       plantingId: input.plantingId,
       material: input.material,
@@ -130,6 +133,8 @@ async function drawnSoFar(tx: DbOrTx, gardenId: string, lotIds: string[]) {
 }
 
 export interface RecordYieldInput {
+  /** Ids for the event and its lot, set by an import that keeps its file's order. */
+  ids?: { eventId: string; lotId: string };
   gardenId: string;
   binId: string;
   on: string;
@@ -145,6 +150,7 @@ export async function insertHarvest(
   const [event] = await tx
     .insert(binEvents)
     .values({
+      id: input.ids?.eventId,
       gardenId: input.gardenId,
       binId: input.binId,
       kind: "harvest",
@@ -169,6 +175,7 @@ export async function insertDrain(
   const [event] = await tx
     .insert(binEvents)
     .values({
+      id: input.ids?.eventId,
       gardenId: input.gardenId,
       binId: input.binId,
       kind: "liquid-drained",
@@ -194,6 +201,7 @@ async function insertLotFor(
   const [lot] = await tx
     .insert(stockLots)
     .values({
+      id: input.ids?.lotId,
       gardenId: input.gardenId,
       binId: input.binId,
       sourceEventId: eventId,

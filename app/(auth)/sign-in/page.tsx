@@ -47,6 +47,14 @@ export default async function SignInPage({
                 ))}
               </TBody>
             </Table>
+            <p className="mt-3 text-sm text-soil-700">
+              The demo sends no real e-mail: it lands in the{" "}
+              <a className="underline" href="/dev/outbox">
+                local outbox
+              </a>
+              , where each signed-in person reads only mail to their own address. To follow an
+              invitation, sign up with the invited address first, then open the outbox.
+            </p>
           </CardBody>
         </Card>
       ) : null}

@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { createInvitation, listOpenInvitations } from "@/db/queries/invitations";
 import { requireRole } from "@/lib/auth/require-role";
+import { consumeLimits, INVITE_REFUSAL, limits } from "@/lib/auth/throttle";
 import { createLinkToken } from "@/lib/auth/tokens";
 import { appBaseUrl } from "@/lib/app-url";
 import { parseJson, parseParams, route } from "@/lib/http";
@@ -20,6 +21,11 @@ export const POST = route<Params>(async (request, { params }) => {
   const { gardenId } = await parseParams(params, paramsSchema);
   const member = await requireRole(request, gardenId, "owner");
   const input = await parseJson(request, inviteSchema);
+  // Per invited address first, so sends it refuses do not use up the garden's allowance.
+  await consumeLimits(
+    [limits.inviteEmail(input.email), limits.inviteGarden(gardenId)],
+    INVITE_REFUSAL,
+  );
   const { token, tokenHash } = createLinkToken();
   const invitation = await createInvitation({
     gardenId,
@@ -31,7 +37,7 @@ export const POST = route<Params>(async (request, { params }) => {
     invitation,
     token,
     inviter: member.user,
-    baseUrl: appBaseUrl(request),
+    baseUrl: appBaseUrl(),
   });
   return Response.json(
     {

@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { getInvitation, renewInvitationToken } from "@/db/queries/invitations";
 import { requireRole } from "@/lib/auth/require-role";
+import { consumeLimits, INVITE_REFUSAL, limits } from "@/lib/auth/throttle";
 import { createLinkToken } from "@/lib/auth/tokens";
 import { appBaseUrl } from "@/lib/app-url";
 import { AppError } from "@/lib/errors";
@@ -15,6 +16,11 @@ export const POST = route<z.infer<typeof paramsSchema>>(async (request, { params
   const existing = await getInvitation({ gardenId, invitationId });
   if (!existing || existing.acceptedAt || existing.revokedAt)
     throw new AppError("not_found:invitation");
+  // Per invited address first, so sends it refuses do not use up the garden's allowance.
+  await consumeLimits(
+    [limits.inviteEmail(existing.email), limits.inviteGarden(gardenId)],
+    INVITE_REFUSAL,
+  );
   const { token, tokenHash } = createLinkToken();
   await renewInvitationToken({ invitationId, tokenHash });
   const invitation = (await getInvitation({ gardenId, invitationId }))!;
@@ -22,7 +28,7 @@ export const POST = route<z.infer<typeof paramsSchema>>(async (request, { params
     invitation,
     token,
     inviter: member.user,
-    baseUrl: appBaseUrl(request),
+    baseUrl: appBaseUrl(),
   });
   return Response.json({
     mailSent,
