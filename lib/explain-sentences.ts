@@ -31,7 +31,10 @@ export function explainValue(value: ExplainValue | undefined, ctx: ExplainContex
   if ("unit" in value) return formatTagged(value.value, value.unit as SiTag, ctx.system);
   if ("date" in value) return formatDay(value.date, { month: "short", day: "numeric", year: "numeric" });
   if ("ref" in value) return ctx.nameOf?.(value.ref, value.id) ?? refWords[value.ref];
-  if ("text" in value) return value.text;
+  if ("text" in value)
+    return /^\d{4}-\d{2}$/.test(value.text)
+      ? formatDay(`${value.text}-01`, { month: "long", year: "numeric" })
+      : value.text;
   return value.source;
 }
 
@@ -102,8 +105,8 @@ const templates: Partial<Record<Explanation["kind"], Sentences>> = {
   "pre-harvest-clean-lots": (v) => [
     `${v("planting")} is inside its pre-harvest interval, so only stock from bins without manure may be used: wanted ${v("need")}, got ${v("fromCleanLots")} of clean stock; ${v("manureStockRefused")} of manure-fed stock was held back.`,
   ],
-  "capacity-intake": (v) => [
-    `${v("bin")}: in ${v("month")} the plan needs the worms to eat ${v("foodNeeded")}, more than the ${v("limit")} that ${v("worms")} worms can eat (${v("months")} months over).`,
+  "capacity-intake": (v, e) => [
+    `${v("bin")}: in ${v("month")} the plan needs the worms to eat ${v("foodNeeded")}, more than the ${v("limit")} that ${v("worms")} worms can eat (${v("months")} ${num(e.inputs.months) === 1 ? "month" : "months"} over).`,
   ],
   "capacity-surface": (v) => [
     `${v("bin")}: in ${v("month")} the plan needs ${v("foodNeeded")} of food, more than the tray surface handles (${v("limit")}; ${v("rule")}).`,

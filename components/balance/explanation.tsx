@@ -102,7 +102,7 @@ export function Figure({
       type="button"
       onClick={() => api.open(title, explanation)}
       className={
-        "inline-flex min-h-6 min-w-6 items-center rounded-control px-1 tabular-nums underline decoration-dotted underline-offset-4 hover:bg-loam-100 " +
+        "relative inline-flex min-h-6 min-w-6 items-center rounded-control px-1 tabular-nums underline decoration-dotted underline-offset-4 hover:bg-loam-100 " +
         (className ?? "")
       }
     >

@@ -138,14 +138,27 @@ export function Warnings({ status, names, system }: { status: GardenStatus; name
       <h2 id="warnings-heading" className="text-xl">
         Needs attention
       </h2>
-      {status.warnings.map((w, i) => (
-        <Alert key={i} tone="caution" title={titles[w.kind] ?? w.kind}>
-          {explain(w.explanation, { system, nameOf }).sentences.join(" ")}
+      {groupWarnings(status.warnings).map(({ first, more }, i) => (
+        <Alert key={i} tone="caution" title={titles[first.kind] ?? first.kind}>
+          {explain(first.explanation, { system, nameOf }).sentences.join(" ")}
+          {more > 0 ? ` And ${more} more like it.` : ""}
         </Alert>
       ))}
       {status.warnings.some((w) => w.kind === "pre-harvest-block") ? <PreHarvestCaution /> : null}
     </section>
   );
+}
+
+/** One alert per kind and bin or planting: five late trays of one bin are one thing to do. */
+function groupWarnings(warnings: GardenStatus["warnings"]) {
+  const groups = new Map<string, { first: GardenStatus["warnings"][number]; more: number }>();
+  for (const w of warnings) {
+    const key = `${w.kind}:${w.binId ?? ""}:${w.plantingId ?? ""}`;
+    const g = groups.get(key);
+    if (g) g.more += 1;
+    else groups.set(key, { first: w, more: 0 });
+  }
+  return [...groups.values()];
 }
 
 export function FirstSteps({ hasBins, hasBeds }: { hasBins: boolean; hasBeds: boolean }) {
