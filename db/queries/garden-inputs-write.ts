@@ -88,12 +88,14 @@ function ruleRow(gardenId: string, id: string, r: FeedingRuleInput) {
   };
 }
 
-/** The planned-feeding id `${plantingId}:${material}:${date}` with the planting's new id. */
-function remapPlannedKey(key: string | null, plantingIds: ReadonlyMap<string, string>) {
-  if (key === null) return null;
-  const cut = key.indexOf(":");
-  const planting = cut > 0 ? plantingIds.get(key.slice(0, cut)) : undefined;
-  return planting ? planting + key.slice(cut) : key;
+/**
+ * The planned feeding an application fulfils, renamed with its planting's new
+ * id: the engine's ids are `${plantingId}:${material}:${date}` (feedingId), and
+ * an application fulfils a feeding of its own planting.
+ */
+function remapPlannedKey(key: string | null, oldPlantingId: string, newPlantingId: string) {
+  if (key === null || !key.startsWith(`${oldPlantingId}:`)) return key;
+  return newPlantingId + key.slice(oldPlantingId.length);
 }
 
 export async function insertGardenInputs(
@@ -285,7 +287,6 @@ export async function insertGardenInputs(
       })),
     );
   }
-  const plantingIds = new Map(inputs.plantings.map((p) => [p.id, mapped(p.id)]));
   // Ids in file order (the order they read back in); written oldest first, so
   // every draw is checked against the stock left at its time.
   for (const a of logs.applications) idFor(a.id);
@@ -298,7 +299,7 @@ export async function insertGardenInputs(
       material: a.material,
       method: a.method,
       amountSi: a.amount,
-      plannedKey: remapPlannedKey(a.plannedFeedingId, plantingIds),
+      plannedKey: remapPlannedKey(a.plannedFeedingId, a.plantingId, mapped(a.plantingId)),
       draws: a.draws.map((d) => ({ lotId: mapped(d.lotId), amountSi: d.amount })),
     });
   }

@@ -11,6 +11,7 @@ import {
   feedingRules,
   gardens,
   plantings,
+  stockAdjustments,
   stockLots,
   wormMoves,
 } from "@/db/schema";
@@ -102,6 +103,10 @@ export async function readGardenInputs(
     .from(applicationDraws)
     .where(eq(applicationDraws.gardenId, gardenId))
     .orderBy(asc(applicationDraws.applicationId), asc(applicationDraws.lotId));
+  const adjustmentRows = await tx
+    .select({ lotId: stockAdjustments.lotId, amountSi: stockAdjustments.amountSi })
+    .from(stockAdjustments)
+    .where(and(eq(stockAdjustments.gardenId, gardenId), lte(stockAdjustments.adjustedOn, asOf)));
   const moveRows = await tx
     .select()
     .from(wormMoves)
@@ -109,6 +114,12 @@ export async function readGardenInputs(
     .orderBy(asc(wormMoves.createdAt), asc(wormMoves.id));
 
   const cropById = byId(cropRows);
+  // Stop-gap until GardenInputs has an adjustments log: a lot's hand adjustments
+  // up to asOf are folded into its amount as made (so a spill counts from the
+  // lot's first day, and a harvest's calibration sees the adjusted weight).
+  const adjusted = new Map<string, number>();
+  for (const a of adjustmentRows) adjusted.set(a.lotId, (adjusted.get(a.lotId) ?? 0) + a.amountSi);
+  const withAdjustments = (lotId: string, amount: number) => amount + (adjusted.get(lotId) ?? 0);
   const ruleById = byId(ruleRows);
   const lotByEvent = new Map(
     lotRows.filter((l) => l.sourceEventId !== null).map((l) => [l.sourceEventId!, l]),
@@ -207,7 +218,7 @@ export async function readGardenInputs(
         binId: l.binId,
         material: l.material,
         madeOn: l.producedOn,
-        amount: l.initialAmountSi,
+        amount: withAdjustments(l.id, l.initialAmountSi),
         manureFeedstock: l.manureFeedstock,
       })),
     logs: {
@@ -215,14 +226,14 @@ export async function readGardenInputs(
         id: lotIdOf(e.id),
         binId: e.binId,
         date: e.occurredOn,
-        castingsKg: e.castingsKg ?? 0,
+        castingsKg: withAdjustments(lotIdOf(e.id), e.castingsKg ?? 0),
         predictedKg: e.predictedCastingsKg,
       })),
       drains: eventsOf("liquid-drained").map((e) => ({
         id: lotIdOf(e.id),
         binId: e.binId,
         date: e.occurredOn,
-        litres: e.liquidL ?? 0,
+        litres: withAdjustments(lotIdOf(e.id), e.liquidL ?? 0),
       })),
       applications: applicationRows.map((a) => ({
         id: a.id,

@@ -12,11 +12,21 @@ export const monthSchema = z
     message: "must be a year between 1900 and 2200",
   });
 
-export const monthsSchema = z.coerce
+const monthCount = z
   .number({ error: "must be a whole number of months" })
   .int("must be a whole number of months")
   .min(BALANCE_MONTHS.min, `must be at least ${BALANCE_MONTHS.min}`)
   .max(BALANCE_MONTHS.max, `must be at most ${BALANCE_MONTHS.max}`);
+
+/** In a JSON body: a number, never a string or anything else coerced into one. */
+export const monthsSchema = monthCount;
+
+/** In a query string: digits only, then the same bounds. */
+export const monthsQuerySchema = z
+  .string()
+  .regex(/^\d{1,3}$/, "must be a whole number of months")
+  .transform(Number)
+  .pipe(monthCount);
 
 /** The calendar day it is now in `timeZone`, "YYYY-MM-DD". */
 export function todayIn(timeZone: string, now: Date = new Date()): string {

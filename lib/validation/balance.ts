@@ -1,10 +1,10 @@
 import { z } from "zod";
-import { monthSchema, monthsSchema } from "@/lib/balance/range";
+import { monthSchema, monthsQuerySchema } from "@/lib/balance/range";
 
 /** GET …/balance query: from=YYYY-MM, months=3–24, format=json|csv (each optional). */
 export const balanceQuerySchema = z.object({
   from: monthSchema.optional(),
-  months: monthsSchema.optional(),
+  months: monthsQuerySchema.optional(),
   format: z.enum(["json", "csv"]).optional(),
 });
 

@@ -271,6 +271,11 @@ describe("POST what-if", () => {
     const months = await whatIf({ months: 30, changes: [{ kind: "bin-trays", binId, trays: 5 }] });
     expect(months.status).toBe(400);
     expect(Object.keys(months.json.error.fields)).toContain("months");
+    // A JSON body's numbers are numbers: "6" or [6] is not coerced into one.
+    for (const odd of ["6", [6], true]) {
+      const res = await whatIf({ months: odd, changes: [{ kind: "bin-trays", binId, trays: 5 }] });
+      expect(res.status, JSON.stringify(odd)).toBe(400);
+    }
   });
 
   async function plantingId(crop: string): Promise<string> {
