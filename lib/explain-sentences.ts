@@ -3,12 +3,7 @@
 // grower can see where a number came from. Pure: no React, no I/O.
 import type { ExplainValue, Explanation } from "@/lib/engine";
 import { formatDay } from "@/lib/format";
-import {
-  formatAmount,
-  formatDensity,
-  formatTagged,
-  type SiTag,
-} from "@/lib/format-quantity";
+import { formatAmount, formatDensity, formatTagged, type SiTag } from "@/lib/format-quantity";
 import type { UnitSystem } from "@/lib/units";
 
 export interface ExplainContext {
@@ -29,7 +24,8 @@ const refWords = { bin: "a bin", bed: "a bed", planting: "a planting", lot: "a l
 export function explainValue(value: ExplainValue | undefined, ctx: ExplainContext): string {
   if (!value) return "—";
   if ("unit" in value) return formatTagged(value.value, value.unit as SiTag, ctx.system);
-  if ("date" in value) return formatDay(value.date, { month: "short", day: "numeric", year: "numeric" });
+  if ("date" in value)
+    return formatDay(value.date, { month: "short", day: "numeric", year: "numeric" });
   if ("ref" in value) return ctx.nameOf?.(value.ref, value.id) ?? refWords[value.ref];
   if ("text" in value)
     return /^\d{4}-\d{2}$/.test(value.text)
@@ -97,7 +93,9 @@ const templates: Partial<Record<Explanation["kind"], Sentences>> = {
   "tea-brewed": (v, e, ctx) => [
     `${v("tea")} of tea brewed at ${formatTagged(num(e.inputs.castingsPerWater) * 100, "percent", ctx.system)} castings to water takes ${v("castings")} of castings from the shelf.`,
   ],
-  coverage: (v) => [`${v("planting")}: wanted ${v("need")}, got ${v("allocated")} (${v("coverage")}).`],
+  coverage: (v) => [
+    `${v("planting")}: wanted ${v("need")}, got ${v("allocated")} (${v("coverage")}).`,
+  ],
   "pre-harvest-block": (v) => [
     `${v("planting")}: ${v("feedings")} feedings from ${v("first")} on would need stock from a bin fed manure, and none of its clean stock was left, so ${v("manureStockRefused")} was held back.`,
     `Rule: ${v("rule")}.`,
@@ -126,7 +124,9 @@ const templates: Partial<Record<Explanation["kind"], Sentences>> = {
     `Start a bin of ${v("trays")} trays with ${v("worms")} worms on ${v("startOn")}; its first harvest comes ${v("firstHarvest")}.`,
     `Short after that: ${v("stillShort")}.`,
   ],
-  "gap-buy-castings": (v) => [`Buy ${v("castings")} of castings by ${v("by")}, at ${v("price")}: ${v("cost")}.`],
+  "gap-buy-castings": (v) => [
+    `Buy ${v("castings")} of castings by ${v("by")}, at ${v("price")}: ${v("cost")}.`,
+  ],
   "gap-unavailable": (v) => [`Not possible: ${v("why")}.`],
   "mix-above-limit": (v) => [
     `${v("planting")}: the potting mix would hold more castings than ${v("limit")} (${v("note")}).`,

@@ -3,7 +3,12 @@
 /** The date "YYYY-MM-DD" it is now in `timeZone`. */
 export function todayIn(timeZone: string, now: Date = new Date()): string {
   // en-CA writes dates as YYYY-MM-DD.
-  return new Intl.DateTimeFormat("en-CA", { timeZone, year: "numeric", month: "2-digit", day: "2-digit" }).format(now);
+  return new Intl.DateTimeFormat("en-CA", {
+    timeZone,
+    year: "numeric",
+    month: "2-digit",
+    day: "2-digit",
+  }).format(now);
 }
 
 /** "YYYY-MM" shifted by `delta` months. */

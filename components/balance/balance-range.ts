@@ -24,7 +24,10 @@ export function parseBalanceRange(
   today: string,
 ): BalanceRangeValue {
   const first = (v: string | string[] | undefined) => (Array.isArray(v) ? v[0] : v);
-  const fallback = { from: addMonths(today.slice(0, 7), -DEFAULT_MONTHS_BACK), months: MONTHS_DEFAULT };
+  const fallback = {
+    from: addMonths(today.slice(0, 7), -DEFAULT_MONTHS_BACK),
+    months: MONTHS_DEFAULT,
+  };
   const from = rangeSchema.shape.from.safeParse(first(params.from));
   const months = rangeSchema.shape.months.safeParse(first(params.months));
   return {

@@ -3,7 +3,13 @@
 import { useState } from "react";
 import { Table, TBody, Td, Th, THead, Tr, buttonStyles, cn } from "@/components/ui";
 import { Figure } from "@/components/balance/explanation";
-import { coverageOf, nextSort, sortRows, type SortKey, type SortState } from "@/components/balance/balance-rows";
+import {
+  coverageOf,
+  nextSort,
+  sortRows,
+  type SortKey,
+  type SortState,
+} from "@/components/balance/balance-rows";
 import type { MonthRow } from "@/lib/engine";
 import { formatAmount, formatColumnAmount, formatPercent } from "@/lib/format-quantity";
 import type { UnitSystem } from "@/lib/units";
@@ -44,7 +50,12 @@ export function BalanceTable({
           Month by month
         </h2>
         {csvHref ? (
-          <a href={csvHref} download className={buttonStyles({ variant: "secondary", size: "sm" })} data-testid="balance-csv">
+          <a
+            href={csvHref}
+            download
+            className={buttonStyles({ variant: "secondary", size: "sm" })}
+            data-testid="balance-csv"
+          >
             Download CSV
           </a>
         ) : null}
@@ -115,12 +126,24 @@ export function BalanceTable({
                     </span>
                   ) : null}
                 </Td>
-                <Td numeric data-col="opening">{fig(row.opening)}</Td>
-                <Td numeric data-col="supplied">{fig(row.supplied)}</Td>
-                <Td numeric data-col="demand">{fig(row.demand)}</Td>
-                <Td numeric data-col="allocated">{fig(row.allocated)}</Td>
-                <Td numeric data-col="agedOut">{fig(row.agedOut)}</Td>
-                <Td numeric data-col="closing">{fig(row.closing)}</Td>
+                <Td numeric data-col="opening">
+                  {fig(row.opening)}
+                </Td>
+                <Td numeric data-col="supplied">
+                  {fig(row.supplied)}
+                </Td>
+                <Td numeric data-col="demand">
+                  {fig(row.demand)}
+                </Td>
+                <Td numeric data-col="allocated">
+                  {fig(row.allocated)}
+                </Td>
+                <Td numeric data-col="agedOut">
+                  {fig(row.agedOut)}
+                </Td>
+                <Td numeric data-col="closing">
+                  {fig(row.closing)}
+                </Td>
                 <Td numeric data-col="shortfall">
                   {row.shortfall > 0 ? (
                     <strong className="text-bloom-800">{amount(row, row.shortfall)} short</strong>
@@ -130,7 +153,9 @@ export function BalanceTable({
                     "even"
                   )}
                 </Td>
-                <Td numeric data-col="coverage">{row.demand > 0 ? formatPercent(coverageOf(row)) : "—"}</Td>
+                <Td numeric data-col="coverage">
+                  {row.demand > 0 ? formatPercent(coverageOf(row)) : "—"}
+                </Td>
               </Tr>
             );
           })}

@@ -62,7 +62,11 @@ export function BalanceView({
               : "There is supply but nothing to feed yet: add a bed or a container and its plantings, and the balance fills in."
           }
           action={
-            canPlan ? null : <p className="text-sm text-soil-700">Ask a grower or the owner of this garden to add it.</p>
+            canPlan ? null : (
+              <p className="text-sm text-soil-700">
+                Ask a grower or the owner of this garden to add it.
+              </p>
+            )
           }
         />
       </>
@@ -75,8 +79,8 @@ export function BalanceView({
       <header className="flex min-w-0 flex-col gap-2">
         <h1 className="text-3xl">Balance</h1>
         <p className="text-soil-700">
-          What your bins make against what your plantings want, month by month. Press any figure to see where it comes
-          from.
+          What your bins make against what your plantings want, month by month. Press any figure to
+          see where it comes from.
         </p>
       </header>
       <RangeControl key={query} basePath={base} from={range.from} months={range.months} />
@@ -88,10 +92,16 @@ export function BalanceView({
       ) : null}
       {plan ? (
         <>
-          <section aria-label="Summary" className="flex flex-wrap gap-x-6 gap-y-1" data-testid="balance-summary">
+          <section
+            aria-label="Summary"
+            className="flex flex-wrap gap-x-6 gap-y-1"
+            data-testid="balance-summary"
+          >
             <p>
               First short:{" "}
-              <strong>{plan.firstShortfall.castings ? formatDay(plan.firstShortfall.castings) : "never"}</strong>{" "}
+              <strong>
+                {plan.firstShortfall.castings ? formatDay(plan.firstShortfall.castings) : "never"}
+              </strong>{" "}
               (castings)
             </p>
             <p>
@@ -116,7 +126,9 @@ export function BalanceView({
             csvHref={`/api/gardens/${gardenId}/balance?${query}&format=csv`}
             onOpenMonth={(m) => {
               setMonth(m);
-              requestAnimationFrame(() => detailRef.current?.scrollIntoView({ behavior: "smooth" }));
+              requestAnimationFrame(() =>
+                detailRef.current?.scrollIntoView({ behavior: "smooth" }),
+              );
             }}
           />
           <div ref={detailRef} className="min-w-0">
@@ -129,7 +141,9 @@ export function BalanceView({
               system={system}
               onTry={(c) => {
                 setChanges(c);
-                requestAnimationFrame(() => whatIfRef.current?.scrollIntoView({ behavior: "smooth" }));
+                requestAnimationFrame(() =>
+                  whatIfRef.current?.scrollIntoView({ behavior: "smooth" }),
+                );
               }}
             />
           ) : null}
@@ -149,7 +163,10 @@ export function BalanceView({
             </p>
           )}
           <p className="text-sm">
-            <Link href={`/g/${gardenId}`} className={buttonStyles({ variant: "ghost", size: "sm" })}>
+            <Link
+              href={`/g/${gardenId}`}
+              className={buttonStyles({ variant: "ghost", size: "sm" })}
+            >
               Back to the overview
             </Link>
           </p>

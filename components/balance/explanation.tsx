@@ -29,7 +29,10 @@ export function ExplanationProvider({
   children: ReactNode;
 }) {
   const [shown, setShown] = useState<{ title: string; explanation: Explanation } | null>(null);
-  const open = useCallback((title: string, explanation: Explanation) => setShown({ title, explanation }), []);
+  const open = useCallback(
+    (title: string, explanation: Explanation) => setShown({ title, explanation }),
+    [],
+  );
   const api = useMemo(() => ({ system, nameOf, open }), [system, nameOf, open]);
   return (
     <ExplainContext.Provider value={api}>

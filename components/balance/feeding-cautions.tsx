@@ -4,8 +4,8 @@
 export function LiquidCaution() {
   return (
     <p className="text-sm text-clay-800" data-testid="liquid-caution">
-      Leachate and tea: pour as a soil drench, not on the edible leaves of greens near harvest, and never add molasses
-      (it feeds harmful bacteria). Follow your local codes.
+      Leachate and tea: pour as a soil drench, not on the edible leaves of greens near harvest, and
+      never add molasses (it feeds harmful bacteria). Follow your local codes.
     </p>
   );
 }
@@ -13,8 +13,9 @@ export function LiquidCaution() {
 export function PreHarvestCaution() {
   return (
     <p className="text-sm text-clay-800" data-testid="pre-harvest-caution">
-      Stock from a bin fed manure is kept off edible crops for 120 days before harvest when the edible part touches the
-      soil, and 90 days otherwise (USDA organic rule, 7 CFR 205.203). Follow your local codes.
+      Stock from a bin fed manure is kept off edible crops for 120 days before harvest when the
+      edible part touches the soil, and 90 days otherwise (USDA organic rule, 7 CFR 205.203). Follow
+      your local codes.
     </p>
   );
 }

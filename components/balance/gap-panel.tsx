@@ -35,12 +35,17 @@ export function GapPanel({
   if (!gap.needed) return null;
   const nameOf = nameLookup(names);
   return (
-    <section aria-labelledby="gap-heading" className="flex min-w-0 flex-col gap-3" data-testid="gap-panel">
+    <section
+      aria-labelledby="gap-heading"
+      className="flex min-w-0 flex-col gap-3"
+      data-testid="gap-panel"
+    >
       <h2 id="gap-heading" className="text-xl">
         Closing the gap
       </h2>
       <p>
-        Castings fall {formatPoolAmount(gap.shortfallKg, "castings", system)} short over these months
+        Castings fall {formatPoolAmount(gap.shortfallKg, "castings", system)} short over these
+        months
         {gap.firstShortfall ? `, first on ${formatDay(gap.firstShortfall)}` : ""}
         {gap.leachateShortfallL > 0
           ? `; leachate ${formatPoolAmount(gap.leachateShortfallL, "leachate", system)} short`
@@ -63,7 +68,12 @@ export function GapPanel({
                     </Figure>
                   </p>
                   {changes && changes.length > 0 ? (
-                    <Button variant="secondary" size="sm" className="mt-auto self-start" onClick={() => onTry(changes)}>
+                    <Button
+                      variant="secondary"
+                      size="sm"
+                      className="mt-auto self-start"
+                      onClick={() => onTry(changes)}
+                    >
                       Try it in what-if
                     </Button>
                   ) : null}

@@ -3,7 +3,13 @@ import type { FeederClass, GardenInputs } from "@/lib/engine";
 // What the Balance needs to put names on the engine's ids (the plan carries ids
 // only). Built on the server from the garden's inputs, passed to the client.
 export interface GardenNames {
-  bins: { id: string; name: string; trays: number; rotationIntervalDays: number | null; startDate: string }[];
+  bins: {
+    id: string;
+    name: string;
+    trays: number;
+    rotationIntervalDays: number | null;
+    startDate: string;
+  }[];
   beds: { id: string; name: string }[];
   plantings: {
     id: string;
@@ -36,7 +42,12 @@ export function gardenNamesFrom(inputs: GardenInputs): GardenNames {
       priority: p.priority,
       edible: p.edible,
       rule: p.rule
-        ? { material: p.rule.material, measure: p.rule.measure, basis: p.rule.basis, amount: p.rule.amount }
+        ? {
+            material: p.rule.material,
+            measure: p.rule.measure,
+            basis: p.rule.basis,
+            amount: p.rule.amount,
+          }
         : null,
     })),
   };

@@ -8,7 +8,15 @@ import { MONTHS_MAX, MONTHS_MIN } from "@/components/balance/balance-range";
 const choices = Array.from({ length: MONTHS_MAX - MONTHS_MIN + 1 }, (_, i) => MONTHS_MIN + i);
 
 /** Start month and length of the Balance; changes go into the URL so the view can be linked. */
-export function RangeControl({ basePath, from, months }: { basePath: string; from: string; months: number }) {
+export function RangeControl({
+  basePath,
+  from,
+  months,
+}: {
+  basePath: string;
+  from: string;
+  months: number;
+}) {
   const router = useRouter();
   const [start, setStart] = useState(from);
   const [count, setCount] = useState(months);
@@ -22,7 +30,13 @@ export function RangeControl({ basePath, from, months }: { basePath: string; fro
       }}
     >
       <Field label="From">
-        <Input type="month" value={start} onChange={(e) => setStart(e.target.value)} className="w-44" required />
+        <Input
+          type="month"
+          value={start}
+          onChange={(e) => setStart(e.target.value)}
+          className="w-44"
+          required
+        />
       </Field>
       <Field label="Months">
         <Select value={count} onChange={(e) => setCount(Number(e.target.value))} className="w-28">

@@ -55,7 +55,9 @@ export function SupplyChart({ rows, system }: { rows: MonthRow[]; system: UnitSy
               onClick={() => setPool(p)}
               className={cn(
                 "min-h-11 rounded-control border px-3 text-sm font-semibold",
-                pool === p ? "border-leaf-700 bg-leaf-700 text-white" : "border-loam-400 bg-white text-soil-900",
+                pool === p
+                  ? "border-leaf-700 bg-leaf-700 text-white"
+                  : "border-loam-400 bg-white text-soil-900",
               )}
             >
               {p === "castings" ? "Castings" : "Leachate"}
@@ -63,11 +65,18 @@ export function SupplyChart({ rows, system }: { rows: MonthRow[]; system: UnitSy
           ))}
         </div>
       </div>
-      <div className="h-64 w-full rounded-card border border-loam-200 bg-white p-2" aria-hidden="true">
+      <div
+        className="h-64 w-full rounded-card border border-loam-200 bg-white p-2"
+        aria-hidden="true"
+      >
         <ResponsiveContainer width="100%" height="100%">
           <BarChart data={data} margin={{ top: 8, right: 8, bottom: 0, left: -16 }}>
             <CartesianGrid strokeDasharray="3 3" stroke={palette.loam[200]} vertical={false} />
-            <XAxis dataKey="month" tick={{ fill: palette.soil[700], fontSize: 12 }} interval="preserveStartEnd" />
+            <XAxis
+              dataKey="month"
+              tick={{ fill: palette.soil[700], fontSize: 12 }}
+              interval="preserveStartEnd"
+            />
             <YAxis tick={{ fill: palette.soil[700], fontSize: 12 }} allowDecimals={false} />
             <Tooltip formatter={(value) => `${String(value)} ${unit}`} />
             <Legend wrapperStyle={{ fontSize: 13 }} />
@@ -78,8 +87,8 @@ export function SupplyChart({ rows, system }: { rows: MonthRow[]; system: UnitSy
         </ResponsiveContainer>
       </div>
       <p className="text-sm text-soil-700">
-        Green is what was on the shelf plus what the bins made that month; blue is what the plantings wanted; red is
-        what could not be fed. The table below has every figure.
+        Green is what was on the shelf plus what the bins made that month; blue is what the
+        plantings wanted; red is what could not be fed. The table below has every figure.
       </p>
     </section>
   );

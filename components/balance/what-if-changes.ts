@@ -12,16 +12,26 @@ export function changesForSuggestion(s: GapSuggestion, names: GardenNames): TryC
   const likeBinId = like && "ref" in like ? like.id : names.bins[0]?.id;
   switch (s.kind) {
     case "extra-trays":
-      return likeBinId && s.trays ? [{ kind: "extra-trays", binId: likeBinId, trays: s.trays } as unknown as TryChange] : null;
+      return likeBinId && s.trays
+        ? [{ kind: "extra-trays", binId: likeBinId, trays: s.trays } as unknown as TryChange]
+        : null;
     case "second-bin":
-      return likeBinId && s.startDate ? [{ kind: "add-bin", likeBinId, startDate: s.startDate }] : null;
+      return likeBinId && s.startDate
+        ? [{ kind: "add-bin", likeBinId, startDate: s.startDate }]
+        : null;
     case "rate-cut":
       return s.cutPct && s.plantingIds
         ? s.plantingIds.flatMap((id) => {
             const amount = currentAmount(id, names);
             return amount === null
               ? []
-              : [{ kind: "planting-amount" as const, plantingId: id, amount: (amount * (100 - s.cutPct!)) / 100 }];
+              : [
+                  {
+                    kind: "planting-amount" as const,
+                    plantingId: id,
+                    amount: (amount * (100 - s.cutPct!)) / 100,
+                  },
+                ];
           })
         : null;
     default:

@@ -5,7 +5,11 @@ import { useQuery } from "@tanstack/react-query";
 import { Alert, Button, Field, Input, Select } from "@/components/ui";
 import type { GardenNames } from "@/components/balance/garden-names";
 import { monthLabel } from "@/components/balance/month-label";
-import { currentAmount, describeChange, type TryChange } from "@/components/balance/what-if-changes";
+import {
+  currentAmount,
+  describeChange,
+  type TryChange,
+} from "@/components/balance/what-if-changes";
 import { apiFetch, ApiError } from "@/lib/api-client";
 import type { WhatIfBody } from "@/lib/balance/types";
 import { formatPoolAmount } from "@/lib/format-quantity";
@@ -52,7 +56,10 @@ export function WhatIfPanel({
     enabled: changes.length > 0,
     retry: false,
   });
-  const targets = kind === "planting-amount" ? names.plantings.map((p) => ({ id: p.id, name: p.label })) : names.bins;
+  const targets =
+    kind === "planting-amount"
+      ? names.plantings.map((p) => ({ id: p.id, name: p.label }))
+      : names.bins;
   const targetId = targets.some((t) => t.id === target) ? target : (targets[0]?.id ?? "");
 
   function add() {
@@ -70,12 +77,17 @@ export function WhatIfPanel({
   }
 
   return (
-    <section aria-labelledby="what-if-heading" className="flex min-w-0 flex-col gap-3" data-testid="what-if">
+    <section
+      aria-labelledby="what-if-heading"
+      className="flex min-w-0 flex-col gap-3"
+      data-testid="what-if"
+    >
       <h2 id="what-if-heading" className="text-xl">
         What if…
       </h2>
       <Alert tone="info" title="Nothing here is saved">
-        Try changes freely: the balance is worked out again with them, and your garden stays exactly as it is.
+        Try changes freely: the balance is worked out again with them, and your garden stays exactly
+        as it is.
       </Alert>
       <form
         className="grid gap-3 sm:grid-cols-4 sm:items-end"
@@ -102,7 +114,9 @@ export function WhatIfPanel({
             ))}
           </Select>
         </Field>
-        <Field label={kind === "bin-start" ? "Date" : kind === "planting-amount" ? "Percent" : "Number"}>
+        <Field
+          label={kind === "bin-start" ? "Date" : kind === "planting-amount" ? "Percent" : "Number"}
+        >
           <Input
             type={kind === "bin-start" ? "date" : "number"}
             inputMode={kind === "bin-start" ? undefined : "numeric"}
@@ -122,18 +136,29 @@ export function WhatIfPanel({
             {changes.map((c, i) => (
               <li key={i} className="flex flex-wrap items-center gap-2">
                 <span>{describeChange(c, names)}</span>
-                <Button variant="ghost" size="sm" onClick={() => onChangesChange(changes.filter((_, j) => j !== i))}>
+                <Button
+                  variant="ghost"
+                  size="sm"
+                  onClick={() => onChangesChange(changes.filter((_, j) => j !== i))}
+                >
                   Remove
                 </Button>
               </li>
             ))}
           </ul>
-          <Button variant="ghost" size="sm" className="self-start" onClick={() => onChangesChange([])}>
+          <Button
+            variant="ghost"
+            size="sm"
+            className="self-start"
+            onClick={() => onChangesChange([])}
+          >
             Clear all changes
           </Button>
         </div>
       ) : null}
-      {result.isFetching ? <p aria-live="polite">Working out the balance with these changes…</p> : null}
+      {result.isFetching ? (
+        <p aria-live="polite">Working out the balance with these changes…</p>
+      ) : null}
       {result.error ? (
         <Alert tone="danger" title="That change could not be tried">
           {result.error instanceof ApiError ? result.error.message : "Something went wrong."}
@@ -152,16 +177,30 @@ function Comparison({ body, system }: { body: WhatIfBody; system: UnitSystem }) 
   return (
     <div className="flex flex-col gap-2" data-testid="what-if-result">
       <p className="font-semibold" data-testid="what-if-summary">
-        Castings short over these months: today {kg(total(today))}, with the changes {kg(total(changed))}.
+        Castings short over these months: today {kg(total(today))}, with the changes{" "}
+        {kg(total(changed))}.
       </p>
-      <div className="max-w-full overflow-x-auto rounded-card border border-loam-200 bg-white" tabIndex={0} role="region" aria-label="Today beside the changes">
+      <div
+        className="max-w-full overflow-x-auto rounded-card border border-loam-200 bg-white"
+        tabIndex={0}
+        role="region"
+        aria-label="Today beside the changes"
+      >
         <table className="w-full text-sm">
           <thead className="bg-loam-100">
             <tr>
-              <th scope="col" className="px-3 py-2 text-left">Month</th>
-              <th scope="col" className="px-3 py-2 text-right">Short today</th>
-              <th scope="col" className="px-3 py-2 text-right">Short with changes</th>
-              <th scope="col" className="px-3 py-2 text-right">Closing with changes</th>
+              <th scope="col" className="px-3 py-2 text-left">
+                Month
+              </th>
+              <th scope="col" className="px-3 py-2 text-right">
+                Short today
+              </th>
+              <th scope="col" className="px-3 py-2 text-right">
+                Short with changes
+              </th>
+              <th scope="col" className="px-3 py-2 text-right">
+                Closing with changes
+              </th>
             </tr>
           </thead>
           <tbody className="divide-y divide-loam-200">
@@ -169,7 +208,9 @@ function Comparison({ body, system }: { body: WhatIfBody; system: UnitSystem }) 
               <tr key={r.month} data-month={r.month}>
                 <td className="px-3 py-2">{monthLabel(r.month)}</td>
                 <td className="px-3 py-2 text-right">{kg(today[i]?.shortfall ?? 0)}</td>
-                <td className="px-3 py-2 text-right" data-col="changed-shortfall">{kg(r.shortfall)}</td>
+                <td className="px-3 py-2 text-right" data-col="changed-shortfall">
+                  {kg(r.shortfall)}
+                </td>
                 <td className="px-3 py-2 text-right">{kg(r.closing)}</td>
               </tr>
             ))}

@@ -38,7 +38,11 @@ const WARNING_KINDS = new Set<PlanWarning["kind"]>([
   "harvest-not-logged",
 ]);
 
-export function gardenStatus(plan: GardenPlan, inputs: GardenInputs, lots: LotOnHand[]): GardenStatus {
+export function gardenStatus(
+  plan: GardenPlan,
+  inputs: GardenInputs,
+  lots: LotOnHand[],
+): GardenStatus {
   const today = plan.asOf;
   const weekEnd = addDays(today, 6);
   const shelf = inputs.settings.shelfLifeDays ?? dflt("castingsShelfLifeDays");
@@ -47,16 +51,26 @@ export function gardenStatus(plan: GardenPlan, inputs: GardenInputs, lots: LotOn
     .filter((l) => l.remainingSi > 1e-6)
     .map((l) => {
       const keepsUntil = addDays(l.producedOn, l.material === "castings" ? shelf : liquidDays);
-      return { ...l, keepsUntil, nearEnd: toDayNumber(keepsUntil) - toDayNumber(today) <= NEAR_END_DAYS };
+      return {
+        ...l,
+        keepsUntil,
+        nearEnd: toDayNumber(keepsUntil) - toDayNumber(today) <= NEAR_END_DAYS,
+      };
     })
     .filter((l) => l.keepsUntil >= today);
   return {
     thisMonth: plan.rows.filter((r) => r.month === today.slice(0, 7)),
     nextHarvests: plan.bins
-      .flatMap((b) => b.tasks.filter((t) => t.kind === "harvest-tray").map((t) => ({ binId: b.binId, date: t.date, amountKg: t.amount })))
+      .flatMap((b) =>
+        b.tasks
+          .filter((t) => t.kind === "harvest-tray")
+          .map((t) => ({ binId: b.binId, date: t.date, amountKg: t.amount })),
+      )
       .sort((a, b) => (a.date < b.date ? -1 : 1))
       .slice(0, 4),
-    dueThisWeek: plan.feedings.filter((f) => f.status !== "logged" && f.date >= today && f.date <= weekEnd),
+    dueThisWeek: plan.feedings.filter(
+      (f) => f.status !== "logged" && f.date >= today && f.date <= weekEnd,
+    ),
     stock,
     warnings: plan.warnings.filter((w) => WARNING_KINDS.has(w.kind)),
   };

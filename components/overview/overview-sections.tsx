@@ -11,7 +11,15 @@ import type { UnitSystem } from "@/lib/units";
 
 // The overview's sections. Server components: they render words, no state.
 
-export function ThisMonth({ status, system, gardenId }: { status: GardenStatus; system: UnitSystem; gardenId: string }) {
+export function ThisMonth({
+  status,
+  system,
+  gardenId,
+}: {
+  status: GardenStatus;
+  system: UnitSystem;
+  gardenId: string;
+}) {
   return (
     <Card>
       <CardHeader>
@@ -22,8 +30,9 @@ export function ThisMonth({ status, system, gardenId }: { status: GardenStatus; 
           const a = (si: number) => formatPoolAmount(si, r.pool, system);
           return (
             <p key={r.pool} data-testid={`this-month-${r.pool}`}>
-              <strong>{r.pool === "castings" ? "Castings" : "Leachate"}:</strong> {a(r.opening)} on hand at the start,{" "}
-              {a(r.supplied)} {r.pool === "castings" ? "harvested" : "collected"}, {a(r.demand)} wanted —{" "}
+              <strong>{r.pool === "castings" ? "Castings" : "Leachate"}:</strong> {a(r.opening)} on
+              hand at the start, {a(r.supplied)} {r.pool === "castings" ? "harvested" : "collected"}
+              , {a(r.demand)} wanted —{" "}
               {r.shortfall > 0 ? (
                 <strong className="text-bloom-800">{a(r.shortfall)} short</strong>
               ) : (
@@ -36,7 +45,10 @@ export function ThisMonth({ status, system, gardenId }: { status: GardenStatus; 
             </p>
           );
         })}
-        <Link href={`/g/${gardenId}/balance`} className={buttonStyles({ variant: "ghost", size: "sm", className: "self-start" })}>
+        <Link
+          href={`/g/${gardenId}/balance`}
+          className={buttonStyles({ variant: "ghost", size: "sm", className: "self-start" })}
+        >
           Open the balance
         </Link>
       </CardBody>
@@ -44,7 +56,15 @@ export function ThisMonth({ status, system, gardenId }: { status: GardenStatus; 
   );
 }
 
-export function NextHarvests({ status, names, system }: { status: GardenStatus; names: GardenNames; system: UnitSystem }) {
+export function NextHarvests({
+  status,
+  names,
+  system,
+}: {
+  status: GardenStatus;
+  names: GardenNames;
+  system: UnitSystem;
+}) {
   const nameOf = nameLookup(names);
   return (
     <Card>
@@ -59,7 +79,9 @@ export function NextHarvests({ status, names, system }: { status: GardenStatus; 
             {status.nextHarvests.map((h) => (
               <li key={`${h.binId}-${h.date}`}>
                 {formatDay(h.date)}: {nameOf("bin", h.binId) ?? "a bin"}
-                {h.amountKg !== null ? `, about ${formatPoolAmount(h.amountKg, "castings", system)}` : ""}
+                {h.amountKg !== null
+                  ? `, about ${formatPoolAmount(h.amountKg, "castings", system)}`
+                  : ""}
               </li>
             ))}
           </ul>
@@ -69,7 +91,15 @@ export function NextHarvests({ status, names, system }: { status: GardenStatus; 
   );
 }
 
-export function DueThisWeek({ status, names, system }: { status: GardenStatus; names: GardenNames; system: UnitSystem }) {
+export function DueThisWeek({
+  status,
+  names,
+  system,
+}: {
+  status: GardenStatus;
+  names: GardenNames;
+  system: UnitSystem;
+}) {
   const nameOf = nameLookup(names);
   const liquids = status.dueThisWeek.some((f) => f.material !== "castings");
   return (
@@ -85,7 +115,12 @@ export function DueThisWeek({ status, names, system }: { status: GardenStatus; n
             {status.dueThisWeek.map((f) => (
               <li key={f.id}>
                 {formatDay(f.date)}: {nameOf("planting", f.plantingId) ?? "a planting"} —{" "}
-                {formatAmount(f.amount, f.material === "castings" ? "castings-mass" : "liquid", system)} {f.material}
+                {formatAmount(
+                  f.amount,
+                  f.material === "castings" ? "castings-mass" : "liquid",
+                  system,
+                )}{" "}
+                {f.material}
                 {f.status === "blocked" ? " (held back: pre-harvest interval)" : ""}
               </li>
             ))}
@@ -97,7 +132,15 @@ export function DueThisWeek({ status, names, system }: { status: GardenStatus; n
   );
 }
 
-export function StockOnHand({ status, names, system }: { status: GardenStatus; names: GardenNames; system: UnitSystem }) {
+export function StockOnHand({
+  status,
+  names,
+  system,
+}: {
+  status: GardenStatus;
+  names: GardenNames;
+  system: UnitSystem;
+}) {
   const nameOf = nameLookup(names);
   return (
     <Card>
@@ -112,8 +155,8 @@ export function StockOnHand({ status, names, system }: { status: GardenStatus; n
             {status.stock.map((l) => (
               <li key={l.id}>
                 {formatPoolAmount(l.remainingSi, l.material, system)} {l.material} from{" "}
-                {l.binId ? (nameOf("bin", l.binId) ?? "a bin") : "outside"}, made {formatDay(l.producedOn)} · keeps until{" "}
-                {formatDay(l.keepsUntil)}
+                {l.binId ? (nameOf("bin", l.binId) ?? "a bin") : "outside"}, made{" "}
+                {formatDay(l.producedOn)} · keeps until {formatDay(l.keepsUntil)}
                 {l.nearEnd ? <strong className="text-clay-800"> — use soon</strong> : null}
               </li>
             ))}
@@ -124,7 +167,15 @@ export function StockOnHand({ status, names, system }: { status: GardenStatus; n
   );
 }
 
-export function Warnings({ status, names, system }: { status: GardenStatus; names: GardenNames; system: UnitSystem }) {
+export function Warnings({
+  status,
+  names,
+  system,
+}: {
+  status: GardenStatus;
+  names: GardenNames;
+  system: UnitSystem;
+}) {
   if (status.warnings.length === 0) return null;
   const nameOf = nameLookup(names);
   const titles = {
@@ -175,7 +226,9 @@ export function FirstSteps({ hasBins, hasBeds }: { hasBins: boolean; hasBeds: bo
           <li className={hasBeds ? "text-soil-700 line-through" : undefined}>
             Add a bed or a container, and what grows in it.
           </li>
-          <li>Open the Balance to see what the bins make against what the plants want, month by month.</li>
+          <li>
+            Open the Balance to see what the bins make against what the plants want, month by month.
+          </li>
         </ol>
       </CardBody>
     </Card>

@@ -20,7 +20,10 @@ async function signInToDemo(session: BrowserSession, who: { email: string; passw
   await signIn.open();
   await signIn.signIn(who.email, who.password);
   await session.page.waitForURL(`${baseUrl}/gardens`);
-  await session.page.getByRole("link", { name: new RegExp(demoGarden.name) }).first().click();
+  await session.page
+    .getByRole("link", { name: new RegExp(demoGarden.name) })
+    .first()
+    .click();
   await new GardenPage(session.page).gardenName().waitFor();
   return session.page.url().split("/g/")[1]!.split(/[/?]/)[0]!;
 }
@@ -53,11 +56,21 @@ describe("the Balance as the demo owner", () => {
     const col = (title: string) => header!.findIndex((h) => h.startsWith(title));
     for (const line of lines) {
       const month = line[0]!;
-      expect(Number(line[col("Castings opening")])).toBe(await balance.figure(month, "castings", "opening"));
-      expect(Number(line[col("Castings harvested")])).toBe(await balance.figure(month, "castings", "supplied"));
-      expect(Number(line[col("Castings demand")])).toBe(await balance.figure(month, "castings", "demand"));
-      expect(Number(line[col("Castings closing")])).toBe(await balance.figure(month, "castings", "closing"));
-      expect(Number(line[col("Leachate closing")])).toBe(await balance.figure(month, "leachate", "closing"));
+      expect(Number(line[col("Castings opening")])).toBe(
+        await balance.figure(month, "castings", "opening"),
+      );
+      expect(Number(line[col("Castings harvested")])).toBe(
+        await balance.figure(month, "castings", "supplied"),
+      );
+      expect(Number(line[col("Castings demand")])).toBe(
+        await balance.figure(month, "castings", "demand"),
+      );
+      expect(Number(line[col("Castings closing")])).toBe(
+        await balance.figure(month, "castings", "closing"),
+      );
+      expect(Number(line[col("Leachate closing")])).toBe(
+        await balance.figure(month, "leachate", "closing"),
+      );
     }
   });
 
@@ -66,7 +79,8 @@ describe("the Balance as the demo owner", () => {
     await balance.trySuggestion("extra-trays");
     const summary = await balance.whatIfSummary().innerText();
     // "today N lb, with the changes 0 lb": today is short, the change closes it.
-    const [, today, changed] = /today ([\d.,]+) \S+, with the changes ([\d.,]+) /.exec(summary) ?? [];
+    const [, today, changed] =
+      /today ([\d.,]+) \S+, with the changes ([\d.,]+) /.exec(summary) ?? [];
     expect(Number(today)).toBeGreaterThan(0);
     expect(Number(changed)).toBe(0);
     await expect(session.page.getByText("Nothing here is saved").isVisible()).resolves.toBe(true);
@@ -103,9 +117,13 @@ describe("the Balance as the demo viewer", () => {
       .locator("button, a, input[type=submit]")
       .evaluateAll((els) => els.map((e) => (e.textContent ?? "").trim()));
     // Every control on the page either reads, sorts, explains or tries a what-if.
-    const changing = labels.filter((l) => /^(save|delete|remove member|edit|log|record|add (a )?(bed|bin|planting))/i.test(l));
+    const changing = labels.filter((l) =>
+      /^(save|delete|remove member|edit|log|record|add (a )?(bed|bin|planting))/i.test(l),
+    );
     expect(changing).toEqual([]);
-    expect(await new GardenPage(session.page).nav().getByRole("link", { name: "Settings" }).count()).toBe(0);
+    expect(
+      await new GardenPage(session.page).nav().getByRole("link", { name: "Settings" }).count(),
+    ).toBe(0);
     expect(await balance.horizontalOverflow()).toBeLessThanOrEqual(0);
     expect(session.problems).toEqual([]);
   });

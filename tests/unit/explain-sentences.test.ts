@@ -8,7 +8,10 @@ import { formatDensity, formatTagged } from "@/lib/format-quantity";
 const LB_KG = 0.45359237;
 const GAL_L = 3.785411784;
 
-const knownNames: Record<string, string> = { "bin:b1": "Cedar stack", "planting:p1": "Tomatoes in Bed 1" };
+const knownNames: Record<string, string> = {
+  "bin:b1": "Cedar stack",
+  "planting:p1": "Tomatoes in Bed 1",
+};
 const names = (ref: string, id: string): string | undefined => knownNames[`${ref}:${id}`];
 
 describe("explain: a month of castings", () => {
@@ -92,7 +95,12 @@ describe("explain: other kinds", () => {
     const e: Explanation = {
       kind: "out-of-season",
       inputs: { firstFallFrost: { date: "2026-10-18" } },
-      parts: [{ kind: "drain-logged", inputs: { bin: { ref: "bin", id: "zz" }, liquid: { unit: "L", value: GAL_L } } }],
+      parts: [
+        {
+          kind: "drain-logged",
+          inputs: { bin: { ref: "bin", id: "zz" }, liquid: { unit: "L", value: GAL_L } },
+        },
+      ],
     };
     const out = explain(e, { system: "us" });
     expect(out.sentences).toEqual(["First fall frost: Oct 18, 2026."]);

@@ -22,7 +22,9 @@ export class BalancePage {
 
   /** A figure as shown, e.g. "18 lb" → 18 (the screen-reader suffix left out). */
   async figure(month: string, pool: "castings" | "leachate", column: string): Promise<number> {
-    const text = await this.row(month, pool).locator(`[data-col="${column}"] [data-figure]`).innerText();
+    const text = await this.row(month, pool)
+      .locator(`[data-col="${column}"] [data-figure]`)
+      .innerText();
     return Number(text.replace(/,/g, "").split(" ")[0]);
   }
 

@@ -16,15 +16,24 @@ const teaMonth: Explanation = {
     bulkDensity: { unit: "ratio", value: 0.7 },
     castings: { unit: "kg", value: 2 * GAL * 0.1 * 0.7 },
   },
-  parts: [{ kind: "harvest-logged", inputs: { bin: { ref: "bin", id: "b1" }, castings: { unit: "kg", value: 44 * LB } } }],
+  parts: [
+    {
+      kind: "harvest-logged",
+      inputs: { bin: { ref: "bin", id: "b1" }, castings: { unit: "kg", value: 44 * LB } },
+    },
+  ],
 };
 
 describe("ExplanationText", () => {
   it("writes the engine's figures in the garden's units, parts nested", () => {
     render(<ExplanationText explanation={teaMonth} system="us" nameOf={() => "Cedar stack"} />);
     // 2 gal × 0.1 × 0.7 kg/L = 0.53 kg = 1.17 lb → "1.2 lb".
-    expect(screen.getByText(/2 gal of tea brewed at 10 % castings to water takes 1.2 lb of castings/)).toBeTruthy();
-    expect(screen.getByRole("listitem").textContent).toBe("Cedar stack: a harvest of 44 lb was logged.");
+    expect(
+      screen.getByText(/2 gal of tea brewed at 10 % castings to water takes 1.2 lb of castings/),
+    ).toBeTruthy();
+    expect(screen.getByRole("listitem").textContent).toBe(
+      "Cedar stack: a harvest of 44 lb was logged.",
+    );
   });
 
   it("uses litres and kilograms in a metric garden", () => {

@@ -7,7 +7,10 @@ import type { MonthRow } from "@/lib/engine";
 // whole pounds so the table's "N lb" can be read back exactly.
 const LB = 0.45359237;
 
-function row(month: string, lb: { opening: number; supplied: number; demand: number; shortfall: number }): MonthRow {
+function row(
+  month: string,
+  lb: { opening: number; supplied: number; demand: number; shortfall: number },
+): MonthRow {
   const allocated = lb.demand - lb.shortfall;
   const closing = lb.opening + lb.supplied - allocated;
   return {
@@ -40,7 +43,9 @@ describe("BalanceTable", () => {
   it("starts in month order and shows amounts in pounds, the short month marked", () => {
     render(<BalanceTable rows={rows} system="us" />);
     expect(monthsInOrder()).toEqual(["2027-03", "2027-04", "2027-05"]);
-    const april = screen.getByTestId("balance-table").querySelector('tr[data-month="2027-04"]') as HTMLElement;
+    const april = screen
+      .getByTestId("balance-table")
+      .querySelector('tr[data-month="2027-04"]') as HTMLElement;
     // 34 + 0 − 34 fed = 0 left; 50 wanted, 16 short.
     expect(within(april).getByText("16 lb short")).toBeTruthy();
     // Coverage 34 / 50 = 68 %.
@@ -68,6 +73,8 @@ describe("BalanceTable", () => {
 
   it("links the CSV export when given", () => {
     render(<BalanceTable rows={rows} system="us" csvHref="/api/gardens/g1/balance?format=csv" />);
-    expect(screen.getByRole("link", { name: "Download CSV" }).getAttribute("href")).toContain("format=csv");
+    expect(screen.getByRole("link", { name: "Download CSV" }).getAttribute("href")).toContain(
+      "format=csv",
+    );
   });
 });

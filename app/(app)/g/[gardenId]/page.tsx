@@ -41,7 +41,9 @@ export default async function GardenOverviewPage({
   const names = gardenNamesFrom(inputs);
   const ready = inputs.bins.length > 0 && inputs.beds.length > 0;
   // Three months cover "this month", this week's feedings and the next harvests.
-  const plan = ready ? computePlan(inputs, { from: today.slice(0, 7), months: 3, suggestions: false }) : null;
+  const plan = ready
+    ? computePlan(inputs, { from: today.slice(0, 7), months: 3, suggestions: false })
+    : null;
   const status = plan ? gardenStatus(plan, inputs, lots) : null;
   const system = garden.unitSystem;
   const figures = [
@@ -76,7 +78,10 @@ export default async function GardenOverviewPage({
       ) : (
         <FirstSteps hasBins={inputs.bins.length > 0} hasBeds={inputs.beds.length > 0} />
       )}
-      <section aria-label="The garden at a glance" className="grid grid-cols-2 gap-3 sm:grid-cols-5">
+      <section
+        aria-label="The garden at a glance"
+        className="grid grid-cols-2 gap-3 sm:grid-cols-5"
+      >
         {figures.map((f) => (
           <Card key={f.label}>
             <CardBody>
