@@ -78,19 +78,22 @@ export default async function GardenOverviewPage({
       ) : (
         <FirstSteps hasBins={inputs.bins.length > 0} hasBeds={inputs.beds.length > 0} />
       )}
-      <section
-        aria-label="The garden at a glance"
-        className="grid grid-cols-2 gap-3 sm:grid-cols-5"
-      >
-        {figures.map((f) => (
-          <Card key={f.label}>
-            <CardBody>
-              <p className="text-3xl font-semibold tabular-nums">{f.value}</p>
-              <p className="text-sm text-soil-700">{f.label}</p>
-            </CardBody>
-          </Card>
-        ))}
-      </section>
+      {/* An empty garden gets first steps, not a row of zeros. */}
+      {status ? (
+        <section
+          aria-label="The garden at a glance"
+          className="grid grid-cols-2 gap-3 sm:grid-cols-5"
+        >
+          {figures.map((f) => (
+            <Card key={f.label}>
+              <CardBody>
+                <p className="text-3xl font-semibold tabular-nums">{f.value}</p>
+                <p className="text-sm text-soil-700">{f.label}</p>
+              </CardBody>
+            </Card>
+          ))}
+        </section>
+      ) : null}
       <SafetyCautions />
     </>
   );
