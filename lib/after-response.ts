@@ -1,3 +1,4 @@
+import { logError } from "@/lib/log";
 // Work that must not make a response slower or faster depending on what it finds, such
 // as the mail after a password-reset request (whether the address has an account would
 // otherwise show in the response time). It starts after the current turn of the event
@@ -11,7 +12,7 @@ export function afterResponse(label: string, task: () => Promise<unknown>): void
     .then(task)
     .then(
       () => undefined,
-      (error: unknown) => console.error(`[castline] ${label} failed`, error),
+      (error: unknown) => logError(`${label} failed`, error),
     )
     .finally(() => pending.delete(run));
   pending.add(run);

@@ -14,6 +14,7 @@ import fs from "node:fs";
 import net from "node:net";
 import os from "node:os";
 import path from "node:path";
+import zlib from "node:zlib";
 import autocannon from "autocannon";
 
 const root = path.resolve(__dirname, "..");
@@ -23,6 +24,7 @@ const DURATION_S = Number(process.env.BENCH_HTTP_SECONDS ?? 10);
 // The demo owner (db/seed/demo-garden.ts: invented, published demo credentials).
 const DEMO_OWNER = { email: "maren@example.com", password: "hollis-owner-2026" };
 const BALANCE_PAGE = "/g/[gardenId]/balance";
+const OVERVIEW_PAGE = "/g/[gardenId]";
 
 function freePort(): Promise<number> {
   return new Promise((resolve, reject) => {
@@ -35,8 +37,8 @@ function freePort(): Promise<number> {
   });
 }
 
-/** `next build`, echoing its output and keeping it for the page-size line. */
-function build(): string {
+/** `next build`; its output is kept in .next/bench-build-output.txt. */
+function build(): void {
   const result = spawnSync(process.execPath, [nextBin, "build"], {
     cwd: root,
     encoding: "utf8",
@@ -49,21 +51,29 @@ function build(): string {
     console.error(output);
     throw new Error("next build failed");
   }
-  return output;
 }
 
-/** The Balance page's first-load JS: from the build's route table if it printed one. */
-function firstLoadJs(buildOutput: string | null): string {
-  const saved = path.join(root, ".next", "bench-build-output.txt");
-  const text = buildOutput ?? (fs.existsSync(saved) ? fs.readFileSync(saved, "utf8") : "");
-  const line = text.split("\n").find((l) => l.includes(BALANCE_PAGE));
-  if (!line) {
-    return fs.existsSync(path.join(root, "app", "(app)", "g", "[gardenId]", "balance"))
-      ? "not in the build output (this Next version prints no size table)"
-      : "n/a (the Balance page is not on this branch)";
-  }
-  const sizes = line.match(/[\d.]+\s*[kM]?B/g);
-  return sizes ? sizes[sizes.length - 1]! : line.trim();
+/**
+ * A page's first-load JS from the build's own figures: Next 16 prints no size
+ * table, but writes .next/diagnostics/route-bundle-stats.json (uncompressed bytes
+ * and chunk paths); gzip is measured here on those chunks, as a browser would fetch them.
+ */
+function firstLoadJs(route: string): string {
+  const stats = path.join(root, ".next", "diagnostics", "route-bundle-stats.json");
+  if (!fs.existsSync(stats)) return "n/a (no route-bundle-stats.json in this build)";
+  const routes = JSON.parse(fs.readFileSync(stats, "utf8")) as {
+    route: string;
+    firstLoadUncompressedJsBytes: number;
+    firstLoadChunkPaths: string[];
+  }[];
+  const entry = routes.find((r) => r.route === route);
+  if (!entry) return "n/a (no such page in this build)";
+  const gzipped = entry.firstLoadChunkPaths.reduce(
+    (sum, chunk) => sum + zlib.gzipSync(fs.readFileSync(path.join(root, chunk))).byteLength,
+    0,
+  );
+  const kib = (n: number) => `${(n / 1024).toFixed(0)} KiB`;
+  return `${kib(gzipped)} gzipped (${kib(entry.firstLoadUncompressedJsBytes)} uncompressed, ${entry.firstLoadChunkPaths.length} chunks)`;
 }
 
 async function startServer(): Promise<{ url: string; child: ChildProcess; dataDir: string }> {
@@ -163,7 +173,7 @@ async function load(url: string, headers: Record<string, string>): Promise<Load>
 }
 
 async function main(): Promise<void> {
-  const buildOutput = process.argv.includes("--build") ? build() : null;
+  if (process.argv.includes("--build")) build();
   if (!fs.existsSync(path.join(root, ".next", "BUILD_ID")))
     throw new Error("no .next build: run with --build");
   const { url, child, dataDir } = await startServer();
@@ -214,7 +224,8 @@ async function main(): Promise<void> {
         ` (first, computing the plan: ${f(cold)} ms; health alone ${f(median(healthSingle))} ms)`,
     );
     console.log(`  errors: ${ok(health.errors + gardenRead.errors + balance.errors === 0)}`);
-    console.log(`\nBalance page first-load JS: ${firstLoadJs(buildOutput)}`);
+    console.log(`\nFirst-load JS, Balance page: ${firstLoadJs(BALANCE_PAGE)}`);
+    console.log(`First-load JS, overview page (for comparison): ${firstLoadJs(OVERVIEW_PAGE)}`);
   } finally {
     child.kill("SIGTERM");
     await new Promise((r) => child.once("exit", r));

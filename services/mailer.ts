@@ -1,9 +1,9 @@
+import { logError } from "@/lib/log";
 import { getEnv } from "@/lib/env";
 import {
   createMailer,
   ensureLocalSmtpServer,
   getLocalOutbox,
-  isMailError,
   mailerConfigFromEnv,
   type Mailer,
   type OutgoingMail,
@@ -70,7 +70,8 @@ export async function trySend(
     const { messageId } = await getMailer().send(message);
     return { sent: true, messageId };
   } catch (error) {
-    console.error("[castline] mail not sent", isMailError(error) ? error.message : error);
+    // Through the redacting logger: an SMTP error can carry the recipient's address.
+    logError("mail not sent", error);
     return { sent: false };
   }
 }

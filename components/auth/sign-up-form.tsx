@@ -7,6 +7,7 @@ import { FormMessage } from "@/components/forms/form-message";
 import { useApiForm } from "@/components/forms/use-api-form";
 import { Alert, Button, Field, Input } from "@/components/ui";
 import { apiFetch } from "@/lib/api-client";
+import { safeNextPath } from "@/lib/safe-next";
 import { signUpSchema } from "@/lib/validation/auth";
 import { PASSWORD_MIN } from "@/lib/validation/password";
 
@@ -27,7 +28,8 @@ export function SignUpForm({ next }: { next: string }) {
     const result = await apiFetch<{ message: string }>("/api/account", { body: values });
     const signedIn = await fetch("/api/account", { credentials: "same-origin" });
     if (signedIn.ok) {
-      router.replace(next);
+      // Checked again here: this is the line that navigates.
+      router.replace(safeNextPath(next));
       router.refresh();
     } else {
       setDone(result.message);

@@ -11,8 +11,6 @@ CREATE TABLE "throttle_counters" (
 	"hits" integer NOT NULL
 );
 --> statement-breakpoint
-DROP TABLE "ended_sessions" CASCADE;--> statement-breakpoint
-DROP TABLE "sign_in_attempts" CASCADE;--> statement-breakpoint
 ALTER TABLE "sessions" ADD CONSTRAINT "sessions_user_id_users_id_fk" FOREIGN KEY ("user_id") REFERENCES "public"."users"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 CREATE INDEX "sessions_user_idx" ON "sessions" USING btree ("user_id");--> statement-breakpoint
 CREATE INDEX "sessions_expiry_idx" ON "sessions" USING btree ("expires_at");--> statement-breakpoint

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { accountPasswordProblem, newPasswordSchema } from "./password";
+import { plainText } from "./text";
 
 export const emailSchema = z
   .string({ error: "Enter your e-mail address." })
@@ -15,7 +16,9 @@ export type SignInInput = z.infer<typeof signInSchema>;
 
 export const signUpSchema = z
   .object({
-    name: z.string().trim().min(1, "Enter your name.").max(100, "Use at most 100 characters."),
+    name: plainText("Enter your name.")
+      .min(1, "Enter your name.")
+      .max(100, "Use at most 100 characters."),
     email: emailSchema,
     password: newPasswordSchema,
   })

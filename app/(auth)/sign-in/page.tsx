@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { SignInForm } from "@/components/auth/sign-in-form";
 import { Card, CardBody, Table, TBody, Td, Th, THead, Tr } from "@/components/ui";
 import { demoMembers } from "@/db/seed/demo-garden";
-import { safeNextPath } from "@/lib/auth/page-session";
+import { safeNextPath } from "@/lib/safe-next";
 import { getEnv } from "@/lib/env";
 
 export const metadata: Metadata = { title: "Sign in" };

@@ -5,7 +5,7 @@ import { issueDeviceCookie } from "@/lib/auth/device-cookie";
 import { hashPassword } from "@/lib/auth/password";
 import { issueSessionCookie, requireUser } from "@/lib/auth/session";
 import { clientAddress, consumeLimits, limits } from "@/lib/auth/throttle";
-import { parseJson, route } from "@/lib/http";
+import { parseJson, refuseOtherMethods, route } from "@/lib/http";
 import { SIGN_UP_REQUESTED_MESSAGE } from "@/lib/messages";
 import { signUpSchema } from "@/lib/validation/auth";
 import { signUpAttemptMail, welcomeMail } from "@/services/mail";
@@ -54,3 +54,6 @@ export const POST = route(async (request) => {
   }
   return Response.json({ ok: true, message: SIGN_UP_REQUESTED_MESSAGE }, { status: 202, headers });
 });
+
+// Any other method: a JSON 405 with an Allow header, not Next's empty one.
+export const { PUT, PATCH, DELETE } = refuseOtherMethods({ GET, POST });

@@ -4,7 +4,7 @@ import { afterResponse } from "@/lib/after-response";
 import { appBaseUrl } from "@/lib/app-url";
 import { clientAddress, consumeLimits, limits } from "@/lib/auth/throttle";
 import { createLinkToken } from "@/lib/auth/tokens";
-import { parseJson, route } from "@/lib/http";
+import { parseJson, refuseOtherMethods, route } from "@/lib/http";
 import { RESET_REQUESTED_MESSAGE } from "@/lib/messages";
 import { requestResetSchema } from "@/lib/validation/auth";
 import { passwordResetMail } from "@/services/mail";
@@ -40,3 +40,6 @@ async function sendResetMail(email: string, baseUrl: string): Promise<void> {
   });
   await trySend({ to: user.email, ...mail });
 }
+
+// Any other method: a JSON 405 with an Allow header, not Next's empty one.
+export const { GET, PUT, PATCH, DELETE } = refuseOtherMethods({ POST });

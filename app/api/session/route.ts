@@ -1,7 +1,7 @@
 import { verifyCredentials } from "@/lib/auth/credentials";
 import { issueDeviceCookie } from "@/lib/auth/device-cookie";
 import { clearSessionCookie, endRequestSession, issueSessionCookie } from "@/lib/auth/session";
-import { parseJson, route } from "@/lib/http";
+import { parseJson, refuseOtherMethods, route } from "@/lib/http";
 import { signInSchema } from "@/lib/validation/auth";
 
 // Sign in: throttled, same answer for unknown e-mail and wrong password. Success also
@@ -20,3 +20,6 @@ export const DELETE = route(async (request) => {
   await endRequestSession(request);
   return Response.json({ ok: true }, { headers: { "Set-Cookie": clearSessionCookie() } });
 });
+
+// Any other method: a JSON 405 with an Allow header, not Next's empty one.
+export const { GET, PUT, PATCH } = refuseOtherMethods({ POST, DELETE });

@@ -3,7 +3,7 @@ import { setPassword } from "@/db/queries/password-resets";
 import { hashPassword, verifyPassword } from "@/lib/auth/password";
 import { issueSessionCookie, requireUser } from "@/lib/auth/session";
 import { AppError } from "@/lib/errors";
-import { parseJson, route } from "@/lib/http";
+import { parseJson, route, refuseOtherMethods } from "@/lib/http";
 import { changePasswordSchema } from "@/lib/validation/auth";
 import { accountPasswordProblem } from "@/lib/validation/password";
 
@@ -23,3 +23,6 @@ export const POST = route(async (request) => {
   await setPassword({ userId: user.id, passwordHash: await hashPassword(input.newPassword) });
   return Response.json({ ok: true }, { headers: { "Set-Cookie": await issueSessionCookie(user) } });
 });
+
+// Any other method: a JSON 405 with an Allow header, not Next's empty one.
+export const { GET, PUT, PATCH, DELETE } = refuseOtherMethods({ POST });

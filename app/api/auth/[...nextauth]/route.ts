@@ -1,6 +1,6 @@
 import { clearSessionCookie, endRequestSession } from "@/lib/auth/session";
 import { AppError } from "@/lib/errors";
-import { route } from "@/lib/http";
+import { refuseOtherMethods, route } from "@/lib/http";
 
 // Auth.js's own endpoints are switched off: the UI signs in and out through
 // /api/session, whose sessions live in our server-side allow-list. Left on, Auth.js
@@ -19,3 +19,6 @@ export const POST = route<Params>(async (request, { params }) => {
   await endRequestSession(request);
   return Response.json({ ok: true }, { headers: { "Set-Cookie": clearSessionCookie() } });
 });
+
+// Any other method: a JSON 405 with an Allow header, not Next's empty one.
+export const { PUT, PATCH, DELETE } = refuseOtherMethods({ GET, POST });

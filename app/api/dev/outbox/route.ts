@@ -1,6 +1,6 @@
 import { requireUser } from "@/lib/auth/session";
 import { AppError } from "@/lib/errors";
-import { route } from "@/lib/http";
+import { refuseOtherMethods, route } from "@/lib/http";
 import { isOutboxEnabled, readOutboxFor } from "@/services/mailer";
 
 export const dynamic = "force-dynamic";
@@ -12,3 +12,6 @@ export const GET = route(async (request) => {
   const user = await requireUser(request);
   return Response.json({ messages: await readOutboxFor(user.email) });
 });
+
+// Any other method: a JSON 405 with an Allow header, not Next's empty one.
+export const { POST, PUT, PATCH, DELETE } = refuseOtherMethods({ GET });

@@ -4,8 +4,7 @@ import { importGardenScenario } from "@/db/queries/garden-scenario";
 import { getGardenById } from "@/db/queries/gardens";
 import type { ImportBody } from "@/lib/balance/types";
 import { requireUser } from "@/lib/auth/session";
-import { AppError } from "@/lib/errors";
-import { parseJson, route } from "@/lib/http";
+import { parseJson, route, refuseOtherMethods } from "@/lib/http";
 
 export const dynamic = "force-dynamic";
 
@@ -17,13 +16,13 @@ const MAX_SCENARIO_BYTES = 5_000_000;
 // then written in one transaction: a file that fails creates nothing.
 export const POST = route(async (request) => {
   const user = await requireUser(request);
-  const declared = Number(request.headers.get("content-length") ?? 0);
-  if (declared > MAX_SCENARIO_BYTES)
-    throw new AppError("bad_request:too_large", "The garden file is larger than 5 MB.");
-  const scenario = await parseJson(request, z.unknown());
+  // Refused on Content-Length before reading, and counted byte by byte while reading (lib/http.ts).
+  const scenario = await parseJson(request, z.unknown(), { maxBytes: MAX_SCENARIO_BYTES });
   const { gardenId } = await importGardenScenario({ scenario, ownerId: user.id });
   markGardenInputsChanged(gardenId);
   const garden = await getGardenById({ gardenId });
   const body: ImportBody = { garden: { id: gardenId, name: garden?.name ?? "" } };
   return Response.json(body, { status: 201 });
 });
+
+export const { GET, PUT, PATCH, DELETE } = refuseOtherMethods({ POST });

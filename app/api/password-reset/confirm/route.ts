@@ -2,7 +2,7 @@ import { consumePasswordReset, getResetAccount } from "@/db/queries/password-res
 import { hashPassword } from "@/lib/auth/password";
 import { hashLinkToken } from "@/lib/auth/tokens";
 import { AppError } from "@/lib/errors";
-import { parseJson, route } from "@/lib/http";
+import { parseJson, route, refuseOtherMethods } from "@/lib/http";
 import { resetProblems } from "@/lib/messages";
 import { confirmResetSchema } from "@/lib/validation/auth";
 import { accountPasswordProblem } from "@/lib/validation/password";
@@ -24,3 +24,6 @@ export const POST = route(async (request) => {
     message: "Your password is changed. Sign in with the new one.",
   });
 });
+
+// Any other method: a JSON 405 with an Allow header, not Next's empty one.
+export const { GET, PUT, PATCH, DELETE } = refuseOtherMethods({ POST });

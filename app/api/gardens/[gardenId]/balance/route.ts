@@ -2,7 +2,7 @@ import { z } from "zod";
 import { getGardenBalance } from "@/db/queries/garden-plan";
 import { balanceCsv } from "@/lib/balance/csv";
 import { requireRole } from "@/lib/auth/require-role";
-import { parseParams, parseWith, route } from "@/lib/http";
+import { parseParams, parseWith, route, refuseOtherMethods } from "@/lib/http";
 import { balanceQuerySchema, queryObject } from "@/lib/validation/balance";
 
 export const dynamic = "force-dynamic";
@@ -12,7 +12,7 @@ type Params = z.infer<typeof paramsSchema>;
 
 // The garden's Balance (lib/balance/types.ts BalanceBody), or its month table as CSV.
 export const GET = route<Params>(async (request, { params }) => {
-  const { gardenId } = await parseParams(params, paramsSchema);
+  const { gardenId } = await parseParams(request, params, paramsSchema);
   await requireRole(request, gardenId, "viewer");
   const query = parseWith(balanceQuerySchema, queryObject(request.url));
   const balance = await getGardenBalance({ gardenId, from: query.from, months: query.months });
@@ -31,3 +31,5 @@ export const GET = route<Params>(async (request, { params }) => {
     headers: { ...headers, "Content-Type": "application/json" },
   });
 });
+
+export const { POST, PUT, PATCH, DELETE } = refuseOtherMethods({ GET });

@@ -4,7 +4,7 @@ import { getGardenById } from "@/db/queries/gardens";
 import { todayIn } from "@/lib/balance/range";
 import { requireRole } from "@/lib/auth/require-role";
 import { AppError } from "@/lib/errors";
-import { parseParams, route } from "@/lib/http";
+import { parseParams, route, refuseOtherMethods } from "@/lib/http";
 
 export const dynamic = "force-dynamic";
 
@@ -24,7 +24,7 @@ function fileName(name: string, asOf: string): string {
 
 // The whole garden as a scenario file (lib/validation/scenario.ts), history up to today.
 export const GET = route<Params>(async (request, { params }) => {
-  const { gardenId } = await parseParams(params, paramsSchema);
+  const { gardenId } = await parseParams(request, params, paramsSchema);
   await requireRole(request, gardenId, "viewer");
   const garden = await getGardenById({ gardenId });
   if (!garden) throw new AppError("not_found:garden");
@@ -38,3 +38,5 @@ export const GET = route<Params>(async (request, { params }) => {
     },
   });
 });
+
+export const { POST, PUT, PATCH, DELETE } = refuseOtherMethods({ GET });

@@ -5,7 +5,7 @@ import { applyWhatIf, diffPlans } from "@/lib/balance/what-if";
 import { requireRole } from "@/lib/auth/require-role";
 import { EngineInputError } from "@/lib/engine";
 import { AppError } from "@/lib/errors";
-import { parseJson, parseParams, route } from "@/lib/http";
+import { parseJson, parseParams, route, refuseOtherMethods } from "@/lib/http";
 import { whatIfRequestSchema } from "@/lib/validation/what-if";
 
 export const dynamic = "force-dynamic";
@@ -16,7 +16,7 @@ type Params = z.infer<typeof paramsSchema>;
 // Changes tried on a copy of the garden's inputs: today's Balance beside the
 // changed one. Viewers may try this too; nothing is written.
 export const POST = route<Params>(async (request, { params }) => {
-  const { gardenId } = await parseParams(params, paramsSchema);
+  const { gardenId } = await parseParams(request, params, paramsSchema);
   await requireRole(request, gardenId, "viewer");
   const input = await parseJson(request, whatIfRequestSchema);
   const current = await getGardenBalance({ gardenId, from: input.from, months: input.months });
@@ -38,3 +38,5 @@ export const POST = route<Params>(async (request, { params }) => {
   };
   return Response.json(body, { headers: { "Cache-Control": "private, no-store" } });
 });
+
+export const { GET, PUT, PATCH, DELETE } = refuseOtherMethods({ POST });

@@ -5,13 +5,13 @@ import { consumeLimits, INVITE_REFUSAL, limits } from "@/lib/auth/throttle";
 import { createLinkToken } from "@/lib/auth/tokens";
 import { appBaseUrl } from "@/lib/app-url";
 import { AppError } from "@/lib/errors";
-import { parseParams, route } from "@/lib/http";
+import { parseParams, route, refuseOtherMethods } from "@/lib/http";
 import { deliverInvitation } from "@/lib/invitations";
 
 const paramsSchema = z.object({ gardenId: z.uuid(), invitationId: z.uuid() });
 
 export const POST = route<z.infer<typeof paramsSchema>>(async (request, { params }) => {
-  const { gardenId, invitationId } = await parseParams(params, paramsSchema);
+  const { gardenId, invitationId } = await parseParams(request, params, paramsSchema);
   const member = await requireRole(request, gardenId, "owner");
   const existing = await getInvitation({ gardenId, invitationId });
   if (!existing || existing.acceptedAt || existing.revokedAt)
@@ -35,3 +35,6 @@ export const POST = route<z.infer<typeof paramsSchema>>(async (request, { params
     invitation: { ...invitation, mailStatus: mailSent ? "sent" : "failed" },
   });
 });
+
+// Any other method: a JSON 405 with an Allow header, not Next's empty one.
+export const { GET, PUT, PATCH, DELETE } = refuseOtherMethods({ POST });
