@@ -4,5 +4,11 @@ export const queryKeys = {
   garden: (gardenId: string) => ["gardens", gardenId] as const,
   members: (gardenId: string) => ["gardens", gardenId, "members"] as const,
   invitations: (gardenId: string) => ["gardens", gardenId, "invitations"] as const,
+  /** Everything computed from the plan; a write that changes supply or demand invalidates this prefix. */
+  plan: (gardenId: string) => ["gardens", gardenId, "balance"] as const,
+  balance: (gardenId: string, from: string, months: number) =>
+    ["gardens", gardenId, "balance", from, months] as const,
+  whatIf: (gardenId: string, from: string, months: number, changes: unknown) =>
+    ["gardens", gardenId, "balance", from, months, "what-if", changes] as const,
   outbox: () => ["dev", "outbox"] as const,
 };
