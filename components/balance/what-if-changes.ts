@@ -12,8 +12,8 @@ export function changesForSuggestion(s: GapSuggestion, names: GardenNames): TryC
   const likeBinId = like && "ref" in like ? like.id : names.bins[0]?.id;
   switch (s.kind) {
     case "extra-trays":
-      return likeBinId && s.trays
-        ? [{ kind: "extra-trays", binId: likeBinId, trays: s.trays } as unknown as TryChange]
+      return likeBinId && s.harvestDates?.length
+        ? [{ kind: "extra-trays", binId: likeBinId, harvestDates: s.harvestDates }]
         : null;
     case "second-bin":
       return likeBinId && s.startDate
@@ -49,7 +49,7 @@ export function currentAmount(plantingId: string, names: GardenNames): number | 
 /** A change in words for the list of what is being tried. */
 export function describeChange(c: TryChange, names: GardenNames): string {
   const bin = (id: string) => names.bins.find((b) => b.id === id)?.name ?? "a bin";
-  const change = c as TryChange | { kind: "extra-trays"; binId: string; trays: number };
+  const change = c;
   switch (change.kind) {
     case "bin-trays":
       return `${bin(change.binId)}: ${change.trays} trays in the stack`;
@@ -66,6 +66,6 @@ export function describeChange(c: TryChange, names: GardenNames): string {
     case "add-bin":
       return `A second bin like ${bin(change.likeBinId)}, started ${change.startDate}`;
     case "extra-trays":
-      return `${change.trays} extra ${change.trays === 1 ? "tray" : "trays"} processed in ${bin(change.binId)}`;
+      return `${change.harvestDates.length} extra ${change.harvestDates.length === 1 ? "tray" : "trays"} processed in ${bin(change.binId)}`;
   }
 }

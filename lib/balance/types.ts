@@ -59,6 +59,11 @@ export type WhatIfChange =
   | { kind: "bin-trays"; binId: string; trays: number }
   | { kind: "bin-rotation"; binId: string; rotationIntervalDays: number }
   | { kind: "bin-start"; binId: string; startDate: IsoDate }
+  /**
+   * Extra trays the size of `binId`'s, one harvested on each date (the extra-trays
+   * suggestion's harvestDates), each making that bin's forecast per-harvest amount.
+   */
+  | { kind: "extra-trays"; binId: string; harvestDates: IsoDate[] }
   /** amount in the planting's rule measure (kg or L per plant, per m², per L of container; % of mix). */
   | { kind: "planting-amount"; plantingId: string; amount: number }
   /** Add a bin built like `likeBinId`, started on startDate with `startingWorms` (default: the original's). */

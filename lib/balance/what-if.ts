@@ -47,8 +47,15 @@ function ruleOf(p: PlantingInput): FeedingRuleInput {
   };
 }
 
-/** inputs with the changes applied; unknown ids and amounts beyond reason → 400 naming each field. */
-export function applyWhatIf(inputs: GardenInputs, changes: WhatIfChange[]): GardenInputs {
+/**
+ * inputs with the changes applied; unknown ids and amounts beyond reason → 400 naming each field.
+ * `perHarvestKg` (from today's plan) sizes extra trays like their bin's own harvests.
+ */
+export function applyWhatIf(
+  inputs: GardenInputs,
+  changes: WhatIfChange[],
+  perHarvestKg: ReadonlyMap<string, number> = new Map(),
+): GardenInputs {
   const next: GardenInputs = structuredClone(inputs);
   const fields: FieldErrors = {};
   changes.forEach((change, i) => {
@@ -85,6 +92,25 @@ export function applyWhatIf(inputs: GardenInputs, changes: WhatIfChange[]): Gard
       case "bin-start":
         bin.startDate = change.startDate;
         break;
+      case "extra-trays": {
+        const amount = perHarvestKg.get(bin.id);
+        if (!amount) {
+          fields[`${at}.binId`] = "this bin has no forecast harvest to copy";
+          return;
+        }
+        // Each extra tray is stock on its harvest day, like a logged harvest would be.
+        change.harvestDates.forEach((madeOn, j) =>
+          next.stockLots.push({
+            id: `what-if-tray-${i + 1}-${j + 1}`,
+            binId: bin.id,
+            material: "castings",
+            madeOn,
+            amount,
+            manureFeedstock: null,
+          }),
+        );
+        break;
+      }
       case "add-bin":
         next.bins.push({
           ...structuredClone(bin),

@@ -29,6 +29,14 @@ const changeSchema = z.discriminatedUnion("kind", [
   z.object({ kind: z.literal("bin-start"), binId: id, startDate: isoDateSchema }).strict(),
   z
     .object({
+      kind: z.literal("extra-trays"),
+      binId: id,
+      // The engine's own search stops at 60 extra trays.
+      harvestDates: z.array(isoDateSchema).min(1, "give at least one harvest date").max(60),
+    })
+    .strict(),
+  z
+    .object({
       kind: z.literal("planting-amount"),
       plantingId: id,
       amount: z.number().finite().nonnegative(),

@@ -235,6 +235,35 @@ describe("POST what-if", () => {
     expect(await databaseChecksum()).toEqual(before);
   });
 
+  it("one extra tray harvested on 2027-03-05 covers March's 5.80 kg shortfall, and nothing is written", async () => {
+    const current = (await getBalance(gardenId, "?from=2027-03&months=6")).json as BalanceBody;
+    const binId = current.plan.bins[0]!.binId;
+    const before = await databaseChecksum();
+    const res = await whatIf({
+      from: "2027-03",
+      months: 6,
+      changes: [{ kind: "extra-trays", binId, harvestDates: ["2027-03-05"] }],
+    });
+    expect(res.status, res.text).toBe(200);
+    const body = res.json as WhatIfBody;
+    // One tray like the bin's own makes 20.27 kg (32.18 L × 0.9 × 0.7 kg/L, PRODUCT.md),
+    // more than March's shortfall of 5.79641 kg: the month is covered.
+    const mar = castings(body.changed, "2027-03");
+    expect(mar.shortfall).toBeCloseTo(0, 6);
+    expect(castings(body.current, "2027-03").shortfall).toBeCloseTo(TOMATO_KG + LETTUCE_KG, 4);
+    expect(await databaseChecksum()).toEqual(before);
+  });
+
+  it("an extra-trays change for an unknown bin is refused, naming the field", async () => {
+    const res = await whatIf({
+      changes: [{ kind: "extra-trays", binId: "no-such-bin", harvestDates: ["2027-03-05"] }],
+    });
+    expect(res.status).toBe(400);
+    expect((res.json as { error: { fields: Record<string, string> } }).error.fields).toHaveProperty(
+      "changes.0.binId",
+    );
+  });
+
   it("halving the tomatoes' rate halves their demand (½ cup × 30 plants)", async () => {
     const before = await databaseChecksum();
     const res = await whatIf({

@@ -20,7 +20,8 @@ export const POST = route<Params>(async (request, { params }) => {
   await requireRole(request, gardenId, "viewer");
   const input = await parseJson(request, whatIfRequestSchema);
   const current = await getGardenBalance({ gardenId, from: input.from, months: input.months });
-  const changedInputs = applyWhatIf(current.inputs, input.changes);
+  const perHarvestKg = new Map(current.body.plan.bins.map((b) => [b.binId, b.perHarvestKg]));
+  const changedInputs = applyWhatIf(current.inputs, input.changes, perHarvestKg);
   let changed;
   try {
     changed = balanceFrom(current.body, changedInputs);
