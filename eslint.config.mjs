@@ -25,13 +25,22 @@ const config = [
     },
   },
   {
-    // The engine stays pure: no database, services, React or Next in lib/engine.
+    // The engine stays pure: it imports only itself, lib/units and its libraries
+    // (rrule); no database, services, validation, React, Next or file system.
     files: ["lib/engine/**/*.ts"],
     rules: {
       "no-restricted-imports": [
         "error",
         {
-          patterns: ["@/db", "@/db/*", "@/services/*", "react", "next", "next/*", "node:fs", "fs"],
+          patterns: [
+            {
+              group: ["@/*", "!@/lib", "!@/lib/engine", "!@/lib/engine/**", "!@/lib/units"],
+              message: "lib/engine imports only lib/engine and lib/units",
+            },
+            { group: ["@/lib/*", "!@/lib/engine", "!@/lib/engine/**", "!@/lib/units"], message: "lib/engine imports only lib/engine and lib/units" },
+            { group: ["react", "react/*", "next", "next/*", "node:*", "fs", "path", "zod"], message: "lib/engine is pure" },
+            { group: ["../*", "./*"], message: "use @/lib/engine/… paths" },
+          ],
         },
       ],
     },

@@ -1,8 +1,7 @@
 // The scenario CLI proper; scripts/plan.ts starts it (see there for why).
 import { readFileSync } from "node:fs";
-import { addDays } from "@/lib/engine/dates";
-import { EngineInputError } from "@/lib/engine/errors";
-import { planGarden } from "@/lib/engine/plan";
+import { computePlan, EngineInputError } from "@/lib/engine";
+import { scenarioToInputs } from "@/lib/scenario/to-inputs";
 import { parseScenario } from "@/lib/validation/scenario";
 import { renderPlanTable } from "@/scripts/plan-table";
 
@@ -68,14 +67,15 @@ export function main(): void {
       ].join("\n"),
     );
   }
-  // Without --from the plan starts the day after the logged history (settings.asOf), else this month.
-  const asOf = parsed.scenario.settings.asOf;
-  const from =
-    args.from ?? (asOf ? addDays(asOf, 1).slice(0, 7) : new Date().toISOString().slice(0, 7));
+  // Without settings.asOf the history runs to today (UTC); without --from the plan starts the month after asOf.
+  const asOf = parsed.scenario.settings.asOf ?? new Date().toISOString().slice(0, 10);
   try {
-    const plan = planGarden(parsed.scenario, { from, months: args.months });
+    const inputs = scenarioToInputs(parsed.scenario, { asOf });
+    const plan = computePlan(inputs, { from: args.from, months: args.months });
     process.stdout.write(
-      args.format === "json" ? `${JSON.stringify(plan, null, 2)}\n` : renderPlanTable(plan),
+      args.format === "json"
+        ? `${JSON.stringify(plan, null, 2)}\n`
+        : renderPlanTable(plan, inputs.settings.unitSystem),
     );
   } catch (e) {
     if (e instanceof EngineInputError)

@@ -14,7 +14,7 @@ import {
   wormMoves,
 } from "@/db/schema";
 import { insertApplicationWithDraws, insertDrain, insertHarvest } from "@/db/queries/lots";
-import type { FeedingRuleInput, GardenInputs, MonthDay } from "@/lib/engine/inputs";
+import type { FeedingRuleInput, GardenInputs, MonthDay } from "@/lib/engine";
 
 // GardenInputs → a new garden's rows: the write half of the database adapter
 // (garden-inputs.ts reads them back). Ids are new uuids made here, so rows can

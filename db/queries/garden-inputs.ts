@@ -14,7 +14,7 @@ import {
   stockLots,
   wormMoves,
 } from "@/db/schema";
-import type { FeedingRuleInput, GardenInputs, LotDraw, MonthDay } from "@/lib/engine/inputs";
+import type { FeedingRuleInput, GardenInputs, LotDraw, MonthDay } from "@/lib/engine";
 import { AppError } from "@/lib/errors";
 
 // Database → GardenInputs. Rows are already SI, so they map straight across:

@@ -15,9 +15,19 @@ export * from "@/lib/engine/core/dates";
 export { DEFAULTS, dflt, type DefaultName, type Sourced } from "@/lib/engine/core/defaults";
 export * from "@/lib/engine/supply/geometry";
 export { forecastCastings, harvestDates, calibrate } from "@/lib/engine/supply/forecast";
-export { simulatePopulation, wormsToKg, kgToWorms, daysToMultiply } from "@/lib/engine/supply/population";
+export {
+  simulatePopulation,
+  wormsToKg,
+  kgToWorms,
+  daysToMultiply,
+} from "@/lib/engine/supply/population";
 export { checkCapacity } from "@/lib/engine/supply/capacity";
-export { dilute, leachateForSolution, leachateRate, teaCastingsNeeded } from "@/lib/engine/supply/liquid";
+export {
+  dilute,
+  leachateForSolution,
+  leachateRate,
+  teaCastingsNeeded,
+} from "@/lib/engine/supply/liquid";
 export { expandRecurrence, isBoundedRule, parseRecurrence } from "@/lib/engine/demand/recurrence";
 export { defaultRuleFor } from "@/lib/engine/demand/feeding-rules";
 export { runLedger } from "@/lib/engine/balance/ledger";

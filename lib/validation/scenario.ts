@@ -13,7 +13,7 @@ import { ruleSchema } from "@/lib/validation/scenario-rule";
 
 // A whole garden in one JSON file: what `npm run plan` reads and what the app
 // exports and imports. Sizes carry their unit ({ value, unit }); the engine
-// gets SI through lib/engine/plan-inputs.ts. Every error names its JSON path.
+// gets SI through lib/scenario/to-inputs.ts. Every error names its JSON path.
 
 export const SCENARIO_FORMAT = "castline-scenario";
 
@@ -41,8 +41,8 @@ const settingsSchema = z
     asOf: isoDateSchema.optional(),
     pricePerLb: z.number().finite().nonnegative().max(1000).optional(),
     shelfLifeDays: z.number().int().min(1).max(3650).optional(),
-    /** Days collected leachate is still used; default 1 (it does not keep). */
-    leachateKeepDays: z.number().int().min(1).max(30).optional(),
+    /** Days leachate (collected or drained) is still used; default 7 (from memory). */
+    liquidMaxAgeDays: z.number().int().min(1).max(90).optional(),
     teaCastingsPerWater: z.number().finite().positive().max(2).optional(),
   })
   .strict()
@@ -76,7 +76,6 @@ const traySchema = z.union([
       board: nominalBoardSchema,
     })
     .strict(),
-  z.object({ insideVolume: quantitySchema("volume", 2000) }).strict(),
 ]);
 
 const binSchema = z
@@ -100,6 +99,8 @@ const binSchema = z
           .array(
             z
               .object({
+                /** Lot id for applications that name it; default "<bin>:harvest:<date>". */
+                id: id.optional(),
                 date: isoDateSchema,
                 amount: quantitySchema("mass", 10_000, true),
                 predicted: quantitySchema("mass", 10_000, true).optional(),
@@ -111,7 +112,11 @@ const binSchema = z
         leachate: z
           .array(
             z
-              .object({ date: isoDateSchema, volume: quantitySchema("volume", 1000, true) })
+              .object({
+                id: id.optional(),
+                date: isoDateSchema,
+                volume: quantitySchema("volume", 1000, true),
+              })
               .strict(),
           )
           .max(5000)
@@ -150,7 +155,7 @@ const plantingSchema = z
     bedId: id,
     crop: z.string().max(100).optional(),
     feederClass: feederClassSchema,
-    plantCount: z.number().finite().positive().max(100_000),
+    plantCount: z.number().int().min(1).max(100_000),
     startDate: isoDateSchema,
     endDate: isoDateSchema.optional(),
     harvestDate: isoDateSchema.optional(),
@@ -170,8 +175,65 @@ const lotSchema = z
   .object({
     id,
     binId: id.optional(),
+    material: z.enum(["castings", "leachate"]).optional(),
     madeOn: isoDateSchema,
-    amount: quantitySchema("mass", 100_000, true),
+    amount: quantitySchema(["mass", "volume"], 100_000, true),
+    manureFeedstock: z.boolean().optional(),
+  })
+  .strict();
+
+const applicationSchema = z
+  .object({
+    id: id.optional(),
+    plantingId: id,
+    date: isoDateSchema,
+    material: z.enum(["castings", "leachate", "tea"]),
+    method: z.enum(["top-dress", "side-dress", "soil-mix", "drench"]),
+    /** As applied: castings by mass or volume, liquids by volume (diluted solution, brewed tea). */
+    amount: quantitySchema(["mass", "volume"], 10_000, true),
+    plannedFeedingId: z.string().max(300).optional(),
+    draws: z
+      .array(
+        z.object({ lotId: id, amount: quantitySchema(["mass", "volume"], 10_000, true) }).strict(),
+      )
+      .max(50)
+      .optional(),
+  })
+  .strict();
+
+const logsSchema = z
+  .object({
+    applications: z.array(applicationSchema).max(100_000).optional(),
+    wormMoves: z
+      .array(
+        z
+          .object({
+            id: id.optional(),
+            date: isoDateSchema,
+            fromBinId: id.optional(),
+            toBinId: id.optional(),
+            worms: z.number().int().min(1).max(10_000_000),
+          })
+          .strict(),
+      )
+      .max(10_000)
+      .optional(),
+    observations: z
+      .array(
+        z
+          .object({
+            id: id.optional(),
+            binId: id,
+            date: isoDateSchema,
+            wormCount: z.number().int().nonnegative().max(10_000_000).optional(),
+            temperatureC: z.number().finite().min(-50).max(80).optional(),
+            moisturePercent: z.number().finite().min(0).max(100).optional(),
+            note: z.string().max(2000).optional(),
+          })
+          .strict(),
+      )
+      .max(10_000)
+      .optional(),
   })
   .strict();
 
@@ -188,6 +250,7 @@ export const scenarioSchema = z
       .object({ lots: z.array(lotSchema).max(1000) })
       .strict()
       .optional(),
+    logs: logsSchema.optional(),
   })
   .strict()
   .superRefine((s, ctx) => crossCheck(s, ctx));
@@ -229,6 +292,26 @@ function crossCheck(s: z.infer<typeof scenarioSchema>, ctx: z.RefinementCtx): vo
         message:
           "is needed: the rule never ends (no COUNT or UNTIL) and an indoor bed has no growing season to end it",
       });
+    }
+  });
+  const plantings = new Set(s.plantings.map((p) => p.id));
+  (s.logs?.applications ?? []).forEach((a, i) => {
+    if (!plantings.has(a.plantingId))
+      ctx.addIssue({
+        code: "custom",
+        path: ["logs", "applications", i, "plantingId"],
+        message: `no planting with id "${a.plantingId}"`,
+      });
+  });
+  (s.logs?.wormMoves ?? []).forEach((m, i) => {
+    for (const key of ["fromBinId", "toBinId"] as const) {
+      const v = m[key];
+      if (v !== undefined && !bins.has(v))
+        ctx.addIssue({
+          code: "custom",
+          path: ["logs", "wormMoves", i, key],
+          message: `no bin with id "${v}"`,
+        });
     }
   });
   (s.stock?.lots ?? []).forEach((lot, i) => {

@@ -6,7 +6,7 @@ import { insertGardenInputs } from "@/db/queries/garden-inputs-write";
 import { loadGardenInputs } from "@/db/queries/garden-inputs";
 import { listLotStock, recordApplication } from "@/db/queries/lots";
 import { applications, stockLots, users } from "@/db/schema";
-import type { GardenInputs } from "@/lib/engine/inputs";
+import type { GardenInputs } from "@/lib/engine";
 import { closeHarness, tableRows } from "@/tests/support/integration/harness";
 
 afterAll(closeHarness);

@@ -1,5 +1,5 @@
 import { convert } from "convert";
-import { EngineInputError } from "@/lib/engine/errors";
+import { EngineInputError } from "@/lib/engine/core/errors";
 import {
   convertUnit,
   quantityOf,

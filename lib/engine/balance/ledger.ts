@@ -12,9 +12,13 @@
 //   interval, 7 CFR 205.203(c)(1)) never draws from a manure-fed lot; other
 //   claims draw manure-fed lots first, so clean stock is left for those that need it.
 // - A lot is usable from the day it is made until the day before madeDay + keepDays.
-import { AMOUNT_EPSILON } from "@/lib/engine/balance/lots";
-import { FEEDER_RANK } from "@/lib/engine/balance/allocate";
 import type { FeederClass, Material } from "@/lib/engine/core/types";
+
+/** Amounts below this are float dust from pro-rata splits, not stock. */
+export const AMOUNT_EPSILON = 1e-9;
+
+/** Heavy feeders before medium before light when priorities tie. */
+export const FEEDER_RANK: Record<FeederClass, number> = { heavy: 0, medium: 1, light: 2 };
 
 export type Pool = "castings" | "leachate";
 
@@ -284,7 +288,7 @@ export function runLedger(input: LedgerInput): LedgerResult {
       // 2. What is planned: tier by tier.
       const planned = plannedByMonth[m]!.filter((i) => input.planned[i]!.pool === pool);
       planned.sort((a, b) => compareClaims(input.planned[a]!, input.planned[b]!) || a - b);
-      for (let t = 0; t < planned.length; ) {
+      for (let t = 0; t < planned.length;) {
         const head = input.planned[planned[t]!]!;
         let end = t + 1;
         while (end < planned.length && compareClaims(head, input.planned[planned[end]!]!) === 0)

@@ -141,7 +141,6 @@ export const dayNumber = toDayNumber;
 
 const ISO_MONTH = /^(\d{4})-(\d{2})$/;
 
-
 /** "YYYY-MM" of a day number. */
 export function monthKeyOfDay(day: number): string {
   return fromDayNumber(day).slice(0, 7);

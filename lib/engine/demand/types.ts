@@ -1,6 +1,11 @@
 import type { DateRange } from "@/lib/engine/core/dates";
 import type { FeedingRule } from "@/lib/engine/demand/feeding-rules";
-import type { BlockedOccurrence, DemandOccurrence, FeederClass, IsoDate } from "@/lib/engine/core/types";
+import type {
+  BlockedOccurrence,
+  DemandOccurrence,
+  FeederClass,
+  IsoDate,
+} from "@/lib/engine/core/types";
 
 export interface BedInput {
   id: string;

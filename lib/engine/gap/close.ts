@@ -11,8 +11,12 @@
 // - buying the castings that are short, at the garden's price.
 import { dflt } from "@/lib/engine/core/defaults";
 import { fromDayNumber, toDayNumber } from "@/lib/engine/core/dates";
-import { AMOUNT_EPSILON } from "@/lib/engine/balance/lots";
-import { runLedger, type LedgerInput, type LedgerLot } from "@/lib/engine/balance/ledger";
+import {
+  AMOUNT_EPSILON,
+  runLedger,
+  type LedgerInput,
+  type LedgerLot,
+} from "@/lib/engine/balance/ledger";
 import { forecastCastings } from "@/lib/engine/supply/forecast";
 import { trayInsideFromOuter, trayInsideVolumeL } from "@/lib/engine/supply/geometry";
 import type { PlanContext } from "@/lib/engine/plan/context";
@@ -54,7 +58,9 @@ export function closePlanGap(a: GapArgs): GapReport {
 
   // Only the claims a fix could reach: castings and tea, after asOf, up to the plan's end.
   const planned = a.demand.planned;
-  const inReach = planned.map((c) => c.pool === "castings" && c.day > ctx.asOfDay && c.day <= ctx.planEndDay);
+  const inReach = planned.map(
+    (c) => c.pool === "castings" && c.day > ctx.asOfDay && c.day <= ctx.planEndDay,
+  );
   const shortOf = (lots: LedgerLot[], scale?: (c: PlannedClaim) => number): Short => {
     const r = runLedger({
       ...a.ledgerInput,
@@ -81,7 +87,10 @@ export function closePlanGap(a: GapArgs): GapReport {
   const baseLots = [...a.ledgerInput.lots];
   const largest = [...a.supply.bins].sort((x, y) => y.perHarvestKg - x.perHarvestKg)[0];
   const addUnavailable = (kind: GapSuggestion["kind"], why: string) =>
-    report.unavailable.push({ kind, explanation: { kind: "gap-unavailable", inputs: { why: { text: why } } } });
+    report.unavailable.push({
+      kind,
+      explanation: { kind: "gap-unavailable", inputs: { why: { text: why } } },
+    });
 
   if (largest) {
     // Extra trays.
@@ -123,7 +132,9 @@ export function closePlanGap(a: GapArgs): GapReport {
             trays: { unit: "count", value: extras.length },
             perTray: { unit: "kg", value: largest.perHarvestKg },
             like: { ref: "bin", id: largest.bin.id },
-            firstStartBy: { date: fromDayNumber(Math.min(...extras.map((e) => e.madeDay)) - Math.ceil(T)) },
+            firstStartBy: {
+              date: fromDayNumber(Math.min(...extras.map((e) => e.madeDay)) - Math.ceil(T)),
+            },
           },
         },
       });
@@ -131,7 +142,12 @@ export function closePlanGap(a: GapArgs): GapReport {
     // Second bin like the largest, latest start with no shortfall.
     const copy = (startDay: number): LedgerLot[] =>
       forecastCastings(
-        { ...largest.forecastInput, binId: `${largest.bin.id}-copy`, startDate: fromDayNumber(startDay), asOf: undefined },
+        {
+          ...largest.forecastInput,
+          binId: `${largest.bin.id}-copy`,
+          startDate: fromDayNumber(startDay),
+          asOf: undefined,
+        },
         { from: fromDayNumber(startDay), to: fromDayNumber(ctx.planEndDay) },
       ).events.map((e, i) => ({
         id: `second-bin-${i}`,
@@ -144,7 +160,10 @@ export function closePlanGap(a: GapArgs): GapReport {
     let lo = ctx.asOfDay + 1;
     let hi = ctx.planEndDay;
     if (shortOf([...baseLots, ...copy(lo)]).firstDay !== null) {
-      addUnavailable("second-bin", `even a second bin started on ${fromDayNumber(lo)} leaves a shortfall`);
+      addUnavailable(
+        "second-bin",
+        `even a second bin started on ${fromDayNumber(lo)} leaves a shortfall`,
+      );
     } else {
       while (lo < hi) {
         const mid = Math.ceil((lo + hi) / 2);
@@ -157,18 +176,30 @@ export function closePlanGap(a: GapArgs): GapReport {
         remainingShortfallKg: 0,
         explanation: {
           kind: "gap-second-bin",
-          inputs: { like: { ref: "bin", id: largest.bin.id }, startBy: { date: fromDayNumber(lo) } },
+          inputs: {
+            like: { ref: "bin", id: largest.bin.id },
+            startBy: { date: fromDayNumber(lo) },
+          },
         },
       });
     }
   } else {
     // No bins: start one now.
-    const box = trayInsideFromOuter({ outerLengthM: toSi(24, "in"), outerWidthM: toSi(20, "in"), board: "2x6" });
+    const box = trayInsideFromOuter({
+      outerLengthM: toSi(24, "in"),
+      outerWidthM: toSi(20, "in"),
+      board: "2x6",
+    });
     const trays = dflt("startBinTrays");
     const worms = dflt("startBinWorms");
     const start = ctx.asOfDay + 1;
     const events = forecastCastings(
-      { binId: "new-bin", startDate: fromDayNumber(start), trays, trayInsideVolumeL: trayInsideVolumeL(box) },
+      {
+        binId: "new-bin",
+        startDate: fromDayNumber(start),
+        trays,
+        trayInsideVolumeL: trayInsideVolumeL(box),
+      },
       { from: fromDayNumber(start), to: fromDayNumber(ctx.planEndDay) },
     ).events;
     const lots: LedgerLot[] = events.map((e, i) => ({
@@ -206,11 +237,17 @@ export function closePlanGap(a: GapArgs): GapReport {
   const low = new Set<string>();
   planned.forEach((c, i) => inReach[i] && c.priority > best && low.add(c.plantingId));
   if (low.size === 0) {
-    addUnavailable("rate-cut", "every planting fed castings or tea has the top priority, and those are never cut");
+    addUnavailable(
+      "rate-cut",
+      "every planting fed castings or tea has the top priority, and those are never cut",
+    );
   } else {
     const cut = (pct: number) => (c: PlannedClaim) => (low.has(c.plantingId) ? 1 - pct / 100 : 1);
     if (shortOf(baseLots, cut(99)).firstDay !== null) {
-      addUnavailable("rate-cut", "cutting the lower-priority plantings by 99 % still leaves the top priority short");
+      addUnavailable(
+        "rate-cut",
+        "cutting the lower-priority plantings by 99 % still leaves the top priority short",
+      );
     } else {
       let lo = 1;
       let hi = 99;
@@ -227,7 +264,10 @@ export function closePlanGap(a: GapArgs): GapReport {
         remainingShortfallKg: 0,
         explanation: {
           kind: "gap-rate-cut",
-          inputs: { cut: { unit: "percent", value: hi }, plantings: { unit: "count", value: ids.length } },
+          inputs: {
+            cut: { unit: "percent", value: hi },
+            plantings: { unit: "count", value: ids.length },
+          },
         },
       });
     }

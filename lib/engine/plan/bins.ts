@@ -101,7 +101,10 @@ export function buildBins(
     const surfaceKgPerWeek =
       (topTrayM2 / toSi(1, "ft2") / dflt("surfaceFt2PerLbFoodPerWeek")) * toSi(1, "lb");
     const over = { intake: [] as number[], surface: [] as number[] };
-    let worst = { intake: { need: 0, limit: 0, month: "" }, surface: { need: 0, limit: 0, month: "" } };
+    let worst = {
+      intake: { need: 0, limit: 0, month: "" },
+      surface: { need: 0, limit: 0, month: "" },
+    };
     planSpans.forEach((span, m) => {
       const row = months[m]!;
       if (row.castingsKg <= 0) return;
@@ -112,12 +115,18 @@ export function buildBins(
       if (needPerWeek > intakePerWeek + 1e-12) {
         over.intake.push(m);
         if (needPerWeek - intakePerWeek > worst.intake.need - worst.intake.limit)
-          worst = { ...worst, intake: { need: needPerWeek, limit: intakePerWeek, month: span.month } };
+          worst = {
+            ...worst,
+            intake: { need: needPerWeek, limit: intakePerWeek, month: span.month },
+          };
       }
       if (needPerWeek > surfaceKgPerWeek + 1e-12) {
         over.surface.push(m);
         if (needPerWeek - surfaceKgPerWeek > worst.surface.need - worst.surface.limit)
-          worst = { ...worst, surface: { need: needPerWeek, limit: surfaceKgPerWeek, month: span.month } };
+          worst = {
+            ...worst,
+            surface: { need: needPerWeek, limit: surfaceKgPerWeek, month: span.month },
+          };
       }
     });
     for (const kind of ["intake", "surface"] as const) {
@@ -198,7 +207,9 @@ function task(binId: string, kind: BinTask["kind"], day: number, amount: number 
       kind: kind === "drain" ? "leachate-collected" : "harvest-forecast",
       inputs: {
         bin: { ref: "bin", id: binId },
-        ...(amount === null ? {} : { amount: { unit: kind === "drain" ? "L" : "kg", value: amount } }),
+        ...(amount === null
+          ? {}
+          : { amount: { unit: kind === "drain" ? "L" : "kg", value: amount } }),
       },
     },
   };

@@ -1,8 +1,12 @@
 // One call for the whole garden: replay the history up to asOf, forecast every
 // bin and planting after it, balance month by month, check the worms, and say
 // how to close a shortfall. Returns everything the screens and the CLI show.
-import { AMOUNT_EPSILON } from "@/lib/engine/balance/lots";
-import { runLedger, type LedgerInput, type Pool } from "@/lib/engine/balance/ledger";
+import {
+  AMOUNT_EPSILON,
+  runLedger,
+  type LedgerInput,
+  type Pool,
+} from "@/lib/engine/balance/ledger";
 import { fromDayNumber } from "@/lib/engine/core/dates";
 import { closePlanGap } from "@/lib/engine/gap/close";
 import { buildBins } from "@/lib/engine/plan/bins";
@@ -162,7 +166,9 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
           first: { date: b.dates[0]! },
           feedings: { unit: "count", value: b.dates.length },
           manureStockRefused: { unit: "kg", value: b.kg },
-          rule: { text: "7 CFR 205.203(c)(1): 120 days before harvest if the edible part touches soil, 90 otherwise" },
+          rule: {
+            text: "7 CFR 205.203(c)(1): 120 days before harvest if the edible part touches soil, 90 otherwise",
+          },
         },
       },
     });
@@ -214,7 +220,10 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
 
   // Coverage per planting and month; demand per bed and month.
   const cov = new Map<string, PlantingCoverage>();
-  const beds = new Map<string, Map<string, BedDemand["months"][number] & { need: number; got: number }>>();
+  const beds = new Map<
+    string,
+    Map<string, BedDemand["months"][number] & { need: number; got: number }>
+  >();
   for (const f of feedings) {
     const month = monthOf(f.date);
     const key = `${f.plantingId}|${month}|${f.material}`;
@@ -231,7 +240,15 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
     c.allocated += f.allocated;
     cov.set(key, c);
     const bm = beds.get(f.bedId) ?? new Map();
-    const row = bm.get(month) ?? { month, castingsKg: 0, leachateL: 0, teaL: 0, coveragePct: 100, need: 0, got: 0 };
+    const row = bm.get(month) ?? {
+      month,
+      castingsKg: 0,
+      leachateL: 0,
+      teaL: 0,
+      coveragePct: 100,
+      need: 0,
+      got: 0,
+    };
     if (f.material === "castings") row.castingsKg += f.amount;
     else if (f.material === "leachate") row.leachateL += f.amount;
     else row.teaL += f.amount;

@@ -1,12 +1,7 @@
 // Settings with their defaults filled in, the plan's months and the replay's
 // months, computed once per plan.
 import { dflt } from "@/lib/engine/core/defaults";
-import {
-  fromDayNumber,
-  monthSpans,
-  toDayNumber,
-  type MonthSpan,
-} from "@/lib/engine/core/dates";
+import { fromDayNumber, monthSpans, toDayNumber, type MonthSpan } from "@/lib/engine/core/dates";
 import { EngineInputError } from "@/lib/engine/core/errors";
 import type { GardenInputs, PlanOptions } from "@/lib/engine/plan/inputs";
 import { toSi } from "@/lib/units";

@@ -1,17 +1,20 @@
 // Planted feedings after asOf, and logged applications, as ledger claims.
 import { dflt } from "@/lib/engine/core/defaults";
-import {
-  dayOfYearDate,
-  fromDayNumber,
-  toDayNumber,
-  yearOfDay,
-} from "@/lib/engine/core/dates";
+import { dayOfYearDate, fromDayNumber, toDayNumber, yearOfDay } from "@/lib/engine/core/dates";
 import { EngineInputError } from "@/lib/engine/core/errors";
 import type { FeederClass, IsoDate, Material, Method } from "@/lib/engine/core/types";
 import { POOL_OF, type LedgerClaim, type LedgerLogged } from "@/lib/engine/balance/ledger";
-import { DEFAULT_PRIORITY, expandPlanting, preHarvestBlockStart, preHarvestDays } from "@/lib/engine/demand/demand";
+import {
+  DEFAULT_PRIORITY,
+  expandPlanting,
+  preHarvestBlockStart,
+  preHarvestDays,
+} from "@/lib/engine/demand/demand";
 import type { FeedingRule } from "@/lib/engine/demand/feeding-rules";
-import type { BedInput as DemandBed, PlantingInput as DemandPlanting } from "@/lib/engine/demand/types";
+import type {
+  BedInput as DemandBed,
+  PlantingInput as DemandPlanting,
+} from "@/lib/engine/demand/types";
 import { isBoundedRule } from "@/lib/engine/demand/recurrence";
 import type { FeedingRuleInput, GardenInputs, MonthDay } from "@/lib/engine/plan/inputs";
 import type { PlanContext } from "@/lib/engine/plan/context";
@@ -184,7 +187,8 @@ export function buildDemand(
   inputs.logs.applications.forEach((a, i) => {
     const field = `logs.applications[${i}]`;
     const pl = plantings.get(a.plantingId);
-    if (!pl) throw new EngineInputError(`${field}.plantingId`, `no planting with id "${a.plantingId}"`);
+    if (!pl)
+      throw new EngineInputError(`${field}.plantingId`, `no planting with id "${a.plantingId}"`);
     const day = toDayNumber(a.date, `${field}.date`);
     let need: number;
     if (a.draws.length > 0) need = a.draws.reduce((s, d) => s + d.amount, 0);
@@ -192,9 +196,7 @@ export function buildDemand(
     else if (a.material === "tea")
       need = a.amount * (pl.rule?.teaCastingsPerWater ?? ctx.teaCastingsPerWater) * density;
     else
-      need =
-        a.amount /
-        (1 + (pl.rule?.dilutionWaterParts ?? dflt("leachateDilutionWaterParts")));
+      need = a.amount / (1 + (pl.rule?.dilutionWaterParts ?? dflt("leachateDilutionWaterParts")));
     const id = a.plannedFeedingId ?? feedingId(a.plantingId, a.material, a.date);
     replaced.add(id);
     logged.push({

@@ -5,7 +5,11 @@ import { dflt } from "@/lib/engine/core/defaults";
 import { fromDayNumber, monthOfDay, toDayNumber } from "@/lib/engine/core/dates";
 import { EngineInputError } from "@/lib/engine/core/errors";
 import type { LedgerLot } from "@/lib/engine/balance/ledger";
-import { forecastCastings, harvestDates, type BinForecastInput } from "@/lib/engine/supply/forecast";
+import {
+  forecastCastings,
+  harvestDates,
+  type BinForecastInput,
+} from "@/lib/engine/supply/forecast";
 import { trayInsideVolumeL } from "@/lib/engine/supply/geometry";
 import { leachateRate } from "@/lib/engine/supply/liquid";
 import type { BinInput, GardenInputs } from "@/lib/engine/plan/inputs";
@@ -13,12 +17,7 @@ import type { PlanContext } from "@/lib/engine/plan/context";
 import type { Explanation, PlanWarning } from "@/lib/engine/plan/results";
 
 export type LotSource =
-  | "stock"
-  | "harvest-logged"
-  | "harvest-due"
-  | "harvest-forecast"
-  | "drain-logged"
-  | "collected";
+  "stock" | "harvest-logged" | "harvest-due" | "harvest-forecast" | "drain-logged" | "collected";
 
 export interface LotInfo {
   lot: LedgerLot;
@@ -44,12 +43,20 @@ export const collectLotId = (binId: string, date: string) => `${binId}:collect:$
 
 export function trayVolumeL(bin: BinInput, field: string): number {
   return trayInsideVolumeL(
-    { lengthM: bin.tray.insideLengthM, widthM: bin.tray.insideWidthM, depthM: bin.tray.insideDepthM },
+    {
+      lengthM: bin.tray.insideLengthM,
+      widthM: bin.tray.insideWidthM,
+      depthM: bin.tray.insideDepthM,
+    },
     `${field}.tray`,
   );
 }
 
-export function binForecastInput(bin: BinInput, inputs: GardenInputs, field: string): BinForecastInput {
+export function binForecastInput(
+  bin: BinInput,
+  inputs: GardenInputs,
+  field: string,
+): BinForecastInput {
   const volume = trayVolumeL(bin, field);
   const uncalibrated =
     volume *
@@ -114,7 +121,8 @@ export function buildSupply(
   const bins: BinSupplyInfo[] = [];
   inputs.bins.forEach((bin, b) => {
     const field = `bins[${b}]`;
-    const retired = bin.retiredOn === null ? Infinity : toDayNumber(bin.retiredOn, `${field}.retiredOn`);
+    const retired =
+      bin.retiredOn === null ? Infinity : toDayNumber(bin.retiredOn, `${field}.retiredOn`);
     const input = binForecastInput(bin, inputs, field);
     const forecast = forecastCastings(input, range, field);
     const schedule = harvestDates({ ...input, asOf: undefined }, range, field).map((d) =>
@@ -136,7 +144,10 @@ export function buildSupply(
         source: "harvest-logged",
         explanation: {
           kind: "harvest-logged",
-          inputs: { bin: { ref: "bin", id: bin.id }, castings: { unit: "kg", value: h.castingsKg } },
+          inputs: {
+            bin: { ref: "bin", id: bin.id },
+            castings: { unit: "kg", value: h.castingsKg },
+          },
         },
       });
     }
@@ -182,7 +193,10 @@ export function buildSupply(
         bin: { ref: "bin", id: bin.id },
         trayVolume: { unit: "L", value: input.trayInsideVolumeL },
         fillFraction: { unit: "ratio", value: bin.fillFraction ?? dflt("fillFraction") },
-        bulkDensity: { unit: "ratio", value: bin.bulkDensityKgPerL ?? dflt("castingsBulkDensityKgPerL") },
+        bulkDensity: {
+          unit: "ratio",
+          value: bin.bulkDensityKgPerL ?? dflt("castingsBulkDensityKgPerL"),
+        },
         calibrationFactor: { unit: "ratio", value: forecast.calibration.factor },
         calibrationHarvests: { unit: "count", value: forecast.calibration.used },
         perHarvest: { unit: "kg", value: forecast.perHarvestKg },
@@ -243,7 +257,14 @@ export function buildSupply(
       },
     };
     const dormant = new Set(bin.dormantMonths);
-    const start = Math.max(ctx.asOfDay + 1, toDayNumber(bin.startDate));
+    // Liquid since the last logged drain is still in the base (not drained, so not logged):
+    // it collects from the day after that drain, at most one max age before the forecast starts.
+    const lastDrain = Math.max(-Infinity, ...drains.map((d) => toDayNumber(d.date)));
+    const start = Math.max(
+      toDayNumber(bin.startDate),
+      ctx.asOfDay + 1 - ctx.liquidMaxAgeDays,
+      lastDrain + 1,
+    );
     if (rate.litresPerDay > 0) {
       for (let day = start; day <= Math.min(ctx.planEndDay, retired); day++) {
         if (dormant.has(monthOfDay(day))) continue;

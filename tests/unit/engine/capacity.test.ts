@@ -1,4 +1,4 @@
-import { checkCapacity } from "@/lib/engine/capacity";
+import { checkCapacity } from "@/lib/engine/supply/capacity";
 import { toSi } from "@/lib/units";
 
 const lb = (n: number) => toSi(n, "lb");

@@ -4,13 +4,13 @@ import {
   preHarvestBlockStart,
   type BedInput,
   type PlantingInput,
-} from "@/lib/engine/demand";
-import { EngineInputError } from "@/lib/engine/errors";
+} from "@/lib/engine/demand/demand";
+import { EngineInputError } from "@/lib/engine/core/errors";
 import {
   DEFAULT_BED_TOPDRESS_RULE,
   DEFAULT_TEA_RULE,
   defaultRuleFor,
-} from "@/lib/engine/feeding-rules";
+} from "@/lib/engine/demand/feeding-rules";
 import { fromSi, toSi } from "@/lib/units";
 
 // Invented garden ("Hollis Street Garden"): frost-free from Apr 15 to Oct 15.

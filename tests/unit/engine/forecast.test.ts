@@ -3,8 +3,8 @@ import {
   forecastCastings,
   harvestDates,
   type BinForecastInput,
-} from "@/lib/engine/forecast";
-import { trayInsideFromOuter, trayInsideVolumeL } from "@/lib/engine/geometry";
+} from "@/lib/engine/supply/forecast";
+import { trayInsideFromOuter, trayInsideVolumeL } from "@/lib/engine/supply/geometry";
 import { fromSi, toSi } from "@/lib/units";
 
 // The 24 × 20 in 2×6 tray of PRODUCT.md: 21 × 17 × 5½ in inside ≈ 32.2 L.

@@ -1,4 +1,4 @@
-import { EngineInputError } from "@/lib/engine/errors";
+import { EngineInputError } from "@/lib/engine/core/errors";
 import {
   bedAreaM2,
   bedVolumeL,
@@ -7,7 +7,7 @@ import {
   trayInsideFromOuter,
   trayInsideVolumeL,
   traySurfaceM2,
-} from "@/lib/engine/geometry";
+} from "@/lib/engine/supply/geometry";
 import { fromSi, toSi } from "@/lib/units";
 
 const inch = (n: number) => toSi(n, "in");

@@ -4,7 +4,7 @@ import {
   leachateForSolution,
   leachateRate,
   teaCastingsNeeded,
-} from "@/lib/engine/liquid";
+} from "@/lib/engine/supply/liquid";
 import { toSi } from "@/lib/units";
 
 describe("leachate rate", () => {

@@ -1,6 +1,6 @@
 import { readFileSync } from "node:fs";
 import path from "node:path";
-import { planGarden } from "@/lib/engine/plan";
+import { planGarden } from "@/lib/engine/plan/plan";
 import { parseScenario, type Scenario } from "@/lib/validation/scenario";
 
 const LB = 0.45359237; // kg, exact (NIST Handbook 44 App. C)

@@ -1,10 +1,10 @@
 import fc from "fast-check";
-import { computeBalance } from "@/lib/engine/balance";
-import type { BalanceInput, BalanceResult } from "@/lib/engine/balance-types";
-import { closeGap } from "@/lib/engine/gap";
-import { addDays } from "@/lib/engine/dates";
-import type { StockLot } from "@/lib/engine/lots";
-import type { DemandOccurrence, SupplyEvent } from "@/lib/engine/types";
+import { computeBalance } from "@/lib/engine/balance/balance";
+import type { BalanceInput, BalanceResult } from "@/lib/engine/balance/types";
+import { closeGap } from "@/lib/engine/gap/gap";
+import { addDays } from "@/lib/engine/core/dates";
+import type { StockLot } from "@/lib/engine/balance/lots";
+import type { DemandOccurrence, SupplyEvent } from "@/lib/engine/core/types";
 import { collect, harvest, want } from "./balance-fixtures";
 
 // Invariants of the balance (PRODUCT.md "Balance (the heart)"), checked on

@@ -1,5 +1,5 @@
-import { EngineInputError } from "@/lib/engine/errors";
-import { expandRecurrence, isBoundedRule } from "@/lib/engine/recurrence";
+import { EngineInputError } from "@/lib/engine/core/errors";
+import { expandRecurrence, isBoundedRule } from "@/lib/engine/demand/recurrence";
 
 // Examples from RFC 5545 §3.8.5.3 ("Recurrence Rule", Examples). The RFC writes them
 // with DTSTART;TZID=America/New_York at 09:00; as floating all-day dates the anchor is

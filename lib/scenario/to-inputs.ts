@@ -1,0 +1,232 @@
+// Scenario file (units as typed) → GardenInputs (SI). Lives outside lib/engine
+// because it reads the scenario's zod types (lib/validation) and feeds the
+// engine: engine ← scenario → validation, with no cycle. The database adapter
+// (db/queries) builds the same GardenInputs from rows.
+import { EngineInputError } from "@/lib/engine";
+import type {
+  BedInput,
+  BinInput,
+  FeedingRuleInput,
+  GardenInputs,
+  MonthDay,
+  PlantingInput,
+  TrayInput,
+} from "@/lib/engine";
+import { dflt, trayInsideFromOuter } from "@/lib/engine";
+import type {
+  Scenario,
+  ScenarioBed,
+  ScenarioBin,
+  ScenarioPlanting,
+} from "@/lib/validation/scenario";
+import { si } from "@/lib/validation/scenario-quantity";
+import { quantityOf, toSi, type UnitName } from "@/lib/units";
+
+type Rule = NonNullable<ScenarioPlanting["rule"]>;
+
+/** Castings typed by volume (a cup, a litre) are weighed at the default bulk density. */
+function castingsKg(q: { value: number; unit: string }): number {
+  const v = si(q as never);
+  return quantityOf(q.unit as UnitName) === "mass" ? v : v * dflt("castingsBulkDensityKgPerL");
+}
+
+/** Default ids of logged harvests and drains, so applications can name the lot they drew from. */
+export const scenarioHarvestId = (binId: string, date: string) => `${binId}:harvest:${date}`;
+export const scenarioDrainId = (binId: string, date: string) => `${binId}:drain:${date}`;
+
+export function monthDay(value: string, field: string): MonthDay {
+  const m = /^(?:\d{4}-)?(\d{2})-(\d{2})$/.exec(value);
+  if (!m) throw new EngineInputError(field, `must be a month and day written MM-DD (got ${value})`);
+  return { month: Number(m[1]), day: Number(m[2]) };
+}
+
+export function trayInput(bin: ScenarioBin, field: string): TrayInput {
+  const t = bin.tray;
+  if ("inside" in t)
+    return {
+      insideLengthM: si(t.inside.length),
+      insideWidthM: si(t.inside.width),
+      insideDepthM: si(t.inside.depth),
+    };
+  const box = trayInsideFromOuter(
+    {
+      outerLengthM: si(t.outside.length),
+      outerWidthM: si(t.outside.width),
+      board: t.board as never,
+    },
+    `${field}.tray.outside`,
+  );
+  return { insideLengthM: box.lengthM, insideWidthM: box.widthM, insideDepthM: box.depthM };
+}
+
+function binInput(bin: ScenarioBin, field: string): BinInput {
+  return {
+    id: bin.id,
+    name: bin.name ?? bin.id,
+    startDate: bin.startDate,
+    trays: bin.trays,
+    tray: trayInput(bin, field),
+    rotationIntervalDays: bin.rotationIntervalDays ?? null,
+    processingDays: bin.processingDays ?? null,
+    fillFraction: bin.fillFraction ?? null,
+    bulkDensityKgPerL: bin.bulkDensityKgPerL ?? null,
+    dormantMonths: bin.dormantMonths ?? [],
+    manureFeedstock: bin.manureFeedstock ?? false,
+    startingWorms: bin.worms ?? 0,
+    leachateEstimateLPerWeek: bin.leachateEstimatePerWeek ? si(bin.leachateEstimatePerWeek) : null,
+    intakeFractionPerDay: null,
+    densityCeilingKgPerM2: null,
+    retiredOn: null,
+  };
+}
+
+function bedInput(bed: ScenarioBed): BedInput {
+  if (bed.kind === "bed")
+    return {
+      id: bed.id,
+      name: bed.name ?? bed.id,
+      kind: "bed",
+      indoor: bed.indoor ?? false,
+      areaM2: si(bed.length) * si(bed.width),
+      containerVolumeL: null,
+    };
+  return {
+    id: bed.id,
+    name: bed.name ?? bed.id,
+    kind: "container",
+    indoor: bed.indoor ?? false,
+    areaM2: null,
+    containerVolumeL: si(bed.volume),
+  };
+}
+
+export function ruleInput(rule: Rule): FeedingRuleInput {
+  const base = {
+    material: rule.material,
+    method: rule.method,
+    basis: rule.basis,
+    recurrence: rule.recurrence,
+    dilutionWaterParts: rule.dilutionWaterParts ?? null,
+    teaCastingsPerWater: null,
+  };
+  const a = rule.amount;
+  if (rule.basis === "percent-of-mix")
+    return { ...base, measure: "percent-of-mix", amount: typeof a === "number" ? a : a.value };
+  if (typeof a === "number") return { ...base, measure: "volume", amount: a };
+  const unit = a.unit as UnitName;
+  const kind = quantityOf(unit);
+  if (kind === "mass") {
+    const per = a.per === undefined ? 1 : toSi(1, a.per as UnitName);
+    return { ...base, measure: "mass", amount: toSi(a.value, unit) / per };
+  }
+  if (rule.basis === "per-area" && kind === "length") {
+    // A depth: 1 mm over 1 m² is 1 L.
+    return { ...base, measure: "volume", amount: toSi(a.value, unit) * 1000 };
+  }
+  const per = a.per === undefined ? 1 : toSi(1, a.per as UnitName);
+  return { ...base, measure: "volume", amount: toSi(a.value, unit) / per };
+}
+
+function plantingInput(p: ScenarioPlanting): PlantingInput {
+  return {
+    id: p.id,
+    bedId: p.bedId,
+    crop: p.crop ?? null,
+    feederClass: p.feederClass,
+    plantCount: p.plantCount,
+    startDate: p.startDate,
+    endDate: p.endDate ?? null,
+    harvestDate: p.harvestDate ?? null,
+    priority: p.priority ?? null,
+    edible: p.edible ?? true,
+    edibleTouchesSoil: p.edibleTouchesSoil ?? false,
+    rule: p.rule ? ruleInput(p.rule) : null,
+  };
+}
+
+/** The scenario as the engine takes it. `asOf` defaults to the scenario's settings.asOf. */
+export function scenarioToInputs(
+  s: Scenario,
+  opts: { asOf?: string; gardenId?: string } = {},
+): GardenInputs {
+  const asOf = opts.asOf ?? s.settings.asOf;
+  if (asOf === undefined)
+    throw new EngineInputError("settings.asOf", "is needed: the last day of logged history");
+  const harvests = s.bins.flatMap((b) =>
+    (b.logs?.harvests ?? []).map((h) => ({
+      id: h.id ?? scenarioHarvestId(b.id, h.date),
+      binId: b.id,
+      date: h.date,
+      castingsKg: si(h.amount),
+      predictedKg: h.predicted ? si(h.predicted) : null,
+    })),
+  );
+  const drains = s.bins.flatMap((b) =>
+    (b.logs?.leachate ?? []).map((d) => ({
+      id: d.id ?? scenarioDrainId(b.id, d.date),
+      binId: b.id,
+      date: d.date,
+      litres: si(d.volume),
+    })),
+  );
+  const logs = s.logs ?? {};
+  return {
+    garden: { id: opts.gardenId ?? s.garden.name, name: s.garden.name },
+    settings: {
+      unitSystem: s.settings.unitSystem,
+      timeZone: s.settings.timeZone,
+      lastSpringFrost: monthDay(s.settings.lastSpringFrost, "settings.lastSpringFrost"),
+      firstFallFrost: monthDay(s.settings.firstFallFrost, "settings.firstFallFrost"),
+      shelfLifeDays: s.settings.shelfLifeDays ?? null,
+      liquidMaxAgeDays: s.settings.liquidMaxAgeDays ?? null,
+      castingsPricePerKg:
+        s.settings.pricePerLb === undefined ? null : s.settings.pricePerLb / toSi(1, "lb"),
+      teaCastingsPerWater: s.settings.teaCastingsPerWater ?? null,
+    },
+    bins: s.bins.map((b, i) => binInput(b, `bins[${i}]`)),
+    beds: s.beds.map(bedInput),
+    plantings: s.plantings.map(plantingInput),
+    stockLots: (s.stock?.lots ?? []).map((l) => ({
+      id: l.id,
+      binId: l.binId ?? null,
+      material: l.material ?? "castings",
+      madeOn: l.madeOn,
+      amount: si(l.amount),
+      manureFeedstock: l.manureFeedstock ?? null,
+    })),
+    logs: {
+      harvests,
+      drains,
+      applications: (logs.applications ?? []).map((a, i) => ({
+        id: a.id ?? `application-${i + 1}`,
+        plantingId: a.plantingId,
+        date: a.date,
+        material: a.material,
+        method: a.method,
+        amount: a.material === "castings" ? castingsKg(a.amount) : si(a.amount),
+        plannedFeedingId: a.plannedFeedingId ?? null,
+        draws: (a.draws ?? []).map((d) => ({
+          lotId: d.lotId,
+          amount: a.material === "leachate" ? si(d.amount) : castingsKg(d.amount),
+        })),
+      })),
+      wormMoves: (logs.wormMoves ?? []).map((m, i) => ({
+        id: m.id ?? `worm-move-${i + 1}`,
+        date: m.date,
+        fromBinId: m.fromBinId ?? null,
+        toBinId: m.toBinId ?? null,
+        worms: m.worms,
+      })),
+      observations: (logs.observations ?? []).map((o, i) => ({
+        id: o.id ?? `observation-${i + 1}`,
+        binId: o.binId,
+        date: o.date,
+        wormCount: o.wormCount ?? null,
+        temperatureC: o.temperatureC ?? null,
+        moisturePercent: o.moisturePercent ?? null,
+        note: o.note ?? null,
+      })),
+    },
+    asOf,
+  };
+}
