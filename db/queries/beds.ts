@@ -5,7 +5,7 @@ import { applications, beds, feedingRules, plantings } from "@/db/schema";
 import { AppError } from "@/lib/errors";
 import type { CreateBedInput, ListBedsQuery } from "@/lib/validation/bed";
 import { si } from "@/lib/validation/scenario-quantity";
-import { invalidateGardenPlan } from "./plan-invalidation";
+import { thenInvalidatePlan } from "./plan-invalidation";
 
 export interface BedDto {
   id: string;
@@ -98,7 +98,11 @@ export async function listBeds({
     .limit(query.limit)
     .offset(query.offset);
   const [{ total } = { total: 0 }] = await db.select({ total: count() }).from(beds).where(where);
-  const counts = await plantingCounts(db, gardenId, rows.map((r) => r.id));
+  const counts = await plantingCounts(
+    db,
+    gardenId,
+    rows.map((r) => r.id),
+  );
   return { beds: rows.map((r) => toDto(r, counts.get(r.id) ?? 0)), total };
 }
 
@@ -130,14 +134,16 @@ export async function createBed({
   input: CreateBedInput;
 }): Promise<BedDto> {
   const db = await getDb();
-  return db.transaction(async (tx) => {
-    const [row] = await tx
-      .insert(beds)
-      .values({ gardenId, ...bedColumnsFromInput(input) })
-      .returning(bedColumns);
-    await invalidateGardenPlan(tx, { gardenId });
-    return toDto(row!, 0);
-  });
+  return thenInvalidatePlan(
+    gardenId,
+    db.transaction(async (tx) => {
+      const [row] = await tx
+        .insert(beds)
+        .values({ gardenId, ...bedColumnsFromInput(input) })
+        .returning(bedColumns);
+      return toDto(row!, 0);
+    }),
+  );
 }
 
 /** Replaces the bed's fields with a full, already-checked input (the handler merges a PATCH first). */
@@ -151,16 +157,18 @@ export async function updateBed({
   input: CreateBedInput;
 }): Promise<BedDto | null> {
   const db = await getDb();
-  return db.transaction(async (tx) => {
-    const [row] = await tx
-      .update(beds)
-      .set(bedColumnsFromInput(input))
-      .where(and(eq(beds.gardenId, gardenId), eq(beds.id, bedId)))
-      .returning(bedColumns);
-    if (!row) return null;
-    await invalidateGardenPlan(tx, { gardenId });
-    return getBedById({ gardenId, bedId, tx });
-  });
+  return thenInvalidatePlan(
+    gardenId,
+    db.transaction(async (tx) => {
+      const [row] = await tx
+        .update(beds)
+        .set(bedColumnsFromInput(input))
+        .where(and(eq(beds.gardenId, gardenId), eq(beds.id, bedId)))
+        .returning(bedColumns);
+      if (!row) return null;
+      return getBedById({ gardenId, bedId, tx });
+    }),
+  );
 }
 
 /**
@@ -171,40 +179,41 @@ export async function updateBed({
  */
 export async function removeBed({ gardenId, bedId }: { gardenId: string; bedId: string }) {
   const db = await getDb();
-  return db.transaction(async (tx) => {
-    const bed = await getBedById({ gardenId, bedId, tx });
-    if (!bed) throw new AppError("not_found:bed");
-    const inBed = await tx
-      .select({ id: plantings.id, ruleId: plantings.feedingRuleId })
-      .from(plantings)
-      .where(and(eq(plantings.gardenId, gardenId), eq(plantings.bedId, bedId)));
-    if (inBed.length) {
-      const [{ logged } = { logged: 0 }] = await tx
-        .select({ logged: count() })
-        .from(applications)
-        .where(
-          and(
-            eq(applications.gardenId, gardenId),
-            inArray(
-              applications.plantingId,
-              inBed.map((p) => p.id),
+  return thenInvalidatePlan(
+    gardenId,
+    db.transaction(async (tx) => {
+      const bed = await getBedById({ gardenId, bedId, tx });
+      if (!bed) throw new AppError("not_found:bed");
+      const inBed = await tx
+        .select({ id: plantings.id, ruleId: plantings.feedingRuleId })
+        .from(plantings)
+        .where(and(eq(plantings.gardenId, gardenId), eq(plantings.bedId, bedId)));
+      if (inBed.length) {
+        const [{ logged } = { logged: 0 }] = await tx
+          .select({ logged: count() })
+          .from(applications)
+          .where(
+            and(
+              eq(applications.gardenId, gardenId),
+              inArray(
+                applications.plantingId,
+                inBed.map((p) => p.id),
+              ),
             ),
-          ),
-        );
-      if (logged > 0)
-        throw new AppError(
-          "conflict:bed_logged",
-          `This bed has ${logged} logged application${logged === 1 ? "" : "s"}, so it is kept for the record. End its plantings instead.`,
-        );
-    }
-    await tx.delete(beds).where(and(eq(beds.gardenId, gardenId), eq(beds.id, bedId)));
-    const ruleIds = inBed.map((p) => p.ruleId).filter((id): id is string => id !== null);
-    if (ruleIds.length)
-      await tx
-        .delete(feedingRules)
-        .where(and(eq(feedingRules.gardenId, gardenId), inArray(feedingRules.id, ruleIds)));
-    await invalidateGardenPlan(tx, { gardenId });
-    return { removed: true as const };
-  });
+          );
+        if (logged > 0)
+          throw new AppError(
+            "conflict:bed_logged",
+            `This bed has ${logged} logged application${logged === 1 ? "" : "s"}, so it is kept for the record. End its plantings instead.`,
+          );
+      }
+      await tx.delete(beds).where(and(eq(beds.gardenId, gardenId), eq(beds.id, bedId)));
+      const ruleIds = inBed.map((p) => p.ruleId).filter((id): id is string => id !== null);
+      if (ruleIds.length)
+        await tx
+          .delete(feedingRules)
+          .where(and(eq(feedingRules.gardenId, gardenId), inArray(feedingRules.id, ruleIds)));
+      return { removed: true as const };
+    }),
+  );
 }
-

@@ -8,7 +8,7 @@ import { cropFacts, effectiveRule, type RuleSource } from "@/lib/plantings/rules
 import { ruleInput } from "@/lib/scenario/to-inputs";
 import type { CreateCropInput, UpdateCropInput } from "@/lib/validation/crop";
 import { dropRule, ruleFromRow, writeRule } from "./feeding-rules-write";
-import { invalidateGardenPlan } from "./plan-invalidation";
+import { thenInvalidatePlan } from "./plan-invalidation";
 
 // A garden sees its own crops and the shared starter list, minus the starter
 // crops it has its own copy of (same name). Plantings always point at the
@@ -88,7 +88,11 @@ export async function listCrops({
       (!query.feederClass || c.feederClass === query.feederClass),
   );
   const page = all.slice(query.offset, query.offset + query.limit);
-  const rules = await rulesById(db, gardenId, page.map((c) => c.feedingRuleId));
+  const rules = await rulesById(
+    db,
+    gardenId,
+    page.map((c) => c.feedingRuleId),
+  );
   return { crops: page.map((c) => toDto(c, rules)), total: all.length };
 }
 
@@ -118,7 +122,11 @@ async function ownCropNamed(tx: DbOrTx, gardenId: string, name: string) {
  * starter crop (made now if there is none). null when the id is neither
  * (another garden's crop, or no crop at all).
  */
-export async function adoptCrop(tx: DbOrTx, gardenId: string, cropId: string): Promise<CropRow | null> {
+export async function adoptCrop(
+  tx: DbOrTx,
+  gardenId: string,
+  cropId: string,
+): Promise<CropRow | null> {
   const row = await findVisibleCrop(tx, gardenId, cropId);
   if (!row) return null;
   if (row.gardenId !== null) return row;
@@ -142,25 +150,33 @@ const nameTaken = (name: string) =>
     name: `You already have a crop called ${name}; change that one instead.`,
   });
 
-export async function createCrop({ gardenId, input }: { gardenId: string; input: CreateCropInput }) {
+export async function createCrop({
+  gardenId,
+  input,
+}: {
+  gardenId: string;
+  input: CreateCropInput;
+}) {
   const db = await getDb();
-  return db.transaction(async (tx) => {
-    if (await ownCropNamed(tx, gardenId, input.name)) throw nameTaken(input.name);
-    const ruleId = await writeRule(tx, gardenId, null, input.rule ? ruleInput(input.rule) : null);
-    const [row] = await tx
-      .insert(crops)
-      .values({
-        gardenId,
-        name: input.name,
-        feederClass: input.feederClass,
-        edible: input.edible,
-        edibleTouchesSoil: input.edible ? input.edibleTouchesSoil : false,
-        feedingRuleId: ruleId,
-      })
-      .returning();
-    await invalidateGardenPlan(tx, { gardenId });
-    return toDto(row!, await rulesById(tx, gardenId, [ruleId]));
-  });
+  return thenInvalidatePlan(
+    gardenId,
+    db.transaction(async (tx) => {
+      if (await ownCropNamed(tx, gardenId, input.name)) throw nameTaken(input.name);
+      const ruleId = await writeRule(tx, gardenId, null, input.rule ? ruleInput(input.rule) : null);
+      const [row] = await tx
+        .insert(crops)
+        .values({
+          gardenId,
+          name: input.name,
+          feederClass: input.feederClass,
+          edible: input.edible,
+          edibleTouchesSoil: input.edible ? input.edibleTouchesSoil : false,
+          feedingRuleId: ruleId,
+        })
+        .returning();
+      return toDto(row!, await rulesById(tx, gardenId, [ruleId]));
+    }),
+  );
 }
 
 /** Changes a crop for this garden; a starter crop is copied into the garden first. */
@@ -174,53 +190,57 @@ export async function updateCrop({
   input: UpdateCropInput;
 }): Promise<CropDto | null> {
   const db = await getDb();
-  return db.transaction(async (tx) => {
-    const row = await adoptCrop(tx, gardenId, cropId);
-    if (!row) return null;
-    if (input.name && input.name.toLowerCase() !== row.name?.toLowerCase()) {
-      if (await ownCropNamed(tx, gardenId, input.name)) throw nameTaken(input.name);
-    }
-    const next =
-      input.rule === undefined ? undefined : input.rule === null ? null : ruleInput(input.rule);
-    const ruleId = await writeRule(tx, gardenId, row.feedingRuleId, next);
-    const edible = input.edible ?? row.edible;
-    const [updated] = await tx
-      .update(crops)
-      .set({
-        name: input.name ?? row.name,
-        feederClass: input.feederClass ?? row.feederClass,
-        edible,
-        edibleTouchesSoil: edible ? (input.edibleTouchesSoil ?? row.edibleTouchesSoil) : false,
-        feedingRuleId: ruleId,
-      })
-      .where(and(eq(crops.gardenId, gardenId), eq(crops.id, row.id)))
-      .returning();
-    if (next === null) await dropRule(tx, gardenId, row.feedingRuleId);
-    await invalidateGardenPlan(tx, { gardenId });
-    return toDto(updated!, await rulesById(tx, gardenId, [ruleId]));
-  });
+  return thenInvalidatePlan(
+    gardenId,
+    db.transaction(async (tx) => {
+      const row = await adoptCrop(tx, gardenId, cropId);
+      if (!row) return null;
+      if (input.name && input.name.toLowerCase() !== row.name?.toLowerCase()) {
+        if (await ownCropNamed(tx, gardenId, input.name)) throw nameTaken(input.name);
+      }
+      const next =
+        input.rule === undefined ? undefined : input.rule === null ? null : ruleInput(input.rule);
+      const ruleId = await writeRule(tx, gardenId, row.feedingRuleId, next);
+      const edible = input.edible ?? row.edible;
+      const [updated] = await tx
+        .update(crops)
+        .set({
+          name: input.name ?? row.name,
+          feederClass: input.feederClass ?? row.feederClass,
+          edible,
+          edibleTouchesSoil: edible ? (input.edibleTouchesSoil ?? row.edibleTouchesSoil) : false,
+          feedingRuleId: ruleId,
+        })
+        .where(and(eq(crops.gardenId, gardenId), eq(crops.id, row.id)))
+        .returning();
+      if (next === null) await dropRule(tx, gardenId, row.feedingRuleId);
+      return toDto(updated!, await rulesById(tx, gardenId, [ruleId]));
+    }),
+  );
 }
 
 /** Removes a garden's own crop no planting uses. Starter crops are shared: 409. */
 export async function removeCrop({ gardenId, cropId }: { gardenId: string; cropId: string }) {
   const db = await getDb();
-  return db.transaction(async (tx) => {
-    const row = await findVisibleCrop(tx, gardenId, cropId);
-    if (!row) throw new AppError("not_found:crop");
-    if (row.gardenId === null)
-      throw new AppError("conflict:starter_crop", "Crops on the shared list cannot be removed.");
-    const [{ used } = { used: 0 }] = await tx
-      .select({ used: count() })
-      .from(plantings)
-      .where(and(eq(plantings.gardenId, gardenId), eq(plantings.cropId, cropId)));
-    if (used > 0)
-      throw new AppError(
-        "conflict:crop_planted",
-        `${row.name ?? "This crop"} is used by ${used} planting${used === 1 ? "" : "s"}; it stays while they do.`,
-      );
-    await tx.delete(crops).where(and(eq(crops.gardenId, gardenId), eq(crops.id, cropId)));
-    await dropRule(tx, gardenId, row.feedingRuleId);
-    await invalidateGardenPlan(tx, { gardenId });
-    return { removed: true as const };
-  });
+  return thenInvalidatePlan(
+    gardenId,
+    db.transaction(async (tx) => {
+      const row = await findVisibleCrop(tx, gardenId, cropId);
+      if (!row) throw new AppError("not_found:crop");
+      if (row.gardenId === null)
+        throw new AppError("conflict:starter_crop", "Crops on the shared list cannot be removed.");
+      const [{ used } = { used: 0 }] = await tx
+        .select({ used: count() })
+        .from(plantings)
+        .where(and(eq(plantings.gardenId, gardenId), eq(plantings.cropId, cropId)));
+      if (used > 0)
+        throw new AppError(
+          "conflict:crop_planted",
+          `${row.name ?? "This crop"} is used by ${used} planting${used === 1 ? "" : "s"}; it stays while they do.`,
+        );
+      await tx.delete(crops).where(and(eq(crops.gardenId, gardenId), eq(crops.id, cropId)));
+      await dropRule(tx, gardenId, row.feedingRuleId);
+      return { removed: true as const };
+    }),
+  );
 }

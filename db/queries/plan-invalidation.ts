@@ -1,11 +1,18 @@
 import "server-only";
-import type { DbOrTx } from "@/db";
 
 /**
- * The one call site every bed, crop and planting write goes through to tell
- * the garden's plan it is stale. TODO(balance-api): the per-garden plan cache
- * and its version bump live on the balance-api branch; when it merges, call its
- * bump here (inside the caller's transaction). Until then there is no cache to
- * invalidate: the balance is computed fresh on every read.
+ * The one place bed, crop and planting writes tell the garden's plan it is
+ * stale, AFTER their transaction commits (bumping inside it would let a
+ * concurrent reader cache the old plan under the new version).
+ * TODO(balance-api): when db/queries/garden-inputs-version.ts merges, call its
+ * markGardenInputsChanged(gardenId) here. Until then there is no plan cache:
+ * every Balance read computes afresh.
  */
-export async function invalidateGardenPlan(_tx: DbOrTx, _where: { gardenId: string }): Promise<void> {}
+export function markPlanInputsChanged(_gardenId: string): void {}
+
+/** Awaits a write's transaction, then marks the garden's plan inputs changed. */
+export async function thenInvalidatePlan<T>(gardenId: string, committed: Promise<T>): Promise<T> {
+  const result = await committed;
+  markPlanInputsChanged(gardenId);
+  return result;
+}

@@ -21,7 +21,7 @@ import {
 import { si } from "@/lib/validation/scenario-quantity";
 import { adoptCrop } from "./crops";
 import { dropRule, ruleFromRow, writeRule } from "./feeding-rules-write";
-import { invalidateGardenPlan } from "./plan-invalidation";
+import { thenInvalidatePlan } from "./plan-invalidation";
 
 export interface PlantingDto {
   id: string;
@@ -53,11 +53,15 @@ async function toDtos(tx: DbOrTx, gardenId: string, rows: (typeof plantings.$inf
   const cropRows = await tx
     .select()
     .from(crops)
-    .where(and(eq(crops.gardenId, gardenId), inArray(crops.id, [...new Set(rows.map((r) => r.cropId))])));
+    .where(
+      and(eq(crops.gardenId, gardenId), inArray(crops.id, [...new Set(rows.map((r) => r.cropId))])),
+    );
   const bedRows = await tx
     .select({ id: beds.id, name: beds.name })
     .from(beds)
-    .where(and(eq(beds.gardenId, gardenId), inArray(beds.id, [...new Set(rows.map((r) => r.bedId))])));
+    .where(
+      and(eq(beds.gardenId, gardenId), inArray(beds.id, [...new Set(rows.map((r) => r.bedId))])),
+    );
   const ruleIds = [
     ...rows.map((r) => r.feedingRuleId),
     ...cropRows.map((c) => c.feedingRuleId),
@@ -99,7 +103,10 @@ async function toDtos(tx: DbOrTx, gardenId: string, rows: (typeof plantings.$inf
 
 /** Today in the garden's time zone, as a floating date. */
 async function gardenToday(tx: DbOrTx, gardenId: string): Promise<string> {
-  const [g] = await tx.select({ tz: gardens.timeZone }).from(gardens).where(eq(gardens.id, gardenId));
+  const [g] = await tx
+    .select({ tz: gardens.timeZone })
+    .from(gardens)
+    .where(eq(gardens.id, gardenId));
   return new Intl.DateTimeFormat("en-CA", { timeZone: g?.tz ?? "UTC" }).format(new Date());
 }
 
@@ -116,7 +123,9 @@ export async function listPlantings({
     eq(plantings.gardenId, gardenId),
     query.bedId ? eq(plantings.bedId, query.bedId) : undefined,
     query.cropId ? eq(plantings.cropId, query.cropId) : undefined,
-    query.active === true ? or(isNull(plantings.endedOn), gte(plantings.endedOn, today!)) : undefined,
+    query.active === true
+      ? or(isNull(plantings.endedOn), gte(plantings.endedOn, today!))
+      : undefined,
   );
   let rows = await db
     .select()
@@ -126,7 +135,10 @@ export async function listPlantings({
     .limit(query.limit)
     .offset(query.offset);
   if (query.active === false) rows = rows.filter((r) => r.endedOn !== null && r.endedOn < today!);
-  const [{ total } = { total: 0 }] = await db.select({ total: count() }).from(plantings).where(where);
+  const [{ total } = { total: 0 }] = await db
+    .select({ total: count() })
+    .from(plantings)
+    .where(where);
   return { plantings: await toDtos(db, gardenId, rows), total };
 }
 
@@ -168,56 +180,66 @@ export async function createPlantings({
   countField?: string;
 }): Promise<{ plantings: PlantingDto[]; warnings: PlantingWarning[] }> {
   const db = await getDb();
-  return db.transaction(async (tx) => {
-    const warnings: PlantingWarning[] = [];
-    const rows: (typeof plantings.$inferSelect)[] = [];
-    const byBed = new Map<string, { count: number; spacingM: number | null }[]>();
-    for (const input of inputs) {
-      const [bed] = await tx
-        .select({ id: beds.id, kind: beds.kind, lengthM: beds.lengthM, widthM: beds.widthM })
-        .from(beds)
-        .where(and(eq(beds.gardenId, gardenId), eq(beds.id, input.bedId)));
-      if (!bed) throw fieldError("bedId", "No such bed or container in this garden.");
-      const crop = await adoptCrop(tx, gardenId, input.cropId);
-      if (!crop) throw fieldError("cropId", "No such crop in this garden.");
-      const facts = cropFacts(crop.name);
-      if (bed.kind === "bed") {
-        const list = byBed.get(bed.id) ?? [];
-        list.push({ count: input.plantCount, spacingM: facts.spacingM });
-        byBed.set(bed.id, list);
-        const ratio = crowding(input.area ? si(input.area) : bed.lengthM! * bed.widthM!, list);
-        if (ratio !== null && ratio > CROWDED_REFUSE_RATIO && !input.confirmCrowded)
-          throw fieldError(
-            countField,
-            `${input.plantCount.toLocaleString("en-US")} ${crop.name} need about ${Math.round(ratio)} times this bed's area at the usual spacing (common practice). Check the count, or confirm to plant them anyway.`,
-          );
-        if (ratio !== null && ratio > 1)
-          warnings.push({ field: countField, message: `${crop.name}: closer than the usual spacing.` });
-      }
-      const ruleId = await writeRule(tx, gardenId, null, input.rule ? ruleInput(input.rule) : null);
-      const [row] = await tx
-        .insert(plantings)
-        .values({
+  return thenInvalidatePlan(
+    gardenId,
+    db.transaction(async (tx) => {
+      const warnings: PlantingWarning[] = [];
+      const rows: (typeof plantings.$inferSelect)[] = [];
+      const byBed = new Map<string, { count: number; spacingM: number | null }[]>();
+      for (const input of inputs) {
+        const [bed] = await tx
+          .select({ id: beds.id, kind: beds.kind, lengthM: beds.lengthM, widthM: beds.widthM })
+          .from(beds)
+          .where(and(eq(beds.gardenId, gardenId), eq(beds.id, input.bedId)));
+        if (!bed) throw fieldError("bedId", "No such bed or container in this garden.");
+        const crop = await adoptCrop(tx, gardenId, input.cropId);
+        if (!crop) throw fieldError("cropId", "No such crop in this garden.");
+        const facts = cropFacts(crop.name);
+        if (bed.kind === "bed") {
+          const list = byBed.get(bed.id) ?? [];
+          list.push({ count: input.plantCount, spacingM: facts.spacingM });
+          byBed.set(bed.id, list);
+          const ratio = crowding(input.area ? si(input.area) : bed.lengthM! * bed.widthM!, list);
+          if (ratio !== null && ratio > CROWDED_REFUSE_RATIO && !input.confirmCrowded)
+            throw fieldError(
+              countField,
+              `${input.plantCount.toLocaleString("en-US")} ${crop.name} need about ${Math.round(ratio)} times this bed's area at the usual spacing (common practice). Check the count, or confirm to plant them anyway.`,
+            );
+          if (ratio !== null && ratio > 1)
+            warnings.push({
+              field: countField,
+              message: `${crop.name}: closer than the usual spacing.`,
+            });
+        }
+        const ruleId = await writeRule(
+          tx,
           gardenId,
-          bedId: bed.id,
-          cropId: crop.id,
-          plantCount: input.plantCount,
-          areaM2: input.area ? si(input.area) : null,
-          plantedOn: input.plantedOn,
-          expectedHarvestOn:
-            input.expectedHarvestOn ??
-            (facts.daysToHarvest ? addDays(input.plantedOn, facts.daysToHarvest) : null),
-          endedOn: input.endedOn ?? null,
-          priority: PRIORITY_RANK[input.priority],
-          feedingRuleId: ruleId,
-          notes: input.notes ?? null,
-        })
-        .returning();
-      rows.push(row!);
-    }
-    await invalidateGardenPlan(tx, { gardenId });
-    return { plantings: await toDtos(tx, gardenId, rows), warnings };
-  });
+          null,
+          input.rule ? ruleInput(input.rule) : null,
+        );
+        const [row] = await tx
+          .insert(plantings)
+          .values({
+            gardenId,
+            bedId: bed.id,
+            cropId: crop.id,
+            plantCount: input.plantCount,
+            areaM2: input.area ? si(input.area) : null,
+            plantedOn: input.plantedOn,
+            expectedHarvestOn:
+              input.expectedHarvestOn ??
+              (facts.daysToHarvest ? addDays(input.plantedOn, facts.daysToHarvest) : null),
+            endedOn: input.endedOn ?? null,
+            priority: PRIORITY_RANK[input.priority],
+            feedingRuleId: ruleId,
+            notes: input.notes ?? null,
+          })
+          .returning();
+        rows.push(row!);
+      }
+      return { plantings: await toDtos(tx, gardenId, rows), warnings };
+    }),
+  );
 }
 
 /** Applies a checked, merged planting (the handler merges a PATCH onto the current values). */
@@ -234,40 +256,43 @@ export async function updatePlanting({
   ruleChange: CreatePlantingInput["rule"] | undefined;
 }): Promise<PlantingDto | null> {
   const db = await getDb();
-  return db.transaction(async (tx) => {
-    const [current] = await tx
-      .select()
-      .from(plantings)
-      .where(and(eq(plantings.gardenId, gardenId), eq(plantings.id, plantingId)));
-    if (!current) return null;
-    const [bed] = await tx
-      .select({ id: beds.id })
-      .from(beds)
-      .where(and(eq(beds.gardenId, gardenId), eq(beds.id, input.bedId)));
-    if (!bed) throw fieldError("bedId", "No such bed or container in this garden.");
-    const crop = await adoptCrop(tx, gardenId, input.cropId);
-    if (!crop) throw fieldError("cropId", "No such crop in this garden.");
-    const next = ruleChange === undefined ? undefined : ruleChange === null ? null : ruleInput(ruleChange);
-    const ruleId = await writeRule(tx, gardenId, current.feedingRuleId, next);
-    await tx
-      .update(plantings)
-      .set({
-        bedId: bed.id,
-        cropId: crop.id,
-        plantCount: input.plantCount,
-        areaM2: input.area ? si(input.area) : null,
-        plantedOn: input.plantedOn,
-        expectedHarvestOn: input.expectedHarvestOn ?? null,
-        endedOn: input.endedOn ?? null,
-        priority: PRIORITY_RANK[input.priority],
-        feedingRuleId: ruleId,
-        notes: input.notes ?? null,
-      })
-      .where(and(eq(plantings.gardenId, gardenId), eq(plantings.id, plantingId)));
-    if (next === null) await dropRule(tx, gardenId, current.feedingRuleId);
-    await invalidateGardenPlan(tx, { gardenId });
-    return getPlantingById({ gardenId, plantingId, tx });
-  });
+  return thenInvalidatePlan(
+    gardenId,
+    db.transaction(async (tx) => {
+      const [current] = await tx
+        .select()
+        .from(plantings)
+        .where(and(eq(plantings.gardenId, gardenId), eq(plantings.id, plantingId)));
+      if (!current) return null;
+      const [bed] = await tx
+        .select({ id: beds.id })
+        .from(beds)
+        .where(and(eq(beds.gardenId, gardenId), eq(beds.id, input.bedId)));
+      if (!bed) throw fieldError("bedId", "No such bed or container in this garden.");
+      const crop = await adoptCrop(tx, gardenId, input.cropId);
+      if (!crop) throw fieldError("cropId", "No such crop in this garden.");
+      const next =
+        ruleChange === undefined ? undefined : ruleChange === null ? null : ruleInput(ruleChange);
+      const ruleId = await writeRule(tx, gardenId, current.feedingRuleId, next);
+      await tx
+        .update(plantings)
+        .set({
+          bedId: bed.id,
+          cropId: crop.id,
+          plantCount: input.plantCount,
+          areaM2: input.area ? si(input.area) : null,
+          plantedOn: input.plantedOn,
+          expectedHarvestOn: input.expectedHarvestOn ?? null,
+          endedOn: input.endedOn ?? null,
+          priority: PRIORITY_RANK[input.priority],
+          feedingRuleId: ruleId,
+          notes: input.notes ?? null,
+        })
+        .where(and(eq(plantings.gardenId, gardenId), eq(plantings.id, plantingId)));
+      if (next === null) await dropRule(tx, gardenId, current.feedingRuleId);
+      return getPlantingById({ gardenId, plantingId, tx });
+    }),
+  );
 }
 
 /**
@@ -282,31 +307,34 @@ export async function removePlanting({
   plantingId: string;
 }): Promise<{ removed: true } | { endedOn: string }> {
   const db = await getDb();
-  return db.transaction(async (tx) => {
-    const [current] = await tx
-      .select()
-      .from(plantings)
-      .where(and(eq(plantings.gardenId, gardenId), eq(plantings.id, plantingId)));
-    if (!current) throw new AppError("not_found:planting");
-    const [{ logged } = { logged: 0 }] = await tx
-      .select({ logged: count() })
-      .from(applications)
-      .where(and(eq(applications.gardenId, gardenId), eq(applications.plantingId, plantingId)));
-    if (logged > 0) {
-      const today = await gardenToday(tx, gardenId);
-      const endedOn = today < current.plantedOn ? current.plantedOn : today;
-      if (current.endedOn !== null && current.endedOn <= endedOn)
-        throw new AppError("conflict:planting_ended", "This planting has already ended.");
-      await tx
-        .update(plantings)
-        .set({ endedOn })
+  return thenInvalidatePlan(
+    gardenId,
+    db.transaction(async (tx) => {
+      const [current] = await tx
+        .select()
+        .from(plantings)
         .where(and(eq(plantings.gardenId, gardenId), eq(plantings.id, plantingId)));
-      await invalidateGardenPlan(tx, { gardenId });
-      return { endedOn };
-    }
-    await tx.delete(plantings).where(and(eq(plantings.gardenId, gardenId), eq(plantings.id, plantingId)));
-    await dropRule(tx, gardenId, current.feedingRuleId);
-    await invalidateGardenPlan(tx, { gardenId });
-    return { removed: true as const };
-  });
+      if (!current) throw new AppError("not_found:planting");
+      const [{ logged } = { logged: 0 }] = await tx
+        .select({ logged: count() })
+        .from(applications)
+        .where(and(eq(applications.gardenId, gardenId), eq(applications.plantingId, plantingId)));
+      if (logged > 0) {
+        const today = await gardenToday(tx, gardenId);
+        const endedOn = today < current.plantedOn ? current.plantedOn : today;
+        if (current.endedOn !== null && current.endedOn <= endedOn)
+          throw new AppError("conflict:planting_ended", "This planting has already ended.");
+        await tx
+          .update(plantings)
+          .set({ endedOn })
+          .where(and(eq(plantings.gardenId, gardenId), eq(plantings.id, plantingId)));
+        return { endedOn };
+      }
+      await tx
+        .delete(plantings)
+        .where(and(eq(plantings.gardenId, gardenId), eq(plantings.id, plantingId)));
+      await dropRule(tx, gardenId, current.feedingRuleId);
+      return { removed: true as const };
+    }),
+  );
 }

@@ -106,17 +106,15 @@ export const cropList: CropListEntry[] = [
       ["Cosmos", "light", 70, 12],
       ["Sweet pea", "medium", 75, 6],
     ] as const
-  ).map(
-    ([name, feederClass, daysToHarvest, spacingIn]): CropListEntry => ({
-      name,
-      category: "flower",
-      feederClass,
-      edible: false,
-      edibleTouchesSoil: false,
-      daysToHarvest,
-      spacingIn,
-    }),
-  ),
+  ).map(([name, feederClass, daysToHarvest, spacingIn]): CropListEntry => ({
+    name,
+    category: "flower",
+    feederClass,
+    edible: false,
+    edibleTouchesSoil: false,
+    daysToHarvest,
+    spacingIn,
+  })),
 ];
 
 const byName = new Map<string, CropListEntry>();

@@ -35,7 +35,8 @@ export function parseQuickEntry(text: string): QuickEntryResult {
       parts.push({ count, name });
     }
   }
-  if (!parts.length && !errors.length) errors.push('Type what you planted, e.g. "6 tomato, 4 pepper".');
+  if (!parts.length && !errors.length)
+    errors.push('Type what you planted, e.g. "6 tomato, 4 pepper".');
   return { parts, errors };
 }
 
@@ -53,11 +54,16 @@ function singular(word: string): string[] {
  * first, then the crop list's aliases ("zucchini" → Squash), then a plural
  * ("tomatoes" → Tomato). undefined when nothing matches.
  */
-export function matchCrop<C extends { name: string | null }>(name: string, crops: C[]): C | undefined {
+export function matchCrop<C extends { name: string | null }>(
+  name: string,
+  crops: C[],
+): C | undefined {
   const byName = new Map<string, C>();
-  for (const c of crops) if (c.name && !byName.has(c.name.toLowerCase())) byName.set(c.name.toLowerCase(), c);
+  for (const c of crops)
+    if (c.name && !byName.has(c.name.toLowerCase())) byName.set(c.name.toLowerCase(), c);
   for (const candidate of singular(name.trim())) {
-    const hit = byName.get(candidate) ?? byName.get(findListedCrop(candidate)?.name.toLowerCase() ?? "");
+    const hit =
+      byName.get(candidate) ?? byName.get(findListedCrop(candidate)?.name.toLowerCase() ?? "");
     if (hit) return hit;
   }
   return undefined;

@@ -64,7 +64,8 @@ export function buildRrule(form: RecurrenceForm): string {
   if (form.every > 1) parts.push(`INTERVAL=${form.every}`);
   if (form.unit === "weeks" && form.weekday) parts.push(`BYDAY=${form.weekday}`);
   if (form.unit === "months" && form.monthDay) parts.push(`BYMONTHDAY=${form.monthDay}`);
-  if (form.months?.length) parts.push(`BYMONTH=${[...form.months].sort((a, b) => a - b).join(",")}`);
+  if (form.months?.length)
+    parts.push(`BYMONTH=${[...form.months].sort((a, b) => a - b).join(",")}`);
   if (form.until) parts.push(`UNTIL=${form.until.replaceAll("-", "")}`);
   return parts.join(";");
 }
@@ -72,8 +73,7 @@ export function buildRrule(form: RecurrenceForm): string {
 function ordinal(n: number): string {
   if (n < 0) return n === -1 ? "last day" : `${ordinal(-n)} from last`;
   const rem100 = n % 100;
-  const suffix =
-    rem100 >= 11 && rem100 <= 13 ? "th" : (["th", "st", "nd", "rd"][n % 10] ?? "th");
+  const suffix = rem100 >= 11 && rem100 <= 13 ? "th" : (["th", "st", "nd", "rd"][n % 10] ?? "th");
   return `${n}${suffix}`;
 }
 

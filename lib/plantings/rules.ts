@@ -35,7 +35,10 @@ export function effectiveRule(
 const INCH_M = 0.0254; // NIST Handbook 44 App. C: 1 in = 2.54 cm exactly
 
 /** Spacing and days to harvest from the crop list (common practice, from memory); null for a garden's own crop. */
-export function cropFacts(name: string | null): { spacingM: number | null; daysToHarvest: number | null } {
+export function cropFacts(name: string | null): {
+  spacingM: number | null;
+  daysToHarvest: number | null;
+} {
   const listed = findListedCrop(name);
   return {
     spacingM: listed ? listed.spacingIn * INCH_M : null,

@@ -6,11 +6,7 @@ import * as crops from "@/app/api/gardens/[gardenId]/crops/route";
 import * as planting from "@/app/api/gardens/[gardenId]/plantings/[plantingId]/route";
 import * as plantings from "@/app/api/gardens/[gardenId]/plantings/route";
 import { loadGardenInputs } from "@/db/queries/garden-inputs";
-import {
-  makeBed,
-  makeOwnCrop,
-  starterCropId,
-} from "@/tests/support/integration/beds-fixtures";
+import { makeBed, makeOwnCrop, starterCropId } from "@/tests/support/integration/beds-fixtures";
 import {
   call,
   closeHarness,
@@ -61,12 +57,39 @@ describe("beds", () => {
   });
 
   it.each([
-    [{ name: "Zero", kind: "bed", length: { value: 0, unit: "ft" }, width: { value: 4, unit: "ft" } }, "length.value"],
-    [{ name: "Neg", kind: "bed", length: { value: 8, unit: "ft" }, width: { value: -4, unit: "ft" } }, "width.value"],
+    [
+      {
+        name: "Zero",
+        kind: "bed",
+        length: { value: 0, unit: "ft" },
+        width: { value: 4, unit: "ft" },
+      },
+      "length.value",
+    ],
+    [
+      {
+        name: "Neg",
+        kind: "bed",
+        length: { value: 8, unit: "ft" },
+        width: { value: -4, unit: "ft" },
+      },
+      "width.value",
+    ],
     [{ name: "No width", kind: "bed", length: { value: 8, unit: "ft" } }, "width"],
     [{ name: "Pot", kind: "container" }, "volume"],
-    [{ name: "Mixed", kind: "bed", length: { value: 8, unit: "gal" }, width: { value: 4, unit: "ft" } }, "length.unit"],
-    [{ name: "", kind: "bed", length: { value: 8, unit: "ft" }, width: { value: 4, unit: "ft" } }, "name"],
+    [
+      {
+        name: "Mixed",
+        kind: "bed",
+        length: { value: 8, unit: "gal" },
+        width: { value: 4, unit: "ft" },
+      },
+      "length.unit",
+    ],
+    [
+      { name: "", kind: "bed", length: { value: 8, unit: "ft" }, width: { value: 4, unit: "ft" } },
+      "name",
+    ],
   ])("refuses bad sizes with a 400 naming the field (%#)", async (body, field) => {
     const res = await call(beds.POST, { url: url("beds"), params: params(), cookie: grower, body });
     expect(res.status).toBe(400);
@@ -74,10 +97,18 @@ describe("beds", () => {
   });
 
   it("bounds the page size and filters by kind", async () => {
-    const tooMany = await call(beds.GET, { url: url("beds?limit=5000"), params: params(), cookie: grower });
+    const tooMany = await call(beds.GET, {
+      url: url("beds?limit=5000"),
+      params: params(),
+      cookie: grower,
+    });
     expect(tooMany.status).toBe(400);
     expect(tooMany.json.error.fields).toHaveProperty("limit");
-    const pots = await call(beds.GET, { url: url("beds?kind=container"), params: params(), cookie: grower });
+    const pots = await call(beds.GET, {
+      url: url("beds?kind=container"),
+      params: params(),
+      cookie: grower,
+    });
     expect(pots.status).toBe(200);
     expect(pots.json.beds.every((b: { kind: string }) => b.kind === "container")).toBe(true);
   });
@@ -105,7 +136,11 @@ describe("plantings", () => {
       body: { bedId: b.id, plantedOn: "2026-05-01", quick: "6 tomatoes, 4 Pepper" },
     });
     expect(res.status).toBe(201);
-    const made = res.json.plantings as { cropName: string; plantCount: number; ruleSource: string }[];
+    const made = res.json.plantings as {
+      cropName: string;
+      plantCount: number;
+      ruleSource: string;
+    }[];
     expect(made.map((p) => [p.cropName, p.plantCount])).toEqual([
       ["Tomato", 6],
       ["Pepper", 4],
@@ -128,7 +163,11 @@ describe("plantings", () => {
     });
     expect(res.status).toBe(400);
     expect(res.json.error.fields.quick).toContain("dragonfruit");
-    const list = await call(plantings.GET, { url: url(`plantings?bedId=${b.id}`), params: params(), cookie: grower });
+    const list = await call(plantings.GET, {
+      url: url(`plantings?bedId=${b.id}`),
+      params: params(),
+      cookie: grower,
+    });
     expect(list.json.plantings).toEqual([]);
   });
 
@@ -137,7 +176,12 @@ describe("plantings", () => {
       url: url("beds"),
       params: params(),
       cookie: grower,
-      body: { name: "Tiny", kind: "bed", length: { value: 2, unit: "ft" }, width: { value: 1, unit: "ft" } },
+      body: {
+        name: "Tiny",
+        kind: "bed",
+        length: { value: 2, unit: "ft" },
+        width: { value: 1, unit: "ft" },
+      },
     });
     const body = {
       bedId: small.json.bed.id,
@@ -145,7 +189,12 @@ describe("plantings", () => {
       plantCount: 10_000,
       plantedOn: "2026-05-01",
     };
-    const res = await call(plantings.POST, { url: url("plantings"), params: params(), cookie: grower, body });
+    const res = await call(plantings.POST, {
+      url: url("plantings"),
+      params: params(),
+      cookie: grower,
+      body,
+    });
     expect(res.status).toBe(400);
     expect(res.json.error.fields.plantCount).toMatch(/spacing/);
     const confirmed = await call(plantings.POST, {
@@ -167,7 +216,12 @@ describe("plantings", () => {
       plantedOn: "2026-05-01",
       endedOn: "2026-04-01",
     };
-    const res = await call(plantings.POST, { url: url("plantings"), params: params(), cookie: grower, body });
+    const res = await call(plantings.POST, {
+      url: url("plantings"),
+      params: params(),
+      cookie: grower,
+      body,
+    });
     expect(res.status).toBe(400);
     expect(res.json.error.fields).toHaveProperty("endedOn");
     const ok = await call(plantings.POST, {
@@ -203,7 +257,12 @@ describe("plantings", () => {
       url: url("plantings"),
       params: params(),
       cookie: grower,
-      body: { bedId: theirBed.id, cropId: await starterCropId("Tomato"), plantCount: 1, plantedOn: "2026-05-01" },
+      body: {
+        bedId: theirBed.id,
+        cropId: await starterCropId("Tomato"),
+        plantCount: 1,
+        plantedOn: "2026-05-01",
+      },
     });
     expect(res2.status).toBe(400);
     expect(res2.json.error.fields).toHaveProperty("bedId");

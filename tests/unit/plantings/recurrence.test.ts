@@ -15,13 +15,18 @@ describe("normalizeRrule", () => {
     expect(normalizeRrule(" rrule:freq=weekly;byday=mo ")).toBe("FREQ=WEEKLY;BYDAY=MO");
     expect(rruleProblem("freq=weekly;byday=mo")).toBeNull();
     // 2026-05-04 is a Monday (calendar); every Monday from a Friday start.
-    expect(nextDates("freq=weekly;byday=mo", "2026-05-01", 2)).toEqual(["2026-05-04", "2026-05-11"]);
+    expect(nextDates("freq=weekly;byday=mo", "2026-05-01", 2)).toEqual([
+      "2026-05-04",
+      "2026-05-11",
+    ]);
   });
 });
 
 describe("buildRrule", () => {
   it("writes the form as an RRULE", () => {
-    expect(buildRrule({ every: 2, unit: "weeks", weekday: "SA" })).toBe("FREQ=WEEKLY;INTERVAL=2;BYDAY=SA");
+    expect(buildRrule({ every: 2, unit: "weeks", weekday: "SA" })).toBe(
+      "FREQ=WEEKLY;INTERVAL=2;BYDAY=SA",
+    );
     expect(buildRrule({ every: 1, unit: "months", monthDay: 15, until: "2026-09-30" })).toBe(
       "FREQ=MONTHLY;BYMONTHDAY=15;UNTIL=20260930",
     );
@@ -69,7 +74,9 @@ describe("whyNoDates", () => {
     expect(why).toMatch(/June never has a 31st day/);
   });
   it("names an UNTIL before the first day", () => {
-    expect(whyNoDates("FREQ=WEEKLY;UNTIL=20260101", "2026-05-01")).toMatch(/UNTIL 1 Jan 2026 is before/);
+    expect(whyNoDates("FREQ=WEEKLY;UNTIL=20260101", "2026-05-01")).toMatch(
+      /UNTIL 1 Jan 2026 is before/,
+    );
   });
   it("is null when the rule gives dates", () => {
     expect(whyNoDates("FREQ=MONTHLY", "2026-05-01")).toBeNull();

@@ -34,7 +34,8 @@ async function quickInputs(gardenId: string, body: unknown): Promise<CreatePlant
   const inputs: CreatePlantingInput[] = [];
   for (const part of parts) {
     const crop = matchCrop(part.name, crops);
-    if (!crop) errors.push(`"${part.name}" is not on this garden's crop list: add it as a crop first.`);
+    if (!crop)
+      errors.push(`"${part.name}" is not on this garden's crop list: add it as a crop first.`);
     else
       inputs.push({
         bedId: quick.bedId,

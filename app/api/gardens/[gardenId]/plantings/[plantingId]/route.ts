@@ -41,7 +41,12 @@ export const PATCH = route<Params>(async (request, { params }) => {
   // Dates are checked on the merged planting: moving the end alone before the start is refused.
   const merged = createPlantingSchema.safeParse({ ...stored, ...rest });
   if (!merged.success) throw validationError(merged.error);
-  const planting = await updatePlanting({ gardenId, plantingId, input: merged.data, ruleChange: rule });
+  const planting = await updatePlanting({
+    gardenId,
+    plantingId,
+    input: merged.data,
+    ruleChange: rule,
+  });
   if (!planting) throw new AppError("not_found:planting");
   return Response.json({ planting });
 });
