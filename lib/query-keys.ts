@@ -4,5 +4,11 @@ export const queryKeys = {
   garden: (gardenId: string) => ["gardens", gardenId] as const,
   members: (gardenId: string) => ["gardens", gardenId, "members"] as const,
   invitations: (gardenId: string) => ["gardens", gardenId, "invitations"] as const,
+  /** Prefix of every Balance query of the garden: bed, crop and planting edits invalidate it. */
+  balance: (gardenId: string) => ["gardens", gardenId, "balance"] as const,
+  beds: (gardenId: string) => ["gardens", gardenId, "beds"] as const,
+  bed: (gardenId: string, bedId: string) => ["gardens", gardenId, "beds", bedId] as const,
+  plantings: (gardenId: string) => ["gardens", gardenId, "plantings"] as const,
+  crops: (gardenId: string) => ["gardens", gardenId, "crops"] as const,
   outbox: () => ["dev", "outbox"] as const,
 };

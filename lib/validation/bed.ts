@@ -14,15 +14,30 @@ const MAX_SIDE_M = 100;
 const MAX_DEPTH_M = 3;
 const MAX_CONTAINER_L = 5_000;
 
+/**
+ * An optional size. A form's blank number field arrives as { value: NaN } (or
+ * undefined): that means "not given", the same as leaving it out of the JSON.
+ */
+function optionalSize(kind: "length" | "volume", maxSi: number) {
+  return z.preprocess((v) => {
+    if (v && typeof v === "object" && "value" in v) {
+      const value = (v as { value: unknown }).value;
+      if (value === undefined || value === "" || (typeof value === "number" && Number.isNaN(value)))
+        return null;
+    }
+    return v;
+  }, quantitySchema(kind, maxSi).nullish());
+}
+
 const bedFields = z.object({
   name: z.string().trim().min(1, "Give it a name.").max(80, "Use at most 80 characters."),
   kind: bedKindSchema,
   indoors: z.boolean().default(false),
-  length: quantitySchema("length", MAX_SIDE_M).nullish(),
-  width: quantitySchema("length", MAX_SIDE_M).nullish(),
-  depth: quantitySchema("length", MAX_DEPTH_M).nullish(),
-  volume: quantitySchema("volume", MAX_CONTAINER_L).nullish(),
-  diameter: quantitySchema("length", MAX_DEPTH_M).nullish(),
+  length: optionalSize("length", MAX_SIDE_M),
+  width: optionalSize("length", MAX_SIDE_M),
+  depth: optionalSize("length", MAX_DEPTH_M),
+  volume: optionalSize("volume", MAX_CONTAINER_L),
+  diameter: optionalSize("length", MAX_DEPTH_M),
   notes: z.string().trim().max(1000, "Use at most 1,000 characters.").nullish(),
 });
 

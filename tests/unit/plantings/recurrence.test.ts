@@ -82,3 +82,49 @@ describe("whyNoDates", () => {
     expect(whyNoDates("FREQ=MONTHLY", "2026-05-01")).toBeNull();
   });
 });
+
+describe("describeRule", () => {
+  it("reads the heavy-feeder default as 1 cup castings per plant monthly (PRODUCT.md, common practice)", async () => {
+    const { describeRule } = await import("@/lib/plantings/rule-words");
+    const { defaultRuleInput } = await import("@/lib/plantings/rules");
+    expect(describeRule(defaultRuleInput("heavy"), "us")).toBe(
+      "1 cup castings per plant, top-dressed, every month",
+    );
+    expect(describeRule(defaultRuleInput("light"), "us")).toBe(
+      "½ cup castings per plant, top-dressed, every 2 months",
+    );
+  });
+  it("reads tea 100 mL per plant every two weeks; a ¼ in top-dressing as a depth", async () => {
+    const { describeRule } = await import("@/lib/plantings/rule-words");
+    const base = { dilutionWaterParts: null, teaCastingsPerWater: null };
+    expect(
+      describeRule(
+        {
+          ...base,
+          material: "tea",
+          method: "drench",
+          basis: "per-plant",
+          measure: "volume",
+          amount: 0.1,
+          recurrence: "FREQ=WEEKLY;INTERVAL=2",
+        },
+        "metric",
+      ),
+    ).toBe("100 mL worm tea per plant, as a soil drench, every 2 weeks");
+    // ¼ in = 6.35 mm (NIST HB 44: 1 in = 25.4 mm) → 6.35 L per m².
+    expect(
+      describeRule(
+        {
+          ...base,
+          material: "castings",
+          method: "top-dress",
+          basis: "per-area",
+          measure: "volume",
+          amount: 6.35,
+          recurrence: "FREQ=DAILY;COUNT=1",
+        },
+        "us",
+      ),
+    ).toBe("castings ¼ in deep, top-dressed, once, on the planting's first day");
+  });
+});

@@ -1,0 +1,83 @@
+import "server-only";
+import { loadGardenInputs } from "@/db/queries/garden-inputs";
+import { computePlan, EngineInputError } from "@/lib/engine";
+
+// A bed's next 12 months of demand per planting, with coverage, from the same
+// engine call the Balance makes (loadGardenInputs → computePlan).
+// TODO(balance-api): read db/queries/garden-plan.ts getGardenBalance once it
+// merges, so this page shares the Balance's cached plan instead of computing its own.
+
+export interface BedDemandMonth {
+  month: string;
+  /** As applied: kg castings, L of diluted leachate and tea. */
+  castingsKg: number;
+  liquidL: number;
+  /** allocated ÷ need over the month's feedings, 0–100; null when nothing is due. */
+  coveragePct: number | null;
+}
+
+export interface BedDemandView {
+  months: string[];
+  byPlanting: Record<string, BedDemandMonth[]>;
+  /** The engine's reason when it could not plan (bad stored rule, say). */
+  problem: string | null;
+}
+
+export function todayIn(timeZone: string): string {
+  return new Intl.DateTimeFormat("en-CA", { timeZone }).format(new Date());
+}
+
+export async function getBedDemand({
+  gardenId,
+  bedId,
+  timeZone,
+}: {
+  gardenId: string;
+  bedId: string;
+  timeZone: string;
+}): Promise<BedDemandView> {
+  const asOf = todayIn(timeZone);
+  const start = asOf.slice(0, 7);
+  const months = Array.from({ length: 12 }, (_, i) => {
+    const d = new Date(Date.UTC(Number(start.slice(0, 4)), Number(start.slice(5, 7)) - 1 + i, 1));
+    return d.toISOString().slice(0, 7);
+  });
+  let feedings;
+  try {
+    const inputs = await loadGardenInputs({ gardenId, asOf });
+    feedings = computePlan(inputs, { from: start, months: 12, suggestions: false }).feedings;
+  } catch (e) {
+    if (e instanceof EngineInputError) return { months, byPlanting: {}, problem: e.message };
+    throw e;
+  }
+  const acc = new Map<string, { castingsKg: number; liquidL: number; need: number; got: number }>();
+  for (const f of feedings) {
+    if (f.bedId !== bedId) continue;
+    const key = `${f.plantingId}|${f.date.slice(0, 7)}`;
+    const a = acc.get(key) ?? { castingsKg: 0, liquidL: 0, need: 0, got: 0 };
+    if (f.material === "castings") a.castingsKg += f.amount;
+    else a.liquidL += f.amount;
+    a.need += f.need;
+    a.got += f.allocated;
+    acc.set(key, a);
+  }
+  const byPlanting: Record<string, BedDemandMonth[]> = {};
+  for (const [key, a] of acc) {
+    const [plantingId] = key.split("|") as [string];
+    byPlanting[plantingId] ??= months.map((month) => ({
+      month,
+      castingsKg: 0,
+      liquidL: 0,
+      coveragePct: null,
+    }));
+  }
+  for (const [key, a] of acc) {
+    const [plantingId, month] = key.split("|") as [string, string];
+    const row = byPlanting[plantingId]!.find((r) => r.month === month);
+    if (!row) continue;
+    row.castingsKg = a.castingsKg;
+    row.liquidL = a.liquidL;
+    row.coveragePct = a.need > 0 ? (100 * a.got) / a.need : 100;
+  }
+  return { months, byPlanting, problem: null };
+}
