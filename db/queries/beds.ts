@@ -1,11 +1,12 @@
 import "server-only";
-import { and, asc, count, eq, ilike, inArray } from "drizzle-orm";
+import { and, asc, count, eq, gt, ilike, inArray, isNotNull, isNull, or } from "drizzle-orm";
 import { getDb, type DbOrTx } from "@/db";
 import { applications, beds, feedingRules, plantings } from "@/db/schema";
 import { AppError } from "@/lib/errors";
 import type { CreateBedInput, ListBedsQuery } from "@/lib/validation/bed";
 import { si } from "@/lib/validation/scenario-quantity";
 import { thenInvalidatePlan } from "./plan-invalidation";
+import { gardenToday } from "./plantings";
 
 export interface BedDto {
   id: string;
@@ -19,6 +20,8 @@ export interface BedDto {
   areaM2: number | null;
   containerVolumeL: number | null;
   notes: string | null;
+  /** Kept for its history, out of the plan and the default list. */
+  archivedOn: string | null;
   plantingCount: number;
 }
 
@@ -32,6 +35,7 @@ const bedColumns = {
   depthM: beds.depthM,
   containerVolumeL: beds.containerVolumeL,
   notes: beds.notes,
+  archivedOn: beds.archivedOn,
 };
 
 type BedRow = Omit<BedDto, "areaM2" | "plantingCount">;
@@ -86,6 +90,7 @@ export async function listBeds({
   const db = await getDb();
   const where = and(
     eq(beds.gardenId, gardenId),
+    query.archived ? isNotNull(beds.archivedOn) : isNull(beds.archivedOn),
     query.kind ? eq(beds.kind, query.kind) : undefined,
     query.indoors === undefined ? undefined : eq(beds.indoors, query.indoors),
     query.q ? ilike(beds.name, `%${query.q.replace(/[%_\\]/g, "\\$&")}%`) : undefined,
@@ -173,11 +178,16 @@ export async function updateBed({
 
 /**
  * Removes a bed that nothing logged refers to, with its plantings and their own
- * rules. A bed whose plantings have logged applications is kept: deleting it
- * would delete the log (the foreign keys cascade). Archiving needs an
- * archived_on column (asked for in engine-requests.md); until then: 409.
+ * rules. A bed whose plantings have logged applications is archived instead:
+ * deleting it would delete the log (the foreign keys cascade).
  */
-export async function removeBed({ gardenId, bedId }: { gardenId: string; bedId: string }) {
+export async function removeBed({
+  gardenId,
+  bedId,
+}: {
+  gardenId: string;
+  bedId: string;
+}): Promise<{ removed: true } | { archivedOn: string }> {
   const db = await getDb();
   return thenInvalidatePlan(
     gardenId,
@@ -201,11 +211,32 @@ export async function removeBed({ gardenId, bedId }: { gardenId: string; bedId: 
               ),
             ),
           );
-        if (logged > 0)
-          throw new AppError(
-            "conflict:bed_logged",
-            `This bed has ${logged} logged application${logged === 1 ? "" : "s"}, so it is kept for the record. End its plantings instead.`,
-          );
+        if (logged > 0) {
+          if (bed.archivedOn)
+            throw new AppError("conflict:bed_archived", "This bed is already archived.");
+          // Archive: keep the bed and its log; end what still grows in it so the plan stops feeding it.
+          const today = await gardenToday(tx, gardenId);
+          await tx
+            .update(beds)
+            .set({ archivedOn: today })
+            .where(and(eq(beds.gardenId, gardenId), eq(beds.id, bedId)));
+          const growing = await tx
+            .select({ id: plantings.id, plantedOn: plantings.plantedOn })
+            .from(plantings)
+            .where(
+              and(
+                eq(plantings.gardenId, gardenId),
+                eq(plantings.bedId, bedId),
+                or(isNull(plantings.endedOn), gt(plantings.endedOn, today)),
+              ),
+            );
+          for (const p of growing)
+            await tx
+              .update(plantings)
+              .set({ endedOn: p.plantedOn > today ? p.plantedOn : today })
+              .where(and(eq(plantings.gardenId, gardenId), eq(plantings.id, p.id)));
+          return { archivedOn: today };
+        }
       }
       await tx.delete(beds).where(and(eq(beds.gardenId, gardenId), eq(beds.id, bedId)));
       const ruleIds = inBed.map((p) => p.ruleId).filter((id): id is string => id !== null);

@@ -9,6 +9,8 @@ import { ruleInput } from "@/lib/scenario/to-inputs";
 import type { CreateCropInput, UpdateCropInput } from "@/lib/validation/crop";
 import { dropRule, ruleFromRow, writeRule } from "./feeding-rules-write";
 import { thenInvalidatePlan } from "./plan-invalidation";
+import { gardenToday } from "./plantings";
+import { si } from "@/lib/validation/scenario-quantity";
 
 // A garden sees its own crops and the shared starter list, minus the starter
 // crops it has its own copy of (same name). Plantings always point at the
@@ -28,6 +30,8 @@ export interface CropDto {
   ruleSource: Exclude<RuleSource, "planting">;
   spacingM: number | null;
   daysToHarvest: number | null;
+  /** Kept for the plantings that use it; no longer offered for new ones. */
+  archivedOn: string | null;
 }
 
 type CropRow = typeof crops.$inferSelect;
@@ -55,11 +59,12 @@ function toDto(row: CropRow, rules: Map<string, FeedingRuleInput>): CropDto {
     rule: own,
     effectiveRule: eff.rule,
     ruleSource: eff.source === "crop" ? "crop" : "default",
-    ...cropFacts(row.name),
+    ...cropFacts(row),
+    archivedOn: row.archivedOn,
   };
 }
 
-/** Every crop the garden can plant: its own, then starter crops it has no copy of. */
+/** Every crop the garden can plant: its own (not archived), then starter crops it has no copy of. */
 export async function listVisibleCrops(tx: DbOrTx, gardenId: string): Promise<CropRow[]> {
   const rows = await tx
     .select()
@@ -69,6 +74,7 @@ export async function listVisibleCrops(tx: DbOrTx, gardenId: string): Promise<Cr
     rows.filter((c) => c.gardenId !== null && c.name).map((c) => c.name!.toLowerCase()),
   );
   return rows
+    .filter((c) => c.archivedOn === null)
     .filter((c) => c.gardenId !== null || !own.has(c.name!.toLowerCase()))
     .sort((a, b) => (a.name ?? "").localeCompare(b.name ?? "") || a.id.localeCompare(b.id));
 }
@@ -140,6 +146,7 @@ export async function adoptCrop(
       feederClass: row.feederClass,
       edible: row.edible,
       edibleTouchesSoil: row.edibleTouchesSoil,
+      ...cropFacts(row),
     })
     .returning();
   return copy!;
@@ -171,6 +178,8 @@ export async function createCrop({
           feederClass: input.feederClass,
           edible: input.edible,
           edibleTouchesSoil: input.edible ? input.edibleTouchesSoil : false,
+          daysToHarvest: input.daysToHarvest ?? null,
+          spacingM: input.spacing ? si(input.spacing) : null,
           feedingRuleId: ruleId,
         })
         .returning();
@@ -209,6 +218,10 @@ export async function updateCrop({
           feederClass: input.feederClass ?? row.feederClass,
           edible,
           edibleTouchesSoil: edible ? (input.edibleTouchesSoil ?? row.edibleTouchesSoil) : false,
+          daysToHarvest:
+            input.daysToHarvest === undefined ? row.daysToHarvest : input.daysToHarvest,
+          spacingM:
+            input.spacing === undefined ? row.spacingM : input.spacing ? si(input.spacing) : null,
           feedingRuleId: ruleId,
         })
         .where(and(eq(crops.gardenId, gardenId), eq(crops.id, row.id)))
@@ -219,8 +232,14 @@ export async function updateCrop({
   );
 }
 
-/** Removes a garden's own crop no planting uses. Starter crops are shared: 409. */
-export async function removeCrop({ gardenId, cropId }: { gardenId: string; cropId: string }) {
+/** Removes a garden's own crop no planting uses; archives one in use. Starter crops are shared: 409. */
+export async function removeCrop({
+  gardenId,
+  cropId,
+}: {
+  gardenId: string;
+  cropId: string;
+}): Promise<{ removed: true } | { archivedOn: string }> {
   const db = await getDb();
   return thenInvalidatePlan(
     gardenId,
@@ -233,11 +252,17 @@ export async function removeCrop({ gardenId, cropId }: { gardenId: string; cropI
         .select({ used: count() })
         .from(plantings)
         .where(and(eq(plantings.gardenId, gardenId), eq(plantings.cropId, cropId)));
-      if (used > 0)
-        throw new AppError(
-          "conflict:crop_planted",
-          `${row.name ?? "This crop"} is used by ${used} planting${used === 1 ? "" : "s"}; it stays while they do.`,
-        );
+      if (used > 0) {
+        // Plantings still point at it: archive, so it leaves the list and their history stays whole.
+        if (row.archivedOn)
+          throw new AppError("conflict:crop_archived", "This crop is already archived.");
+        const today = await gardenToday(tx, gardenId);
+        await tx
+          .update(crops)
+          .set({ archivedOn: today })
+          .where(and(eq(crops.gardenId, gardenId), eq(crops.id, cropId)));
+        return { archivedOn: today };
+      }
       await tx.delete(crops).where(and(eq(crops.gardenId, gardenId), eq(crops.id, cropId)));
       await dropRule(tx, gardenId, row.feedingRuleId);
       return { removed: true as const };

@@ -1,5 +1,5 @@
 import "server-only";
-import { and, asc, count, eq, gte, inArray, isNull, or } from "drizzle-orm";
+import { and, asc, count, eq, gte, inArray, isNotNull, isNull, or } from "drizzle-orm";
 import { getDb, type DbOrTx } from "@/db";
 import { applications, beds, crops, feedingRules, gardens, plantings } from "@/db/schema";
 import { addDays, type FeederClass, type FeedingRuleInput } from "@/lib/engine";
@@ -41,6 +41,7 @@ export interface PlantingDto {
   effectiveRule: FeedingRuleInput;
   ruleSource: RuleSource;
   notes: string | null;
+  archivedOn: string | null;
 }
 
 export interface PlantingWarning {
@@ -97,12 +98,13 @@ async function toDtos(tx: DbOrTx, gardenId: string, rows: (typeof plantings.$inf
       effectiveRule: eff.rule,
       ruleSource: eff.source,
       notes: p.notes,
+      archivedOn: p.archivedOn,
     };
   });
 }
 
 /** Today in the garden's time zone, as a floating date. */
-async function gardenToday(tx: DbOrTx, gardenId: string): Promise<string> {
+export async function gardenToday(tx: DbOrTx, gardenId: string): Promise<string> {
   const [g] = await tx
     .select({ tz: gardens.timeZone })
     .from(gardens)
@@ -115,12 +117,20 @@ export async function listPlantings({
   query,
 }: {
   gardenId: string;
-  query: { bedId?: string; cropId?: string; active?: boolean; limit: number; offset: number };
+  query: {
+    bedId?: string;
+    cropId?: string;
+    active?: boolean;
+    archived?: boolean;
+    limit: number;
+    offset: number;
+  };
 }): Promise<{ plantings: PlantingDto[]; total: number }> {
   const db = await getDb();
   const today = query.active === undefined ? null : await gardenToday(db, gardenId);
   const where = and(
     eq(plantings.gardenId, gardenId),
+    query.archived ? isNotNull(plantings.archivedOn) : isNull(plantings.archivedOn),
     query.bedId ? eq(plantings.bedId, query.bedId) : undefined,
     query.cropId ? eq(plantings.cropId, query.cropId) : undefined,
     query.active === true
@@ -194,7 +204,7 @@ export async function createPlantings({
         if (!bed) throw fieldError("bedId", "No such bed or container in this garden.");
         const crop = await adoptCrop(tx, gardenId, input.cropId);
         if (!crop) throw fieldError("cropId", "No such crop in this garden.");
-        const facts = cropFacts(crop.name);
+        const facts = cropFacts(crop);
         if (bed.kind === "bed") {
           const list = byBed.get(bed.id) ?? [];
           list.push({ count: input.plantCount, spacingM: facts.spacingM });
@@ -296,8 +306,8 @@ export async function updatePlanting({
 }
 
 /**
- * A planting with logged applications is ended (kept for the record, fed no
- * more after today); one without logs is removed with its own rule.
+ * A planting with logged applications is archived and ended (kept for the
+ * record, fed no more after today); one without logs is removed with its own rule.
  */
 export async function removePlanting({
   gardenId,
@@ -305,7 +315,7 @@ export async function removePlanting({
 }: {
   gardenId: string;
   plantingId: string;
-}): Promise<{ removed: true } | { endedOn: string }> {
+}): Promise<{ removed: true } | { archivedOn: string; endedOn: string }> {
   const db = await getDb();
   return thenInvalidatePlan(
     gardenId,
@@ -322,13 +332,18 @@ export async function removePlanting({
       if (logged > 0) {
         const today = await gardenToday(tx, gardenId);
         const endedOn = today < current.plantedOn ? current.plantedOn : today;
-        if (current.endedOn !== null && current.endedOn <= endedOn)
-          throw new AppError("conflict:planting_ended", "This planting has already ended.");
+        if (current.archivedOn !== null)
+          throw new AppError("conflict:planting_archived", "This planting is already archived.");
+        // Archived and ended: kept with its log, fed no more after today.
         await tx
           .update(plantings)
-          .set({ endedOn })
+          .set({
+            archivedOn: today,
+            endedOn:
+              current.endedOn !== null && current.endedOn < endedOn ? current.endedOn : endedOn,
+          })
           .where(and(eq(plantings.gardenId, gardenId), eq(plantings.id, plantingId)));
-        return { endedOn };
+        return { archivedOn: today, endedOn };
       }
       await tx
         .delete(plantings)

@@ -34,15 +34,19 @@ export function effectiveRule(
 
 const INCH_M = 0.0254; // NIST Handbook 44 App. C: 1 in = 2.54 cm exactly
 
-/** Spacing and days to harvest from the crop list (common practice, from memory); null for a garden's own crop. */
-export function cropFacts(name: string | null): {
-  spacingM: number | null;
-  daysToHarvest: number | null;
-} {
-  const listed = findListedCrop(name);
+/**
+ * Spacing and days to harvest: the crop's own (a garden's numbers), else the
+ * crop list's (common practice, from memory), else unknown.
+ */
+export function cropFacts(crop: {
+  name: string | null;
+  spacingM?: number | null;
+  daysToHarvest?: number | null;
+}): { spacingM: number | null; daysToHarvest: number | null } {
+  const listed = findListedCrop(crop.name);
   return {
-    spacingM: listed ? listed.spacingIn * INCH_M : null,
-    daysToHarvest: listed?.daysToHarvest ?? null,
+    spacingM: crop.spacingM ?? (listed ? listed.spacingIn * INCH_M : null),
+    daysToHarvest: crop.daysToHarvest ?? listed?.daysToHarvest ?? null,
   };
 }
 

@@ -73,6 +73,8 @@ const booleanParam = z.enum(["true", "false"]).transform((v) => v === "true");
 export const listBedsQuerySchema = z.object({
   kind: bedKindSchema.optional(),
   indoors: booleanParam.optional(),
+  /** true: only archived beds; otherwise only beds in use. */
+  archived: booleanParam.optional(),
   q: z.string().trim().max(80).optional(),
   limit: z.coerce.number().int().min(1).max(MAX_PAGE, `At most ${MAX_PAGE} a page.`).default(50),
   offset: z.coerce.number().int().min(0).max(1_000_000).default(0),

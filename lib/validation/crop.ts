@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { feederClassSchema } from "@/lib/validation/engine-inputs";
 import { feedingRuleSchema } from "@/lib/validation/feeding-rule";
+import { quantitySchema } from "@/lib/validation/scenario-quantity";
 
 // A garden's own crop, or its change to a starter crop's default.
 
@@ -9,6 +10,10 @@ const cropFields = z.object({
   feederClass: feederClassSchema,
   edible: z.boolean().default(true),
   edibleTouchesSoil: z.boolean().default(false),
+  /** Typical days from planting to first harvest: seeds a planting's expected harvest. */
+  daysToHarvest: z.number().int().min(1, "At least one day.").max(1000).nullish(),
+  /** Distance between plants: the crowding check uses it. */
+  spacing: quantitySchema("length", 10).nullish(),
   /** null = the engine's default rule for the feeder class. */
   rule: feedingRuleSchema.nullish(),
 });

@@ -91,6 +91,11 @@ export const listPlantingsQuerySchema = z.object({
     .enum(["true", "false"])
     .transform((v) => v === "true")
     .optional(),
+  /** true: only archived plantings; otherwise only those not archived. */
+  archived: z
+    .enum(["true", "false"])
+    .transform((v) => v === "true")
+    .optional(),
   limit: z.coerce.number().int().min(1).max(200, "At most 200 a page.").default(100),
   offset: z.coerce.number().int().min(0).max(1_000_000).default(0),
 });

@@ -5,8 +5,15 @@ import * as beds from "@/app/api/gardens/[gardenId]/beds/route";
 import * as crops from "@/app/api/gardens/[gardenId]/crops/route";
 import * as planting from "@/app/api/gardens/[gardenId]/plantings/[plantingId]/route";
 import * as plantings from "@/app/api/gardens/[gardenId]/plantings/route";
+import { getDb } from "@/db";
 import { loadGardenInputs } from "@/db/queries/garden-inputs";
-import { makeBed, makeOwnCrop, starterCropId } from "@/tests/support/integration/beds-fixtures";
+import { applications } from "@/db/schema";
+import {
+  makeBed,
+  makeOwnCrop,
+  makePlanting,
+  starterCropId,
+} from "@/tests/support/integration/beds-fixtures";
 import {
   call,
   closeHarness,
@@ -346,5 +353,65 @@ describe("crops", () => {
     });
     expect(again.status).toBe(400);
     expect(again.json.error.fields).toHaveProperty("name");
+  });
+});
+
+describe("archive, not delete, while logs refer to it", () => {
+  it("archives a bed whose planting has a logged application, keeps the log and ends the planting", async () => {
+    const p = await makePlanting(world.gardenId);
+    const db = await getDb();
+    await db.insert(applications).values({
+      gardenId: world.gardenId,
+      plantingId: p.id,
+      material: "castings",
+      method: "top-dress",
+      amountSi: 0.5,
+      appliedOn: "2026-06-01",
+    });
+    const res = await call(bed.DELETE, {
+      url: url(`beds/${p.bedId}`),
+      params: params({ bedId: p.bedId }),
+      cookie: grower,
+    });
+    expect(res.status, res.text).toBe(200);
+    expect(res.json.archivedOn).toMatch(/^\d{4}-\d{2}-\d{2}$/);
+    const listed = await call(beds.GET, {
+      url: url("beds?limit=100"),
+      params: params(),
+      cookie: grower,
+    });
+    expect(listed.json.beds.map((b: { id: string }) => b.id)).not.toContain(p.bedId);
+    const archived = await call(beds.GET, {
+      url: url("beds?archived=true"),
+      params: params(),
+      cookie: grower,
+    });
+    expect(archived.json.beds.map((b: { id: string }) => b.id)).toContain(p.bedId);
+    const logs = await db.select().from(applications);
+    expect(logs.some((a) => a.plantingId === p.id)).toBe(true);
+    const inputs = await loadGardenInputs({ gardenId: world.gardenId, asOf: "2026-06-01" });
+    expect(inputs.plantings.find((x) => x.id === p.id)?.endDate).toBe(res.json.archivedOn);
+    const again = await call(bed.DELETE, {
+      url: url(`beds/${p.bedId}`),
+      params: params({ bedId: p.bedId }),
+      cookie: grower,
+    });
+    expect(again.status).toBe(409);
+  });
+
+  it("removes a planting with no logs outright", async () => {
+    const p = await makePlanting(world.gardenId);
+    const res = await call(planting.DELETE, {
+      url: url(`plantings/${p.id}`),
+      params: params({ plantingId: p.id }),
+      cookie: grower,
+    });
+    expect(res.json).toEqual({ removed: true });
+    const gone = await call(planting.GET, {
+      url: url(`plantings/${p.id}`),
+      params: params({ plantingId: p.id }),
+      cookie: grower,
+    });
+    expect(gone.status).toBe(404);
   });
 });
