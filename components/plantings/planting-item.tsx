@@ -22,7 +22,7 @@ export interface PlantingView {
 const SOURCE_WORDS = {
   planting: "this planting's own rule",
   crop: "the crop's rule for this garden",
-  default: "the default for its feeder class (common practice)",
+  default: "feeder-class default, common practice",
 };
 
 /** One planting: what it is, how it is fed; growers can change or reset the rule, or remove it. */

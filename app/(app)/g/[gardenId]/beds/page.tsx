@@ -80,7 +80,7 @@ export default async function BedsPage({
             <label className="flex flex-col gap-1.5 font-semibold">
               Show
               <Select name="kind" defaultValue={query.kind ?? ""} className="w-44">
-                <option value="">Beds and containers</option>
+                <option value="">All</option>
                 <option value="bed">Beds only</option>
                 <option value="container">Containers only</option>
               </Select>

@@ -120,7 +120,17 @@ export default async function BedPage({
           What each planting is due, as applied, and how much of it the worm bins&apos; stock covers
           (the same plan as the Balance).
         </p>
-        <BedDemandTable demand={demand} plantings={views} unitSystem={system} />
+        <BedDemandTable
+          demand={demand}
+          plantings={views.map((v) => ({
+            id: v.id,
+            // Two plantings of the same crop and count are told apart by their planting day.
+            title: views.some((o) => o !== v && o.title === v.title)
+              ? `${v.title} (${formatDay(v.plantedOn, { month: "short", year: "numeric" })})`
+              : v.title,
+          }))}
+          unitSystem={system}
+        />
       </section>
     </>
   );
