@@ -62,7 +62,7 @@ export async function getBedDemand({
     acc.set(key, a);
   }
   const byPlanting: Record<string, BedDemandMonth[]> = {};
-  for (const [key, a] of acc) {
+  for (const key of acc.keys()) {
     const [plantingId] = key.split("|") as [string];
     byPlanting[plantingId] ??= months.map((month) => ({
       month,
