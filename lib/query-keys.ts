@@ -10,5 +10,9 @@ export const queryKeys = {
     ["gardens", gardenId, "balance", from, months] as const,
   whatIf: (gardenId: string, from: string, months: number, changes: unknown) =>
     ["gardens", gardenId, "balance", from, months, "what-if", changes] as const,
+  beds: (gardenId: string) => ["gardens", gardenId, "beds"] as const,
+  bed: (gardenId: string, bedId: string) => ["gardens", gardenId, "beds", bedId] as const,
+  plantings: (gardenId: string) => ["gardens", gardenId, "plantings"] as const,
+  crops: (gardenId: string) => ["gardens", gardenId, "crops"] as const,
   outbox: () => ["dev", "outbox"] as const,
 };

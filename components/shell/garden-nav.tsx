@@ -9,6 +9,7 @@ import type { Role } from "@/lib/auth/roles";
 const sections: { path: string; label: string; minimum: Role }[] = [
   { path: "", label: "Overview", minimum: "viewer" },
   { path: "/balance", label: "Balance", minimum: "viewer" },
+  { path: "/beds", label: "Beds", minimum: "viewer" },
   { path: "/members", label: "Members", minimum: "viewer" },
   { path: "/settings", label: "Settings", minimum: "owner" },
 ];

@@ -1,56 +1,33 @@
 import { isNull } from "drizzle-orm";
 import type { Db } from "@/db";
 import { crops } from "@/db/schema";
+import { cropList } from "@/lib/crops/crop-list";
 
-// The crop list every garden starts with. Feeder classes are common practice;
-// "edible touches soil" decides the 120- vs 90-day interval for manure-fed
-// outputs (7 CFR 205.203(c)(1)). Growers add their own crops per garden.
+// The shared crop list every garden starts with: the rows of lib/crops/crop-list.ts
+// (which names its sources). Starter crops carry no feeding rule: null means the
+// engine's default rule for the feeder class (lib/engine/core/defaults.ts), so a
+// change of default reaches every crop. A garden copies a starter crop into its
+// own list when it plants or changes it.
 
-// Starter crops carry no feeding rule: null means the engine's default rule
-// for the feeder class (lib/engine/defaults.ts), so a change of default reaches
-// every crop. A garden copies a starter crop into its own list when it uses it.
+export const starterCrops = cropList.map((crop) => ({
+  name: crop.name,
+  feederClass: crop.feederClass,
+  touchesSoil: crop.edibleTouchesSoil,
+  edible: crop.edible,
+}));
 
-type FeederClass = "heavy" | "medium" | "light";
-
-export const starterCrops: {
-  name: string;
-  feederClass: FeederClass;
-  touchesSoil: boolean;
-  edible: boolean;
-}[] = [
-  { name: "Tomato", feederClass: "heavy", touchesSoil: false, edible: true },
-  { name: "Pepper", feederClass: "heavy", touchesSoil: false, edible: true },
-  { name: "Squash", feederClass: "heavy", touchesSoil: false, edible: true },
-  { name: "Cucumber", feederClass: "heavy", touchesSoil: false, edible: true },
-  { name: "Sweet corn", feederClass: "heavy", touchesSoil: false, edible: true },
-  { name: "Kale", feederClass: "medium", touchesSoil: false, edible: true },
-  { name: "Lettuce", feederClass: "medium", touchesSoil: true, edible: true },
-  { name: "Strawberry", feederClass: "medium", touchesSoil: true, edible: true },
-  { name: "Blueberry", feederClass: "medium", touchesSoil: false, edible: true },
-  { name: "Potato", feederClass: "medium", touchesSoil: true, edible: true },
-  { name: "Beet", feederClass: "medium", touchesSoil: true, edible: true },
-  { name: "Basil", feederClass: "medium", touchesSoil: false, edible: true },
-  { name: "Carrot", feederClass: "light", touchesSoil: true, edible: true },
-  { name: "Garlic", feederClass: "light", touchesSoil: true, edible: true },
-  { name: "Bush bean", feederClass: "light", touchesSoil: false, edible: true },
-  { name: "Pea", feederClass: "light", touchesSoil: false, edible: true },
-  { name: "Thyme", feederClass: "light", touchesSoil: false, edible: true },
-  { name: "Zinnia", feederClass: "medium", touchesSoil: false, edible: false },
-  { name: "Dahlia", feederClass: "heavy", touchesSoil: false, edible: false },
-  { name: "Sunflower", feederClass: "medium", touchesSoil: false, edible: false },
-];
-
-/** Adds the shared crop list once; later calls find it and add nothing. */
+/** Adds the list entries not yet in the shared list (by name); later calls add nothing. */
 export async function ensureStarterCrops(db: Db): Promise<number> {
   return db.transaction(async (tx) => {
     const existing = await tx
-      .select({ id: crops.id })
+      .select({ name: crops.name })
       .from(crops)
-      .where(isNull(crops.gardenId))
-      .limit(1);
-    if (existing.length) return 0;
+      .where(isNull(crops.gardenId));
+    const have = new Set(existing.map((c) => c.name?.toLowerCase()));
+    const missing = starterCrops.filter((c) => !have.has(c.name.toLowerCase()));
+    if (!missing.length) return 0;
     await tx.insert(crops).values(
-      starterCrops.map((crop) => ({
+      missing.map((crop) => ({
         gardenId: null,
         name: crop.name,
         feederClass: crop.feederClass,
@@ -58,6 +35,6 @@ export async function ensureStarterCrops(db: Db): Promise<number> {
         edible: crop.edible,
       })),
     );
-    return starterCrops.length;
+    return missing.length;
   });
 }

@@ -28,13 +28,5 @@ export const monthsQuerySchema = z
   .transform(Number)
   .pipe(monthCount);
 
-/** The calendar day it is now in `timeZone`, "YYYY-MM-DD". */
-export function todayIn(timeZone: string, now: Date = new Date()): string {
-  // en-CA formats a date as YYYY-MM-DD.
-  return new Intl.DateTimeFormat("en-CA", {
-    timeZone,
-    year: "numeric",
-    month: "2-digit",
-    day: "2-digit",
-  }).format(now);
-}
+// "Today" in a garden lives in one place.
+export { todayIn } from "@/lib/garden-today";

@@ -81,6 +81,10 @@ const SNAPSHOT_TABLES = [
   "invitations",
   "password_reset_tokens",
   "sessions",
+  "beds",
+  "crops",
+  "plantings",
+  "feeding_rules",
 ];
 
 /** Everything a role-gated mutation could touch, as one comparable value. */

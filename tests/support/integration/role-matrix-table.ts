@@ -10,6 +10,12 @@ import * as member from "@/app/api/gardens/[gardenId]/members/[userId]/route";
 import * as members from "@/app/api/gardens/[gardenId]/members/route";
 import * as balance from "@/app/api/gardens/[gardenId]/balance/route";
 import * as gardenExport from "@/app/api/gardens/[gardenId]/export/route";
+import * as bed from "@/app/api/gardens/[gardenId]/beds/[bedId]/route";
+import * as beds from "@/app/api/gardens/[gardenId]/beds/route";
+import * as crop from "@/app/api/gardens/[gardenId]/crops/[cropId]/route";
+import * as crops from "@/app/api/gardens/[gardenId]/crops/route";
+import * as planting from "@/app/api/gardens/[gardenId]/plantings/[plantingId]/route";
+import * as plantings from "@/app/api/gardens/[gardenId]/plantings/route";
 import * as garden from "@/app/api/gardens/[gardenId]/route";
 import * as whatIf from "@/app/api/gardens/[gardenId]/what-if/route";
 import * as gardenImport from "@/app/api/gardens/import/route";
@@ -25,6 +31,7 @@ import { createInvitation } from "@/db/queries/invitations";
 import { bins } from "@/db/schema";
 import { createPasswordReset } from "@/db/queries/password-resets";
 import { createLinkToken } from "@/lib/auth/tokens";
+import { makeBed, makeOwnCrop, makePlanting, starterCropId } from "./beds-fixtures";
 import {
   gardenInput,
   uniqueEmail,
@@ -106,10 +113,20 @@ const ownerOnly = (ok: number) => ({
   outsider: 404,
 });
 
+const growerPlus = (ok: number) => ({
+  signedOut: 401,
+  viewer: 403,
+  helper: 403,
+  grower: ok,
+  owner: ok,
+  outsider: 404,
+});
+
 const g = (ctx: RowContext) => ({ gardenId: ctx.world.gardenId });
 // The catch-all's params are a list of path segments.
 const authPath = (path: string) =>
   ({ nextauth: path.split("/") }) as unknown as Record<string, string>;
+const api = (ctx: RowContext, path: string) => `/api/gardens/${ctx.world.gardenId}/${path}`;
 
 async function openInvitation(ctx: RowContext, email = uniqueEmail("invitee")) {
   const { token, tokenHash } = createLinkToken();
@@ -530,6 +547,198 @@ export const roleMatrix: MatrixRow[] = [
     request: async (ctx) => {
       const { token } = await openInvitation(ctx, ctx.user.email);
       return { url: "/api/invitations/accept", body: { token } };
+    },
+  },
+
+  // Beds, crops and plantings (issue 10): viewer and helper read, grower and owner write.
+  {
+    method: "GET",
+    file: "app/api/gardens/[gardenId]/beds/route.ts",
+    handler: beds.GET,
+    mutates: false,
+    expect: viewerPlus,
+    request: (ctx) => ({ url: api(ctx, "beds?kind=bed&limit=10"), params: g(ctx) }),
+  },
+  {
+    method: "POST",
+    file: "app/api/gardens/[gardenId]/beds/route.ts",
+    handler: beds.POST,
+    mutates: true,
+    expect: growerPlus(201),
+    request: (ctx) => ({
+      url: api(ctx, "beds"),
+      params: g(ctx),
+      body: { name: "Porch pot", kind: "container", volume: { value: 5, unit: "gal" } },
+    }),
+  },
+  {
+    method: "GET",
+    file: "app/api/gardens/[gardenId]/beds/[bedId]/route.ts",
+    handler: bed.GET,
+    mutates: false,
+    expect: viewerPlus,
+    request: async (ctx) => {
+      const { id } = await makeBed(ctx.world.gardenId);
+      return { url: api(ctx, `beds/${id}`), params: { ...g(ctx), bedId: id } };
+    },
+  },
+  {
+    method: "PATCH",
+    file: "app/api/gardens/[gardenId]/beds/[bedId]/route.ts",
+    handler: bed.PATCH,
+    mutates: true,
+    expect: growerPlus(200),
+    request: async (ctx) => {
+      const { id } = await makeBed(ctx.world.gardenId);
+      return {
+        url: api(ctx, `beds/${id}`),
+        params: { ...g(ctx), bedId: id },
+        body: { name: `Bed renamed by ${ctx.actor}`, width: { value: 3, unit: "ft" } },
+      };
+    },
+  },
+  {
+    method: "DELETE",
+    file: "app/api/gardens/[gardenId]/beds/[bedId]/route.ts",
+    variant: "nothing logged",
+    handler: bed.DELETE,
+    mutates: true,
+    expect: growerPlus(200),
+    request: async (ctx) => {
+      const { id } = await makeBed(ctx.world.gardenId);
+      return { url: api(ctx, `beds/${id}`), params: { ...g(ctx), bedId: id } };
+    },
+  },
+  {
+    method: "GET",
+    file: "app/api/gardens/[gardenId]/crops/route.ts",
+    handler: crops.GET,
+    mutates: false,
+    expect: viewerPlus,
+    request: (ctx) => ({ url: api(ctx, "crops?feederClass=heavy"), params: g(ctx) }),
+  },
+  {
+    method: "POST",
+    file: "app/api/gardens/[gardenId]/crops/route.ts",
+    handler: crops.POST,
+    mutates: true,
+    expect: growerPlus(201),
+    request: (ctx) => ({
+      url: api(ctx, "crops"),
+      params: g(ctx),
+      body: { name: `Ground cherry (${ctx.actor})`, feederClass: "medium" },
+    }),
+  },
+  {
+    method: "GET",
+    file: "app/api/gardens/[gardenId]/crops/[cropId]/route.ts",
+    handler: crop.GET,
+    mutates: false,
+    expect: viewerPlus,
+    request: async (ctx) => {
+      const cropId = await starterCropId("Pepper");
+      return { url: api(ctx, `crops/${cropId}`), params: { ...g(ctx), cropId } };
+    },
+  },
+  {
+    method: "PATCH",
+    file: "app/api/gardens/[gardenId]/crops/[cropId]/route.ts",
+    variant: "a starter crop (copied into the garden)",
+    handler: crop.PATCH,
+    mutates: true,
+    expect: growerPlus(200),
+    request: async (ctx) => {
+      const cropId = await starterCropId("Kale");
+      return {
+        url: api(ctx, `crops/${cropId}`),
+        params: { ...g(ctx), cropId },
+        body: { feederClass: ctx.actor === "owner" ? "light" : "heavy" },
+      };
+    },
+  },
+  {
+    method: "DELETE",
+    file: "app/api/gardens/[gardenId]/crops/[cropId]/route.ts",
+    variant: "own crop, not planted",
+    handler: crop.DELETE,
+    mutates: true,
+    expect: growerPlus(200),
+    request: async (ctx) => {
+      const { id } = await makeOwnCrop(ctx.world.gardenId);
+      return { url: api(ctx, `crops/${id}`), params: { ...g(ctx), cropId: id } };
+    },
+  },
+  {
+    method: "GET",
+    file: "app/api/gardens/[gardenId]/plantings/route.ts",
+    handler: plantings.GET,
+    mutates: false,
+    expect: viewerPlus,
+    request: (ctx) => ({ url: api(ctx, "plantings?active=true"), params: g(ctx) }),
+  },
+  {
+    method: "POST",
+    file: "app/api/gardens/[gardenId]/plantings/route.ts",
+    variant: "quick entry",
+    handler: plantings.POST,
+    mutates: true,
+    expect: growerPlus(201),
+    request: async (ctx) => {
+      const { id } = await makeBed(ctx.world.gardenId);
+      await starterCropId("Tomato");
+      return {
+        url: api(ctx, "plantings"),
+        params: g(ctx),
+        body: { bedId: id, plantedOn: "2026-05-01", quick: "6 tomato, 4 pepper" },
+      };
+    },
+  },
+  {
+    method: "GET",
+    file: "app/api/gardens/[gardenId]/plantings/[plantingId]/route.ts",
+    handler: planting.GET,
+    mutates: false,
+    expect: viewerPlus,
+    request: async (ctx) => {
+      const { id } = await makePlanting(ctx.world.gardenId);
+      return { url: api(ctx, `plantings/${id}`), params: { ...g(ctx), plantingId: id } };
+    },
+  },
+  {
+    method: "PATCH",
+    file: "app/api/gardens/[gardenId]/plantings/[plantingId]/route.ts",
+    variant: "override the rule",
+    handler: planting.PATCH,
+    mutates: true,
+    expect: growerPlus(200),
+    request: async (ctx) => {
+      const { id } = await makePlanting(ctx.world.gardenId);
+      return {
+        url: api(ctx, `plantings/${id}`),
+        params: { ...g(ctx), plantingId: id },
+        body: {
+          priority: "high",
+          rule: {
+            material: "tea",
+            method: "drench",
+            basis: "per-plant",
+            amount: { value: 100, unit: "mL" },
+            recurrence: "freq=weekly;interval=2",
+          },
+        },
+      };
+    },
+  },
+  {
+    method: "DELETE",
+    file: "app/api/gardens/[gardenId]/plantings/[plantingId]/route.ts",
+    variant: "nothing logged",
+    handler: planting.DELETE,
+    mutates: true,
+    expect: growerPlus(200),
+    request: async (ctx) => {
+      const { id } = await makePlanting(ctx.world.gardenId);
+      return { url: api(ctx, `plantings/${id}`), params: { ...g(ctx), plantingId: id } };
     },
   },
 ];

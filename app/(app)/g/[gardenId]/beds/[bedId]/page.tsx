@@ -1,0 +1,138 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { BedDemandTable } from "@/components/beds/bed-demand-table";
+import { bedSize } from "@/components/beds/bed-list";
+import { PlantingItem } from "@/components/plantings/planting-item";
+import { QuickPlantForm } from "@/components/plantings/quick-plant-form";
+import { Card, CardBody, CardHeader, CardTitle, EmptyState } from "@/components/ui";
+import { getBedDemand } from "@/db/queries/bed-demand";
+import { todayIn } from "@/lib/garden-today";
+import { getBedById } from "@/db/queries/beds";
+import { getGardenById } from "@/db/queries/gardens";
+import { listPlantings } from "@/db/queries/plantings";
+import { requirePageMember } from "@/lib/auth/page-session";
+import { roleAtLeast } from "@/lib/auth/roles";
+import { formatDay } from "@/lib/format";
+import { describeRule } from "@/lib/plantings/rule-words";
+import { bedIdParamsSchema } from "@/lib/validation/bed";
+
+export const metadata: Metadata = { title: "Bed" };
+
+export default async function BedPage({
+  params,
+}: {
+  params: Promise<{ gardenId: string; bedId: string }>;
+}) {
+  const parsed = bedIdParamsSchema.safeParse(await params);
+  if (!parsed.success) notFound();
+  const { gardenId, bedId } = parsed.data;
+  const member = await requirePageMember(gardenId, "viewer");
+  const [garden, bed] = await Promise.all([
+    getGardenById({ gardenId }),
+    getBedById({ gardenId, bedId }),
+  ]);
+  if (!garden || !bed) notFound();
+  const system = garden.unitSystem;
+  const today = todayIn(garden.timeZone);
+  const [{ plantings }, demand] = await Promise.all([
+    listPlantings({ gardenId, query: { bedId, limit: 200, offset: 0 } }),
+    getBedDemand({ gardenId, bedId }),
+  ]);
+  const canEdit = roleAtLeast(member.role, "grower");
+  const views = plantings.map((p) => ({
+    id: p.id,
+    title: `${p.plantCount} ${p.cropName}`,
+    dates: `Planted ${formatDay(p.plantedOn, { month: "short", day: "numeric", year: "numeric" })}${
+      p.endedOn
+        ? ` · ended ${formatDay(p.endedOn)}`
+        : p.expectedHarvestOn
+          ? ` · harvest expected ${formatDay(p.expectedHarvestOn)}`
+          : ""
+    } · ${p.feederClass} feeder`,
+    priority: p.priority,
+    plantedOn: p.plantedOn,
+    ruleWords: describeRule(p.effectiveRule, system),
+    ruleSource: p.ruleSource,
+  }));
+
+  return (
+    <>
+      <nav aria-label="Breadcrumb" className="text-sm">
+        <Link
+          href={`/g/${gardenId}/beds`}
+          className="inline-flex min-h-6 items-center text-leaf-800 underline"
+        >
+          ← All beds and containers
+        </Link>
+      </nav>
+      <header className="flex flex-col gap-1">
+        <h1 className="text-3xl">{bed.name}</h1>
+        <p className="text-soil-700">
+          {bed.kind === "bed" ? "Bed" : "Container"} · {bedSize(bed, system)}
+          {bed.indoors ? " · indoors, fed all year" : " · outdoors, fed in the growing season"}
+        </p>
+        {bed.notes ? <p>{bed.notes}</p> : null}
+      </header>
+      <section aria-labelledby="plantings-title" className="flex flex-col gap-3">
+        <h2 id="plantings-title" className="text-2xl">
+          Plantings
+        </h2>
+        {views.length ? (
+          <ul className="flex flex-col gap-3">
+            {views.map((v) => (
+              <PlantingItem
+                key={v.id}
+                gardenId={gardenId}
+                planting={v}
+                canEdit={canEdit}
+                today={today}
+                unitSystem={system}
+              />
+            ))}
+          </ul>
+        ) : (
+          <EmptyState
+            as="h3"
+            title="Nothing planted here yet"
+            text={
+              canEdit
+                ? "Add plants below: type counts and crops, like “6 tomato, 4 pepper”."
+                : "When a grower adds plants, they appear here."
+            }
+          />
+        )}
+      </section>
+      {canEdit ? (
+        <Card>
+          <CardHeader>
+            <CardTitle>Add plants</CardTitle>
+          </CardHeader>
+          <CardBody>
+            <QuickPlantForm gardenId={gardenId} bedId={bedId} today={today} />
+          </CardBody>
+        </Card>
+      ) : null}
+      <section aria-labelledby="demand-title" className="flex flex-col gap-3">
+        <h2 id="demand-title" className="text-2xl">
+          Next 12 months
+        </h2>
+        <p className="text-sm text-soil-700">
+          What each planting is due, as applied, and how much of it the worm bins&apos; stock covers
+          (the same plan as the Balance).
+        </p>
+        <BedDemandTable
+          demand={demand}
+          plantings={views.map((v) => ({
+            id: v.id,
+            // Two plantings of the same crop and count are told apart by their planting day.
+            title: views.some((o) => o !== v && o.title === v.title)
+              ? `${v.title} (${formatDay(v.plantedOn, { month: "short", year: "numeric" })})`
+              : v.title,
+          }))}
+          unitSystem={system}
+        />
+      </section>
+    </>
+  );
+}

@@ -1,0 +1,130 @@
+"use client";
+
+import { useQueryClient } from "@tanstack/react-query";
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import { Badge, Button, useToast } from "@/components/ui";
+import { apiFetch, ApiError } from "@/lib/api-client";
+import { queryKeys } from "@/lib/query-keys";
+import type { UnitSystem } from "@/lib/units";
+import { RuleEditor } from "./rule-editor";
+
+export interface PlantingView {
+  id: string;
+  title: string;
+  dates: string;
+  priority: "high" | "normal" | "low";
+  plantedOn: string;
+  ruleWords: string;
+  ruleSource: "planting" | "crop" | "default";
+}
+
+const SOURCE_WORDS = {
+  planting: "this planting's own rule",
+  crop: "the crop's rule for this garden",
+  default: "feeder-class default, common practice",
+};
+
+/** One planting: what it is, how it is fed; growers can change or reset the rule, or remove it. */
+export function PlantingItem({
+  gardenId,
+  planting,
+  canEdit,
+  today,
+  unitSystem,
+}: {
+  gardenId: string;
+  planting: PlantingView;
+  canEdit: boolean;
+  today: string;
+  unitSystem: UnitSystem;
+}) {
+  const router = useRouter();
+  const toast = useToast();
+  const queryClient = useQueryClient();
+  const [editing, setEditing] = useState(false);
+  const [confirming, setConfirming] = useState(false);
+  const [busy, setBusy] = useState(false);
+  const url = `/api/gardens/${gardenId}/plantings/${planting.id}`;
+
+  async function act(init: { method: string; body?: unknown }, done: string) {
+    setBusy(true);
+    try {
+      await apiFetch(url, init);
+      await queryClient.invalidateQueries({ queryKey: queryKeys.plan(gardenId) });
+      toast.show({ title: done, tone: "positive" });
+      router.refresh();
+    } catch (e) {
+      toast.show({
+        title: e instanceof ApiError ? e.message : "That did not work.",
+        tone: "danger",
+      });
+    } finally {
+      setBusy(false);
+      setConfirming(false);
+    }
+  }
+
+  return (
+    <li className="flex flex-col gap-2 rounded-card border border-loam-300 bg-white p-4">
+      <div className="flex flex-wrap items-baseline justify-between gap-2">
+        <h3 className="text-lg font-semibold">{planting.title}</h3>
+        {planting.priority !== "normal" ? (
+          <Badge tone={planting.priority === "high" ? "positive" : "neutral"}>
+            {planting.priority === "high" ? "High priority" : "Low priority"}
+          </Badge>
+        ) : null}
+      </div>
+      <p className="text-sm text-soil-700">{planting.dates}</p>
+      <p>
+        <strong>Fed:</strong> {planting.ruleWords}{" "}
+        <span className="text-sm text-soil-700">({SOURCE_WORDS[planting.ruleSource]})</span>
+      </p>
+      {canEdit && !editing ? (
+        <div className="flex flex-wrap gap-2">
+          <Button variant="secondary" size="sm" onClick={() => setEditing(true)}>
+            Change feeding
+          </Button>
+          {planting.ruleSource === "planting" ? (
+            <Button
+              variant="ghost"
+              size="sm"
+              pending={busy}
+              onClick={() =>
+                act({ method: "PATCH", body: { rule: null } }, "Back to the crop's rule.")
+              }
+            >
+              Use the crop&apos;s rule
+            </Button>
+          ) : null}
+          {confirming ? (
+            <Button
+              variant="danger"
+              size="sm"
+              pending={busy}
+              onClick={() =>
+                act({ method: "DELETE" }, "Planting removed (or ended, if it has logged feedings).")
+              }
+            >
+              Yes, remove {planting.title}
+            </Button>
+          ) : (
+            <Button variant="ghost" size="sm" onClick={() => setConfirming(true)}>
+              Remove…
+            </Button>
+          )}
+        </div>
+      ) : null}
+      {editing ? (
+        <RuleEditor
+          gardenId={gardenId}
+          plantingId={planting.id}
+          plantedOn={planting.plantedOn}
+          today={today}
+          unitSystem={unitSystem}
+          onDone={() => setEditing(false)}
+        />
+      ) : null}
+    </li>
+  );
+}

@@ -1,0 +1,68 @@
+import { defaultRuleFor, type FeederClass, type FeedingRuleInput } from "@/lib/engine";
+import { findListedCrop } from "@/lib/crops/crop-list";
+
+// Which rule a planting is fed by, and crop facts the planting form needs.
+
+export type RuleSource = "planting" | "crop" | "default";
+
+/** The engine's default for a feeder class, in the shape rules are stored and sent (SI). */
+export function defaultRuleInput(feederClass: FeederClass): FeedingRuleInput {
+  const r = defaultRuleFor(feederClass);
+  return {
+    material: r.material,
+    method: r.method,
+    basis: r.basis,
+    measure:
+      r.basis === "percent-of-mix" ? "percent-of-mix" : r.amountUnit === "kg" ? "mass" : "volume",
+    amount: r.amount,
+    recurrence: r.recurrence,
+    dilutionWaterParts: r.dilutionWaterParts ?? null,
+    teaCastingsPerWater: null,
+  };
+}
+
+/** A planting's own rule wins, then its crop's, then the feeder-class default (as loadGardenInputs decides). */
+export function effectiveRule(
+  own: FeedingRuleInput | null,
+  crop: FeedingRuleInput | null,
+  feederClass: FeederClass,
+): { rule: FeedingRuleInput; source: RuleSource } {
+  if (own) return { rule: own, source: "planting" };
+  if (crop) return { rule: crop, source: "crop" };
+  return { rule: defaultRuleInput(feederClass), source: "default" };
+}
+
+const INCH_M = 0.0254; // NIST Handbook 44 App. C: 1 in = 2.54 cm exactly
+
+/**
+ * Spacing and days to harvest: the crop's own (a garden's numbers), else the
+ * crop list's (common practice, from memory), else unknown.
+ */
+export function cropFacts(crop: {
+  name: string | null;
+  spacingM?: number | null;
+  daysToHarvest?: number | null;
+}): { spacingM: number | null; daysToHarvest: number | null } {
+  const listed = findListedCrop(crop.name);
+  return {
+    spacingM: crop.spacingM ?? (listed ? listed.spacingIn * INCH_M : null),
+    daysToHarvest: crop.daysToHarvest ?? listed?.daysToHarvest ?? null,
+  };
+}
+
+/**
+ * How crowded plantings make a bed: the area their spacing needs (count ×
+ * spacing², one square per plant) over the bed's area. 1 = exactly full.
+ * null when the bed's area or a crop's spacing is unknown.
+ */
+export function crowding(
+  areaM2: number | null,
+  plantings: { count: number; spacingM: number | null }[],
+): number | null {
+  if (!areaM2 || plantings.some((p) => p.spacingM === null)) return null;
+  const need = plantings.reduce((sum, p) => sum + p.count * p.spacingM! ** 2, 0);
+  return need / areaM2;
+}
+
+/** Above this, plantings are refused unless the grower confirms: "far beyond the spacing". */
+export const CROWDED_REFUSE_RATIO = 3;
