@@ -251,3 +251,84 @@ export async function listLotStock({ gardenId }: { gardenId: string }): Promise<
     .orderBy(asc(stockLots.producedOn), asc(stockLots.id));
   return rows.map(({ drawn, ...r }) => ({ ...r, remainingSi: r.initialSi - Number(drawn) }));
 }
+
+// ── Added by the bins branch (issue 11): stock entered by hand. Data helper: move or
+// reshape freely; the routes under app/api/gardens/[gardenId]/lots call only these two.
+
+export interface EnteredLotInput {
+  gardenId: string;
+  material: "castings" | "leachate";
+  producedOn: string;
+  amountSi: number;
+  manureFeedstock: boolean;
+}
+
+/** A bought bag or stock on hand before Castline: a lot with no bin and no source event. */
+export async function recordEnteredLot(input: EnteredLotInput): Promise<{ lotId: string }> {
+  const db = await getDb();
+  const [lot] = await db
+    .insert(stockLots)
+    .values({
+      gardenId: input.gardenId,
+      binId: null,
+      sourceEventId: null,
+      material: input.material,
+      producedOn: input.producedOn,
+      initialAmountSi: input.amountSi,
+      manureFeedstock: input.manureFeedstock,
+    })
+    .returning({ id: stockLots.id });
+  return { lotId: lot!.id };
+}
+
+/**
+ * Takes an amount out of a hand-entered lot (spilled, given away, a recount):
+ * its entered amount goes down, never below what applications already drew.
+ * Lots made by a harvest or drain are refused: their amount is the logged
+ * event's (calibration reads it); losses from them wait for a stock
+ * adjustments table (asked for in /work/briefs/engine-requests.md).
+ */
+export async function removeFromEnteredLot({
+  gardenId,
+  lotId,
+  removeSi,
+}: {
+  gardenId: string;
+  lotId: string;
+  removeSi: number;
+}): Promise<LotStock> {
+  const db = await getDb();
+  return db.transaction(async (tx) => {
+    const [lot] = await tx
+      .select({
+        id: stockLots.id,
+        binId: stockLots.binId,
+        material: stockLots.material,
+        producedOn: stockLots.producedOn,
+        initialSi: stockLots.initialAmountSi,
+        sourceEventId: stockLots.sourceEventId,
+      })
+      .from(stockLots)
+      .where(and(eq(stockLots.gardenId, gardenId), eq(stockLots.id, lotId)))
+      .for("update");
+    if (!lot) throw new AppError("not_found:lot");
+    if (lot.sourceEventId !== null)
+      throw new AppError(
+        "conflict:lot_from_log",
+        "This lot came from a logged harvest or drain; recording a loss from it is not possible yet.",
+        { lotId: "came from the bin log" },
+      );
+    const left = lot.initialSi - ((await drawnSoFar(tx, gardenId, [lotId])).get(lotId) ?? 0);
+    if (removeSi > left + EPSILON)
+      throw new AppError("conflict:stock", "Stock cannot go below zero.", {
+        removeSi: `is more than the lot has left (${Math.max(0, left)})`,
+      });
+    const initialSi = Math.max(0, lot.initialSi - removeSi);
+    await tx
+      .update(stockLots)
+      .set({ initialAmountSi: initialSi })
+      .where(and(eq(stockLots.gardenId, gardenId), eq(stockLots.id, lotId)));
+    const { sourceEventId: _source, ...rest } = lot;
+    return { ...rest, initialSi, remainingSi: Math.max(0, left - removeSi) };
+  });
+}
