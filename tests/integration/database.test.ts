@@ -88,7 +88,7 @@ describe("demo seed", () => {
       const expected = [
         expect.objectContaining({ name: demoGarden.name, role: m.role }),
         ...(neighbourRole
-          ? [expect.objectContaining({ name: neighbourGarden.garden.name, role: neighbourRole })]
+          ? [expect.objectContaining({ name: neighbourGarden.name, role: neighbourRole })]
           : []),
       ];
       expect(res.json.gardens).toEqual(expect.arrayContaining(expected));

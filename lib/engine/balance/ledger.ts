@@ -59,8 +59,10 @@ export interface LedgerInput {
   logged: readonly LedgerLogged[];
   keepDays: Record<Pool, number>;
   spans: readonly LedgerSpan[];
-  /** Record which lot each claim drew from (for explanations; off in the gap search). */
-  recordDraws?: boolean;
+  /** Record which lot each claim on or after this day drew from (for explanations; off in the gap search). */
+  recordDrawsFrom?: number;
+  /** Return the lots as they stand at the start of this month index (to resume from there). */
+  snapshotAtMonth?: number;
 }
 
 export interface LedgerRow {
@@ -81,12 +83,14 @@ export interface LedgerResult {
   loggedGot: Float64Array;
   /** Manure-fed stock a cleanOnly claim could not take although it was on hand (per planned claim). */
   manureRefused: Float64Array;
-  plannedDraws?: { lotId: string; amount: number }[][];
-  loggedDraws?: { lotId: string; amount: number }[][];
+  plannedDraws?: ({ lotId: string; amount: number }[] | undefined)[];
+  loggedDraws?: ({ lotId: string; amount: number }[] | undefined)[];
   /** Every lot that aged out with something left, on the day it expired. */
   agedOut: { lotId: string; pool: Pool; day: number; amount: number; binId: string | null }[];
   /** Logged draws that named an unknown lot or more than it held (taken oldest first instead). */
   overdrawn: { loggedIndex: number; lotId: string; amount: number }[];
+  /** Lots still on the shelves (or yet to be made) at the start of `snapshotAtMonth`. */
+  snapshot?: LedgerLot[];
 }
 
 interface Live {
@@ -97,6 +101,9 @@ interface Live {
   manure: boolean;
   binId: string | null;
 }
+
+const CLEAN_ONLY = [false] as const;
+const MANURE_FIRST = [true, false] as const;
 
 class Shelf {
   lots: Live[];
@@ -146,7 +153,7 @@ class Shelf {
     out?: { lotId: string; amount: number }[],
   ): number {
     let left = amount;
-    const passes = mode === "clean-only" ? [false] : [true, false];
+    const passes = mode === "clean-only" ? CLEAN_ONLY : MANURE_FIRST;
     for (const wantManure of passes) {
       for (let i = lo; i < hi && left > AMOUNT_EPSILON; i++) {
         const l = this.lots[i]!;
@@ -224,30 +231,50 @@ export function runLedger(input: LedgerInput): LedgerResult {
     }
     return lo;
   };
-  const plannedByMonth = spans.map(() => [] as number[]);
+  const slot = (m: number, pool: Pool) => m * 2 + (pool === "castings" ? 0 : 1);
+  const plannedByMonth: number[][] = Array.from({ length: spans.length * 2 }, () => []);
   input.planned.forEach((c, i) => {
     const m = monthIndex(c.day);
-    if (m >= 0 && c.need > 0) plannedByMonth[m]!.push(i);
+    if (m >= 0 && c.need > 0) plannedByMonth[slot(m, c.pool)]!.push(i);
   });
-  const loggedByMonth = spans.map(() => [] as number[]);
+  const loggedByMonth: number[][] = Array.from({ length: spans.length * 2 }, () => []);
   input.logged.forEach((c, i) => {
     const m = monthIndex(c.day);
-    if (m >= 0) loggedByMonth[m]!.push(i);
+    if (m >= 0) loggedByMonth[slot(m, c.pool)]!.push(i);
   });
 
-  const record = input.recordDraws === true;
+  const from = input.recordDrawsFrom;
+  const record = from !== undefined;
   const result: LedgerResult = {
     rows: [],
     plannedGot: new Float64Array(input.planned.length),
     loggedGot: new Float64Array(input.logged.length),
     manureRefused: new Float64Array(input.planned.length),
-    plannedDraws: record ? input.planned.map(() => []) : undefined,
-    loggedDraws: record ? input.logged.map(() => []) : undefined,
+    plannedDraws: record ? input.planned.map((c) => (c.day >= from ? [] : undefined)) : undefined,
+    loggedDraws: record ? input.logged.map((c) => (c.day >= from ? [] : undefined)) : undefined,
     agedOut: [],
     overdrawn: [],
   };
 
   spans.forEach((span, m) => {
+    if (m === input.snapshotAtMonth) {
+      result.snapshot = [];
+      for (const pool of pools) {
+        const shelf = shelves[pool];
+        for (let i = shelf.head; i < shelf.lots.length; i++) {
+          const l = shelf.lots[i]!;
+          if (l.remaining > 0)
+            result.snapshot.push({
+              id: l.id,
+              pool,
+              madeDay: l.made,
+              amount: l.remaining,
+              binId: l.binId,
+              manure: l.manure,
+            });
+        }
+      }
+    }
     for (const pool of pools) {
       const shelf = shelves[pool];
       const keep = input.keepDays[pool];
@@ -258,7 +285,7 @@ export function runLedger(input: LedgerInput): LedgerResult {
       let allocated = 0;
 
       // 1. What was done: logged applications, in date order.
-      const logged = loggedByMonth[m]!.filter((i) => input.logged[i]!.pool === pool);
+      const logged = loggedByMonth[slot(m, pool)]!;
       logged.sort((a, b) => input.logged[a]!.day - input.logged[b]!.day || a - b);
       for (const i of logged) {
         const c = input.logged[i]!;
@@ -286,7 +313,7 @@ export function runLedger(input: LedgerInput): LedgerResult {
       }
 
       // 2. What is planned: tier by tier.
-      const planned = plannedByMonth[m]!.filter((i) => input.planned[i]!.pool === pool);
+      const planned = plannedByMonth[slot(m, pool)]!;
       planned.sort((a, b) => compareClaims(input.planned[a]!, input.planned[b]!) || a - b);
       for (let t = 0; t < planned.length;) {
         const head = input.planned[planned[t]!]!;

@@ -11,7 +11,21 @@ const MIN_YEAR = 1900;
 const MAX_YEAR = 2200;
 
 /** Days since 1970-01-01 for a "YYYY-MM-DD" string; EngineInputError naming `field` otherwise. */
+// Plans parse the same few hundred dates thousands of times; valid ones are remembered.
+const dayCache = new Map<string, number>();
+
 export function toDayNumber(date: unknown, field = "date"): number {
+  if (typeof date === "string") {
+    const hit = dayCache.get(date);
+    if (hit !== undefined) return hit;
+  }
+  const day = parseDayNumber(date, field);
+  if (dayCache.size > 200_000) dayCache.clear();
+  dayCache.set(date as string, day);
+  return day;
+}
+
+function parseDayNumber(date: unknown, field: string): number {
   if (typeof date !== "string") {
     throw new EngineInputError(field, `must be a date written YYYY-MM-DD (got ${String(date)})`);
   }

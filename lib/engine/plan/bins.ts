@@ -80,17 +80,18 @@ export function buildBins(
       const i = Math.min(t, pop.worms.length - 1);
       return { worms: pop.worms[i]!, kg: pop.kg[i]! };
     };
-    const months: BinMonth[] = planSpans.map((span) => {
-      let castingsKg = 0;
-      let leachateL = 0;
-      for (const l of lots) {
-        if (l.lot.binId !== bin.id || l.source === "stock") continue;
-        if (l.lot.madeDay < span.startDay || l.lot.madeDay >= span.endDay) continue;
-        if (l.lot.pool === "castings") castingsKg += l.lot.amount;
-        else leachateL += l.lot.amount;
-      }
+    const made = planSpans.map(() => ({ castingsKg: 0, leachateL: 0 }));
+    for (const l of lots) {
+      if (l.lot.binId !== bin.id || l.source === "stock") continue;
+      const d = l.lot.madeDay;
+      if (d < ctx.planStartDay || d > ctx.planEndDay) continue;
+      const m = planSpans.findIndex((s) => d < s.endDay);
+      if (l.lot.pool === "castings") made[m]!.castingsKg += l.lot.amount;
+      else made[m]!.leachateL += l.lot.amount;
+    }
+    const months: BinMonth[] = planSpans.map((span, m) => {
       const w = wormsOn(span.endDay - 1);
-      return { month: span.month, castingsKg, leachateL, worms: w.worms, wormMassKg: w.kg };
+      return { month: span.month, ...made[m]!, worms: w.worms, wormMassKg: w.kg };
     });
 
     // Capacity: food for the month's forecast castings (at least their own mass) per week,

@@ -11,7 +11,7 @@ import { fromDayNumber } from "@/lib/engine/core/dates";
 import { closePlanGap } from "@/lib/engine/gap/close";
 import { buildBins } from "@/lib/engine/plan/bins";
 import { planContext } from "@/lib/engine/plan/context";
-import { buildDemand } from "@/lib/engine/plan/demand";
+import { buildDemand, feedingId } from "@/lib/engine/plan/demand";
 import type { GardenInputs, PlanOptions } from "@/lib/engine/plan/inputs";
 import type {
   BedDemand,
@@ -37,7 +37,16 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
     keepDays: { castings: ctx.shelfLifeDays, leachate: ctx.liquidMaxAgeDays },
     spans: ctx.spans,
   };
-  const ledger = runLedger({ ...ledgerInput, recordDraws: true });
+  // The gap search re-runs only the months from asOf on, resuming from the lots as they stood then.
+  const resumeMonth = Math.max(
+    0,
+    ctx.spans.findIndex((s) => s.endDay > ctx.asOfDay + 1),
+  );
+  const ledger = runLedger({
+    ...ledgerInput,
+    recordDrawsFrom: ctx.planStartDay,
+    snapshotAtMonth: resumeMonth,
+  });
   const planSpans = ctx.spans.slice(ctx.firstPlanMonth);
   const inPlan = (day: number) => day >= ctx.planStartDay && day <= ctx.planEndDay;
   const monthOf = (date: string) => date.slice(0, 7);
@@ -54,12 +63,13 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
     teaByMonth.set(monthOf(c.date), t);
   });
   demand.logged.forEach((c, i) => {
-    if (c.material !== "tea" || !inPlan(c.day)) return;
-    const t = teaByMonth.get(monthOf(c.date)) ?? { litres: 0, need: 0, got: 0 };
-    t.litres += c.amount;
+    const a = inputs.logs.applications[c.index]!;
+    if (a.material !== "tea" || !inPlan(c.day)) return;
+    const t = teaByMonth.get(monthOf(a.date)) ?? { litres: 0, need: 0, got: 0 };
+    t.litres += a.amount;
     t.need += c.need;
     t.got += ledger.loggedGot[i]!;
-    teaByMonth.set(monthOf(c.date), t);
+    teaByMonth.set(monthOf(a.date), t);
   });
   for (const r of ledger.rows.slice(ctx.firstPlanMonth * POOLS.length)) {
     const span = planSpans.find((s) => s.month === r.month)!;
@@ -133,23 +143,33 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
         : c.explanation,
     });
   });
+  const bedOf = new Map(inputs.plantings.map((p) => [p.id, p.bedId]));
   demand.logged.forEach((c, i) => {
     if (!inPlan(c.day)) return;
+    const a = inputs.logs.applications[c.index]!;
     const got = ledger.loggedGot[i]!;
     feedings.push({
-      id: c.id,
-      plantingId: c.plantingId,
-      bedId: c.bedId,
-      date: c.date,
-      material: c.material,
-      method: c.method,
-      amount: c.amount,
+      id: a.plannedFeedingId ?? feedingId(a.plantingId, a.material, a.date),
+      plantingId: a.plantingId,
+      bedId: bedOf.get(a.plantingId)!,
+      date: a.date,
+      material: a.material,
+      method: a.method,
+      amount: a.amount,
       need: c.need,
       allocated: got,
       coveragePct: c.need > 0 ? (100 * got) / c.need : 100,
       status: "logged",
       draws: ledger.loggedDraws?.[i] ?? [],
-      explanation: c.explanation,
+      explanation: {
+        kind: "application-logged",
+        inputs: {
+          planting: { ref: "planting", id: a.plantingId },
+          applied: { unit: a.material === "castings" ? "kg" : "L", value: a.amount },
+          drawn: { unit: c.pool === "leachate" ? "L" : "kg", value: c.need },
+          drawnFromStock: { unit: c.pool === "leachate" ? "L" : "kg", value: got },
+        },
+      },
     });
   });
   feedings.sort((a, b) => (a.date < b.date ? -1 : a.date > b.date ? 1 : a.id < b.id ? -1 : 1));
@@ -335,7 +355,21 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
     gap: null,
   };
   if (options.suggestions !== false) {
-    plan.gap = closePlanGap({ inputs, ctx, ledgerInput, supply, demand, plan });
+    const resumeDay = ctx.spans[resumeMonth]!.startDay;
+    const logged = demand.logged.filter((c) => c.day >= resumeDay);
+    plan.gap = closePlanGap({
+      inputs,
+      ctx,
+      ledgerInput: {
+        ...ledgerInput,
+        lots: ledger.snapshot ?? ledgerInput.lots,
+        logged,
+        spans: ctx.spans.slice(resumeMonth),
+      },
+      supply,
+      demand,
+      plan,
+    });
   }
   return plan;
 }

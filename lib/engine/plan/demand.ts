@@ -32,18 +32,9 @@ export interface PlannedClaim extends LedgerClaim {
   explanation: Explanation;
 }
 
+/** A logged application as the ledger needs it; `index` points into inputs.logs.applications. */
 export interface LoggedClaim extends LedgerLogged {
-  id: string;
-  logId: string;
-  plantingId: string;
-  bedId: string;
-  date: IsoDate;
-  material: Material;
-  method: Method;
-  amount: number;
-  priority: number;
-  feederClass: FeederClass;
-  explanation: Explanation;
+  index: number;
 }
 
 export const feedingId = (plantingId: string, material: Material, date: IsoDate) =>
@@ -140,29 +131,38 @@ export function buildDemand(
       });
     const phi = preHarvestBlockStart(dp, field);
     const teaRatio = p.rule?.teaCastingsPerWater ?? ctx.teaCastingsPerWater;
+    // One explanation per planting and material: every date of a planting needs the same amount.
+    const first = r.occurrences[0];
+    const need1 = first
+      ? first.material === "tea"
+        ? first.amount * teaRatio * density
+        : first.amount
+      : 0;
+    const explanation: Explanation | undefined = !first
+      ? undefined
+      : first.material === "tea"
+        ? {
+            kind: "tea-brewed",
+            inputs: {
+              planting: { ref: "planting", id: p.id },
+              tea: { unit: "L", value: first.amount },
+              castingsPerWater: { unit: "ratio", value: teaRatio },
+              bulkDensity: { unit: "ratio", value: density },
+              castings: { unit: "kg", value: need1 },
+            },
+          }
+        : {
+            kind: "demand-amount",
+            inputs: {
+              planting: { ref: "planting", id: p.id },
+              basis: { text: (rule ?? { basis: "per-plant" }).basis },
+              plants: { unit: "count", value: p.plantCount },
+              amount: { unit: first.material === "castings" ? "kg" : "L", value: first.amount },
+            },
+          };
     for (const o of r.occurrences) {
       const day = toDayNumber(o.date);
       const need = o.material === "tea" ? o.amount * teaRatio * density : o.amount;
-      const explanation: Explanation =
-        o.material === "tea"
-          ? {
-              kind: "tea-brewed",
-              inputs: {
-                tea: { unit: "L", value: o.amount },
-                castingsPerWater: { unit: "ratio", value: teaRatio },
-                bulkDensity: { unit: "ratio", value: density },
-                castings: { unit: "kg", value: need },
-              },
-            }
-          : {
-              kind: "demand-amount",
-              inputs: {
-                planting: { ref: "planting", id: p.id },
-                basis: { text: (rule ?? { basis: "per-plant" }).basis },
-                plants: { unit: "count", value: p.plantCount },
-                amount: { unit: o.material === "castings" ? "kg" : "L", value: o.amount },
-              },
-            };
       planted.push({
         id: feedingId(p.id, o.material, o.date),
         plantingId: p.id,
@@ -171,7 +171,7 @@ export function buildDemand(
         material: o.material,
         method: o.method,
         amount: o.amount,
-        explanation,
+        explanation: explanation!,
         pool: POOL_OF[o.material],
         day,
         need,
@@ -185,11 +185,13 @@ export function buildDemand(
   const logged: LoggedClaim[] = [];
   const replaced = new Set<string>();
   inputs.logs.applications.forEach((a, i) => {
-    const field = `logs.applications[${i}]`;
     const pl = plantings.get(a.plantingId);
     if (!pl)
-      throw new EngineInputError(`${field}.plantingId`, `no planting with id "${a.plantingId}"`);
-    const day = toDayNumber(a.date, `${field}.date`);
+      throw new EngineInputError(
+        `logs.applications[${i}].plantingId`,
+        `no planting with id "${a.plantingId}"`,
+      );
+    const day = toDayNumber(a.date, "logs.applications[].date");
     let need: number;
     if (a.draws.length > 0) need = a.draws.reduce((s, d) => s + d.amount, 0);
     else if (a.material === "castings") need = a.amount;
@@ -197,32 +199,10 @@ export function buildDemand(
       need = a.amount * (pl.rule?.teaCastingsPerWater ?? ctx.teaCastingsPerWater) * density;
     else
       need = a.amount / (1 + (pl.rule?.dilutionWaterParts ?? dflt("leachateDilutionWaterParts")));
-    const id = a.plannedFeedingId ?? feedingId(a.plantingId, a.material, a.date);
-    replaced.add(id);
-    logged.push({
-      id,
-      logId: a.id,
-      plantingId: a.plantingId,
-      bedId: pl.p.bedId,
-      date: a.date,
-      material: a.material,
-      method: a.method,
-      amount: a.amount,
-      priority: pl.p.priority ?? DEFAULT_PRIORITY,
-      feederClass: pl.p.feederClass,
-      pool: POOL_OF[a.material],
-      day,
-      need,
-      draws: a.draws,
-      explanation: {
-        kind: "application-logged",
-        inputs: {
-          planting: { ref: "planting", id: a.plantingId },
-          applied: { unit: a.material === "castings" ? "kg" : "L", value: a.amount },
-          drawn: { unit: a.material === "leachate" ? "L" : "kg", value: need },
-        },
-      },
-    });
+    // Planned feedings all fall after asOf: only a log that names one, or is dated after asOf, can replace it.
+    if (a.plannedFeedingId !== null) replaced.add(a.plannedFeedingId);
+    else if (day > ctx.asOfDay) replaced.add(feedingId(a.plantingId, a.material, a.date));
+    logged.push({ index: i, pool: POOL_OF[a.material], day, need, draws: a.draws });
   });
   // A logged application replaces the planned occurrence it fulfils.
   const planned = planted.filter((c) => !replaced.has(c.id));

@@ -154,27 +154,25 @@ export function simulatePopulation(input: PopulationInput, field = "population")
     }
   }
 
-  const juvenileKg = (t: number) => {
-    let sum = 0;
-    for (let s = 0; s < M; s++) {
-      const n = juveniles[s] as number;
-      if (n > 0) sum += n * ((((t - s) % M) + M) % M) + n;
-    }
-    return (sum / M) * adultKg;
-  };
-  const snapshot = (t: number): PopulationDay => {
-    let c = 0;
-    for (let s = 0; s < I; s++) c += cocoons[s] as number;
-    let j = 0;
-    for (let s = 0; s < M; s++) j += juveniles[s] as number;
-    return {
-      day: t,
-      adults,
-      juveniles: j,
-      cocoons: c,
-      worms: adults + j,
-      biomassKg: adults * adultKg + juvenileKg(t),
-    };
+  // Running totals instead of sweeping the rings every day (the bench replays years of days):
+  // jTotal = juveniles; ageSum = Σ juveniles × age in days (0 … M−1); cTotal = cocoons.
+  let jTotal = 0;
+  let ageSum = 0;
+  let cTotal = 0;
+  for (let s = 0; s < I; s++) cTotal += cocoons[s] as number;
+  // A juvenile of age a weighs (a + 1) / M of an adult (it grows linearly to maturity).
+  const snapshot = (t: number): PopulationDay => ({
+    day: t,
+    adults,
+    juveniles: jTotal,
+    cocoons: cTotal,
+    worms: adults + jTotal,
+    biomassKg: adults * adultKg + ((ageSum + jTotal) / M) * adultKg,
+  });
+  const scaleJuveniles = (k: number) => {
+    for (let s = 0; s < M; s++) juveniles[s] = (juveniles[s] as number) * k;
+    jTotal *= k;
+    ageSum *= k;
   };
 
   const series: PopulationDay[] = [snapshot(0)];
@@ -182,14 +180,12 @@ export function simulatePopulation(input: PopulationInput, field = "population")
     if (input.surfaceOnDay) ceilingWorms = ceilingKgFor(input.surfaceOnDay(t)) / adultKg;
     const change = input.changes?.get(t);
     if (change) {
-      let j = 0;
-      for (let s = 0; s < M; s++) j += juveniles[s] as number;
-      const total = adults + j;
+      const total = adults + jTotal;
       const target = Math.max(0, change.set ?? total + (change.add ?? 0));
       if (total > 0) {
         const k = target / total;
         adults *= k;
-        for (let s = 0; s < M; s++) juveniles[s] = (juveniles[s] as number) * k;
+        scaleJuveniles(k);
       } else adults = target;
     }
     const ci = t % I;
@@ -197,14 +193,19 @@ export function simulatePopulation(input: PopulationInput, field = "population")
     const hatched = (cocoons[ci] as number) * yieldPerCocoon;
     if (survive < 1) {
       adults *= survive;
-      for (let s = 0; s < M; s++) juveniles[s] = (juveniles[s] as number) * survive;
+      scaleJuveniles(survive);
     }
-    adults += juveniles[ji] as number;
+    // Everyone ages a day; the slot hatched M days ago (age M − 1) matures.
+    const maturing = juveniles[ji] as number;
+    ageSum += jTotal - maturing - maturing * (M - 1);
+    jTotal -= maturing;
+    adults += maturing;
     juveniles[ji] = hatched;
-    let committed = adults;
-    for (let s = 0; s < M; s++) committed += juveniles[s] as number;
-    for (let s = 0; s < I; s++) if (s !== ci) committed += (cocoons[s] as number) * yieldPerCocoon;
+    jTotal += hatched;
+    const committed = adults + jTotal + (cTotal - (cocoons[ci] as number)) * yieldPerCocoon;
+    cTotal -= cocoons[ci] as number;
     cocoons[ci] = adults * layPerAdultDay * density(committed);
+    cTotal += cocoons[ci] as number;
     series.push(snapshot(t));
   }
   return { series, final: series[series.length - 1] as PopulationDay, ceilingKg, params: p };
