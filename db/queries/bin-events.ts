@@ -40,7 +40,9 @@ export interface BinLogEntry {
 const eventKind = (kind: string, foodKg: number | null, note: string | null): BinEventKind => {
   switch (kind) {
     case "feeding":
-      return foodKg === null && (note ?? "").startsWith(BEDDING_NOTE) ? "bedding-added" : "food-added";
+      return foodKg === null && (note ?? "").startsWith(BEDDING_NOTE)
+        ? "bedding-added"
+        : "food-added";
     case "tray-added":
       return "tray-added";
     case "harvest":
@@ -153,7 +155,9 @@ export async function listBinLog({
   ];
   return entries
     .filter((e) => !kind || e.kind === kind)
-    .sort((a, b) => (a.on === b.on ? b.loggedAt.localeCompare(a.loggedAt) : b.on.localeCompare(a.on)))
+    .sort((a, b) =>
+      a.on === b.on ? b.loggedAt.localeCompare(a.loggedAt) : b.on.localeCompare(a.on),
+    )
     .slice(0, limit);
 }
 
@@ -214,7 +218,12 @@ export async function insertWormMove(
   input: EventBase & { worms: number; to: { gardenId: string; binId: string } | null },
 ): Promise<{ moveIds: string[] }> {
   const sameGarden = input.to?.gardenId === input.gardenId;
-  const base = { movedOn: input.on, wormCount: input.worms, note: input.note, loggedBy: input.loggedBy };
+  const base = {
+    movedOn: input.on,
+    wormCount: input.worms,
+    note: input.note,
+    loggedBy: input.loggedBy,
+  };
   const first = await tx
     .insert(wormMoves)
     .values({

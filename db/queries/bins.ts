@@ -56,7 +56,9 @@ export type BinDto = {
 };
 
 /** A bin row as written: SI sizes, worm count, nullable engine parameters. */
-export type BinValues = Omit<BinDto, "id" | "gardenId" | "retiredOn"> & { retiredOn?: string | null };
+export type BinValues = Omit<BinDto, "id" | "gardenId" | "retiredOn"> & {
+  retiredOn?: string | null;
+};
 
 export async function listBins({ gardenId }: { gardenId: string }): Promise<BinDto[]> {
   const db = await getDb();
@@ -132,7 +134,11 @@ export async function countLoggedWorms(
     .for("update");
   if (!bin) throw new AppError("not_found:bin");
   const [counted] = await tx
-    .select({ on: binEvents.occurredOn, worms: binEvents.wormCount, createdAt: binEvents.createdAt })
+    .select({
+      on: binEvents.occurredOn,
+      worms: binEvents.wormCount,
+      createdAt: binEvents.createdAt,
+    })
     .from(binEvents)
     .where(
       and(

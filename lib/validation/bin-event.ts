@@ -70,14 +70,28 @@ export const binEventSchema = z.discriminatedUnion(
       ...base,
       worms: wormAmountSchema,
       // Another bin (in this or another garden the person belongs to), or null: out of the system.
-      to: z.object({ gardenId: z.uuid("Choose a garden."), binId: z.uuid("Choose a bin.") }).nullable(),
+      to: z
+        .object({ gardenId: z.uuid("Choose a garden."), binId: z.uuid("Choose a bin.") })
+        .nullable(),
     }),
     z
       .object({
         kind: z.literal("observation"),
         ...base,
-        temperatureC: z.number().finite().min(-30, "Too cold to be real.").max(60, "Too hot to be real.").nullable().optional(),
-        moisturePercent: z.number().finite().min(0, "0–100 %.").max(100, "0–100 %.").nullable().optional(),
+        temperatureC: z
+          .number()
+          .finite()
+          .min(-30, "Too cold to be real.")
+          .max(60, "Too hot to be real.")
+          .nullable()
+          .optional(),
+        moisturePercent: z
+          .number()
+          .finite()
+          .min(0, "0–100 %.")
+          .max(100, "0–100 %.")
+          .nullable()
+          .optional(),
         // A head count (or an estimate from a weighed handful): later moves are limited by it.
         wormCount: z.number().int("Count whole worms.").min(0).max(1_000_000).nullable().optional(),
       })

@@ -7,7 +7,8 @@ import type { TraySizeInput, WormAmountInput } from "./bin";
 // weight through the engine's worms per lb).
 
 export function insideBox(tray: TraySizeInput): Box {
-  if (tray.mode === "inside") return { lengthM: tray.lengthM, widthM: tray.widthM, depthM: tray.depthM };
+  if (tray.mode === "inside")
+    return { lengthM: tray.lengthM, widthM: tray.widthM, depthM: tray.depthM };
   return trayInsideFromOuter({
     outerLengthM: tray.outerLengthM,
     outerWidthM: tray.outerWidthM,

@@ -83,17 +83,21 @@ const binFields = z.object({
   tray: traySizeSchema,
   startedOn: isoDateSchema,
   startingWorms: wormAmountSchema,
-  manureFeedstock: z.boolean().default(false),
-  indoors: z.boolean().default(true),
+  manureFeedstock: z.boolean(),
+  indoors: z.boolean(),
   dormantMonths: z
     .array(z.number().int().min(1).max(12), { error: "Months are 1–12." })
     .max(12)
-    .refine((m) => new Set(m).size === m.length, "Name each month once.")
-    .default([]),
+    .refine((m) => new Set(m).size === m.length, "Name each month once."),
   ...binParamsShape,
 });
 
-export const createBinSchema = binFields;
+// Defaults only on create: an edit that leaves a flag out must not reset it.
+export const createBinSchema = binFields.extend({
+  manureFeedstock: binFields.shape.manureFeedstock.default(false),
+  indoors: binFields.shape.indoors.default(true),
+  dormantMonths: binFields.shape.dormantMonths.default([]),
+});
 export type CreateBinInput = z.infer<typeof createBinSchema>;
 
 export const updateBinSchema = binFields

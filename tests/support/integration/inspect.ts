@@ -58,7 +58,18 @@ export async function countRows(table: string): Promise<number> {
 }
 
 // sign_in_attempts is left out on purpose: a refused sign-in is meant to be recorded.
-const SNAPSHOT_TABLES = ["users", "gardens", "memberships", "invitations", "password_reset_tokens"];
+const SNAPSHOT_TABLES = [
+  "users",
+  "gardens",
+  "memberships",
+  "invitations",
+  "password_reset_tokens",
+  "bins",
+  "bin_events",
+  "worm_moves",
+  "stock_lots",
+  "uploads",
+];
 
 /** Everything a role-gated mutation could touch, as one comparable value. */
 export async function snapshotDb(): Promise<string> {

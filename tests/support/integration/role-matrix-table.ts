@@ -1,4 +1,9 @@
 import * as accountPassword from "@/app/api/account/password/route";
+import * as binEvents from "@/app/api/gardens/[gardenId]/bins/[binId]/events/route";
+import * as bin from "@/app/api/gardens/[gardenId]/bins/[binId]/route";
+import * as bins from "@/app/api/gardens/[gardenId]/bins/route";
+import * as lot from "@/app/api/gardens/[gardenId]/lots/[lotId]/route";
+import * as lots from "@/app/api/gardens/[gardenId]/lots/route";
 import * as account from "@/app/api/account/route";
 import * as devOutbox from "@/app/api/dev/outbox/route";
 import * as resend from "@/app/api/gardens/[gardenId]/invitations/[invitationId]/resend/route";
@@ -17,6 +22,7 @@ import * as session from "@/app/api/session/route";
 import { createInvitation } from "@/db/queries/invitations";
 import { createPasswordReset } from "@/db/queries/password-resets";
 import { createLinkToken } from "@/lib/auth/tokens";
+import { binBody, seedBin, seedBoughtLot } from "./bins";
 import {
   gardenInput,
   uniqueEmail,
@@ -91,6 +97,15 @@ const ownerOnly = (ok: number) => ({
   viewer: 403,
   helper: 403,
   grower: 403,
+  owner: ok,
+  outsider: 404,
+});
+
+const atLeast = (minimum: "helper" | "grower", ok: number) => ({
+  signedOut: 401,
+  viewer: 403,
+  helper: minimum === "helper" ? ok : 403,
+  grower: ok,
   owner: ok,
   outsider: 404,
 });
@@ -386,6 +401,153 @@ export const roleMatrix: MatrixRow[] = [
     request: async (ctx) => {
       const { token } = await openInvitation(ctx, ctx.user.email);
       return { url: "/api/invitations/accept", body: { token } };
+    },
+  },
+
+  // Issue 11: bins, the bin log and stock.
+  {
+    method: "GET",
+    file: "app/api/gardens/[gardenId]/bins/route.ts",
+    handler: bins.GET,
+    mutates: false,
+    expect: viewerPlus,
+    request: (ctx) => ({ url: `/api/gardens/${ctx.world.gardenId}/bins`, params: g(ctx) }),
+  },
+  {
+    method: "POST",
+    file: "app/api/gardens/[gardenId]/bins/route.ts",
+    handler: bins.POST,
+    mutates: true,
+    expect: atLeast("grower", 201),
+    request: (ctx) => ({
+      url: `/api/gardens/${ctx.world.gardenId}/bins`,
+      params: g(ctx),
+      body: binBody(),
+    }),
+  },
+  {
+    method: "GET",
+    file: "app/api/gardens/[gardenId]/bins/[binId]/route.ts",
+    handler: bin.GET,
+    mutates: false,
+    expect: viewerPlus,
+    request: async (ctx) => {
+      const { id: binId } = await seedBin(ctx.world.gardenId);
+      return {
+        url: `/api/gardens/${ctx.world.gardenId}/bins/${binId}`,
+        params: { ...g(ctx), binId },
+      };
+    },
+  },
+  {
+    method: "PATCH",
+    file: "app/api/gardens/[gardenId]/bins/[binId]/route.ts",
+    handler: bin.PATCH,
+    mutates: true,
+    expect: atLeast("grower", 200),
+    request: async (ctx) => {
+      const { id: binId } = await seedBin(ctx.world.gardenId);
+      return {
+        url: `/api/gardens/${ctx.world.gardenId}/bins/${binId}`,
+        params: { ...g(ctx), binId },
+        body: { name: "Shed stack (renamed)", processingDays: 120 },
+      };
+    },
+  },
+  {
+    method: "DELETE",
+    file: "app/api/gardens/[gardenId]/bins/[binId]/route.ts",
+    variant: "retire",
+    handler: bin.DELETE,
+    mutates: true,
+    expect: atLeast("grower", 200),
+    request: async (ctx) => {
+      const { id: binId } = await seedBin(ctx.world.gardenId);
+      return {
+        url: `/api/gardens/${ctx.world.gardenId}/bins/${binId}`,
+        params: { ...g(ctx), binId },
+      };
+    },
+  },
+  {
+    method: "GET",
+    file: "app/api/gardens/[gardenId]/bins/[binId]/events/route.ts",
+    handler: binEvents.GET,
+    mutates: false,
+    expect: viewerPlus,
+    request: async (ctx) => {
+      const { id: binId } = await seedBin(ctx.world.gardenId);
+      return {
+        url: `/api/gardens/${ctx.world.gardenId}/bins/${binId}/events?kind=observation`,
+        params: { ...g(ctx), binId },
+      };
+    },
+  },
+  {
+    method: "POST",
+    file: "app/api/gardens/[gardenId]/bins/[binId]/events/route.ts",
+    variant: "tray harvested (writes a lot too)",
+    handler: binEvents.POST,
+    mutates: true,
+    expect: atLeast("helper", 201),
+    request: async (ctx) => {
+      const { id: binId } = await seedBin(ctx.world.gardenId);
+      return {
+        url: `/api/gardens/${ctx.world.gardenId}/bins/${binId}/events`,
+        params: { ...g(ctx), binId },
+        body: { kind: "tray-harvested", on: "2026-04-20", castingsKg: 18 },
+      };
+    },
+  },
+  {
+    method: "GET",
+    file: "app/api/gardens/[gardenId]/lots/route.ts",
+    handler: lots.GET,
+    mutates: false,
+    expect: viewerPlus,
+    request: (ctx) => ({ url: `/api/gardens/${ctx.world.gardenId}/lots`, params: g(ctx) }),
+  },
+  {
+    method: "POST",
+    file: "app/api/gardens/[gardenId]/lots/route.ts",
+    variant: "a bought bag",
+    handler: lots.POST,
+    mutates: true,
+    expect: atLeast("grower", 201),
+    request: (ctx) => ({
+      url: `/api/gardens/${ctx.world.gardenId}/lots`,
+      params: g(ctx),
+      body: { reason: "bought", material: "castings", producedOn: "2026-11-01", amountSi: 9 },
+    }),
+  },
+  {
+    method: "GET",
+    file: "app/api/gardens/[gardenId]/lots/[lotId]/route.ts",
+    handler: lot.GET,
+    mutates: false,
+    expect: viewerPlus,
+    request: async (ctx) => {
+      const { lotId } = await seedBoughtLot(ctx.world.gardenId);
+      return {
+        url: `/api/gardens/${ctx.world.gardenId}/lots/${lotId}`,
+        params: { ...g(ctx), lotId },
+      };
+    },
+  },
+  {
+    method: "PATCH",
+    file: "app/api/gardens/[gardenId]/lots/[lotId]/route.ts",
+    variant: "spilled part of a bought bag",
+    handler: lot.PATCH,
+    mutates: true,
+    expect: atLeast("grower", 200),
+    request: async (ctx) => {
+      const { lotId } = await seedBoughtLot(ctx.world.gardenId);
+      return {
+        url: `/api/gardens/${ctx.world.gardenId}/lots/${lotId}`,
+        params: { ...g(ctx), lotId },
+        body: { reason: "spilled", removeSi: 1.5 },
+      };
     },
   },
 ];

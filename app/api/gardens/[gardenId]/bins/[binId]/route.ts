@@ -31,7 +31,11 @@ export const PATCH = route<Params>(async (request, { params }) => {
   const values: Partial<BinValues> = { ...rest };
   if (tray) {
     const box = trayBox(tray);
-    Object.assign(values, { trayLengthM: box.lengthM, trayWidthM: box.widthM, trayDepthM: box.depthM });
+    Object.assign(values, {
+      trayLengthM: box.lengthM,
+      trayWidthM: box.widthM,
+      trayDepthM: box.depthM,
+    });
   }
   if (startingWorms) values.startingWormCount = wormCount(startingWorms);
   const startedOn = values.startedOn ?? bin.startedOn;

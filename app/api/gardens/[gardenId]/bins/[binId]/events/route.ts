@@ -8,7 +8,7 @@ import { AppError } from "@/lib/errors";
 import { parseJson, parseParams, parseWith, route } from "@/lib/http";
 import { binEventFilterSchema, binEventSchema } from "@/lib/validation/bin-event";
 import { todayIn } from "@/lib/validation/bin-values";
-import { writeBinEvent } from "./write-bin-event";
+import { checkWormTarget, writeBinEvent } from "./write-bin-event";
 
 const paramsSchema = z.object({ gardenId: z.uuid(), binId: z.uuid() });
 type Params = z.infer<typeof paramsSchema>;
@@ -45,9 +45,15 @@ export const POST = route<Params>(async (request, { params }) => {
     throw new AppError("validation:on", `This bin was retired on ${bin.retiredOn}.`, {
       on: `is after the bin was retired (${bin.retiredOn})`,
     });
+  if (input.kind === "worms-moved") await checkWormTarget(member, bin, input);
   const db = await getDb();
   const result = await db.transaction((tx) =>
-    writeBinEvent(tx, { member, bin, input, confirm: new URL(request.url).searchParams.has("confirm") }),
+    writeBinEvent(tx, {
+      member,
+      bin,
+      input,
+      confirm: new URL(request.url).searchParams.has("confirm"),
+    }),
   );
   return Response.json(result, { status: 201 });
 });

@@ -59,12 +59,22 @@ export async function writeBinEvent(
     case "food-added": {
       const foods = input.foods.length ? `Food: ${input.foods.join(", ")}` : null;
       const note = foods ? joinNote(foods, input.note) : base.note;
-      const { eventId } = await insertSimpleEvent(tx, { ...base, note, kind: "feeding", foodKg: input.foodKg });
+      const { eventId } = await insertSimpleEvent(tx, {
+        ...base,
+        note,
+        kind: "feeding",
+        foodKg: input.foodKg,
+      });
       return { eventId, warnings: warningsForFoods(input.foods) };
     }
     case "bedding-added": {
       const note = joinNote(BEDDING_NOTE, input.note);
-      const { eventId } = await insertSimpleEvent(tx, { ...base, note, kind: "feeding", foodKg: null });
+      const { eventId } = await insertSimpleEvent(tx, {
+        ...base,
+        note,
+        kind: "feeding",
+        foodKg: null,
+      });
       return { eventId, warnings: [] };
     }
     case "tray-added": {
@@ -95,62 +105,46 @@ export async function writeBinEvent(
         throw new AppError(
           "validation:over_capacity",
           "That is more than one tray of this bin can hold. Check the unit, or confirm it.",
-          { [field]: `is more than a full tray holds (max ${cap.maxKg.toFixed(1)} kg, ${cap.volumeL.toFixed(1)} L)` },
+          {
+            [field]: `is more than a full tray holds (max ${cap.maxKg.toFixed(1)} kg, ${cap.volumeL.toFixed(1)} L)`,
+          },
         );
       }
       const note =
-        input.castingsL !== undefined ? joinNote(`Volume ${input.castingsL} L`, input.note) : base.note;
-      const made = await insertHarvest(tx, { ...base, note, castingsKg: kg, predictedKg: cap.predictedKg });
+        input.castingsL !== undefined
+          ? joinNote(`Volume ${input.castingsL} L`, input.note)
+          : base.note;
+      const made = await insertHarvest(tx, {
+        ...base,
+        note,
+        castingsKg: kg,
+        predictedKg: cap.predictedKg,
+      });
       return { eventId: made.eventId, lotId: made.lotId, warnings: [] };
     }
     case "worms-moved":
-      return moveWorms(tx, { member, bin, input, base });
+      return moveWorms(tx, { bin, input, base });
   }
 }
 
 async function moveWorms(
   tx: DbOrTx,
   {
-    member,
     bin,
     input,
     base,
   }: {
-    member: Member;
     bin: BinDto;
     input: Extract<BinEventInput, { kind: "worms-moved" }>;
     base: { gardenId: string; binId: string; on: string; loggedBy: string; note: string | null };
   },
 ): Promise<WriteResult> {
   const worms = wormCount(input.worms);
-  if (input.to) {
-    if (input.to.binId === bin.id)
-      throw new AppError("validation:to", "Choose another bin.", { "to.binId": "is this bin" });
-    // The person must be allowed to log in the receiving garden too.
-    if (input.to.gardenId !== bin.gardenId) {
-      try {
-        await requireMembership(member.user, input.to.gardenId, "helper");
-      } catch (error) {
-        if (error instanceof AppError && error.kind === "not_found")
-          throw new AppError("validation:to", "Choose a bin in a garden you belong to.", {
-            "to.gardenId": "is not a garden you belong to",
-          });
-        throw error;
-      }
-    }
-    const target = await getBinById(input.to, tx);
-    if (!target)
-      throw new AppError("validation:to", "Choose a bin in that garden.", {
-        "to.binId": "is not a bin in that garden",
-      });
-    if (target.retiredOn && target.retiredOn < input.on)
-      throw new AppError("validation:to", "That bin is retired.", { "to.binId": "is retired" });
-    if (target.startedOn > input.on)
-      throw new AppError("validation:to", `That bin starts on ${target.startedOn}.`, {
-        "to.binId": "had not started on that day",
-      });
-  }
-  const { worms: has } = await countLoggedWorms(tx, { gardenId: bin.gardenId, binId: bin.id, on: input.on });
+  const { worms: has } = await countLoggedWorms(tx, {
+    gardenId: bin.gardenId,
+    binId: bin.id,
+    on: input.on,
+  });
   if (worms > has)
     throw new AppError(
       "conflict:worms",
@@ -161,12 +155,52 @@ async function moveWorms(
   return { eventId: null, moveIds, warnings: [] };
 }
 
+/**
+ * Checks a move's receiving bin before the transaction opens (the membership
+ * look-up uses its own connection): the person must be allowed to log in the
+ * receiving garden too, and the bin must be in use on that day.
+ */
+export async function checkWormTarget(
+  member: Member,
+  bin: BinDto,
+  input: Extract<BinEventInput, { kind: "worms-moved" }>,
+): Promise<void> {
+  if (!input.to) return;
+  if (input.to.binId === bin.id)
+    throw new AppError("validation:to", "Choose another bin.", { "to.binId": "is this bin" });
+  // The person must be allowed to log in the receiving garden too.
+  if (input.to.gardenId !== bin.gardenId) {
+    try {
+      await requireMembership(member.user, input.to.gardenId, "helper");
+    } catch (error) {
+      if (error instanceof AppError && error.kind === "not_found")
+        throw new AppError("validation:to", "Choose a bin in a garden you belong to.", {
+          "to.gardenId": "is not a garden you belong to",
+        });
+      throw error;
+    }
+  }
+  const target = await getBinById(input.to);
+  if (!target)
+    throw new AppError("validation:to", "Choose a bin in that garden.", {
+      "to.binId": "is not a bin in that garden",
+    });
+  if (target.retiredOn && target.retiredOn < input.on)
+    throw new AppError("validation:to", "That bin is retired.", { "to.binId": "is retired" });
+  if (target.startedOn > input.on)
+    throw new AppError("validation:to", `That bin starts on ${target.startedOn}.`, {
+      "to.binId": "had not started on that day",
+    });
+}
+
 /** The comfortable band for composting worms, 55–77 °F (13–25 °C); common practice. */
 export const TEMPERATURE_BAND_C = { low: 12.8, high: 25 } as const;
 
 function temperatureWarnings(c: number | null | undefined): string[] {
   if (c == null) return [];
-  if (c < TEMPERATURE_BAND_C.low) return ["Below the worms' comfortable band: they slow down and eat less."];
-  if (c > TEMPERATURE_BAND_C.high) return ["Above the worms' comfortable band: shade or cool the bin."];
+  if (c < TEMPERATURE_BAND_C.low)
+    return ["Below the worms' comfortable band: they slow down and eat less."];
+  if (c > TEMPERATURE_BAND_C.high)
+    return ["Above the worms' comfortable band: shade or cool the bin."];
   return [];
 }
