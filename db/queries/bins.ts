@@ -1,7 +1,7 @@
 import "server-only";
-import { and, asc, desc, eq, isNotNull, lte, or, sql } from "drizzle-orm";
+import { and, asc, desc, eq, inArray, isNotNull, isNull, lte, or, sql } from "drizzle-orm";
 import { getDb, type DbOrTx } from "@/db";
-import { binEvents, bins, gardens, stockLots, wormMoves } from "@/db/schema";
+import { binEvents, bins, gardens, memberships, stockLots, wormMoves } from "@/db/schema";
 import { AppError } from "@/lib/errors";
 
 // Bins of one garden. Every query is scoped by gardenId; a bin id from
@@ -208,4 +208,24 @@ export async function getStockSettings({ gardenId }: { gardenId: string }) {
     .limit(1);
   if (!row) throw new AppError("not_found:garden");
   return row;
+}
+
+/** Bins a person may move worms into: in use, in any garden where they are helper or above. */
+export async function listMoveTargets({ userId }: { userId: string }) {
+  const db = await getDb();
+  return db
+    .select({
+      gardenId: bins.gardenId,
+      gardenName: gardens.name,
+      binId: bins.id,
+      binName: bins.name,
+    })
+    .from(bins)
+    .innerJoin(gardens, eq(gardens.id, bins.gardenId))
+    .innerJoin(
+      memberships,
+      and(eq(memberships.gardenId, bins.gardenId), eq(memberships.userId, userId)),
+    )
+    .where(and(isNull(bins.retiredOn), inArray(memberships.role, ["helper", "grower", "owner"])))
+    .orderBy(asc(gardens.name), asc(bins.name));
 }

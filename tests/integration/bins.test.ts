@@ -87,7 +87,7 @@ describe("bins", () => {
       ],
       // Outer 2 in wide from 2× boards (1½ in thick each side) leaves no inside.
       [{ tray: { mode: "outer", outerLengthM: 0.6, outerWidthM: 2 * INCH, board: "2x6" } }, "tray"],
-      [{ startedOn: "2999-01-01" }, "startedOn"],
+      [{ startedOn: "2026-02-30" }, "startedOn"],
       [{ startingWorms: { count: -5 } }, "startingWorms"],
       [{ fillFraction: 3 }, "fillFraction"],
       [{ dormantMonths: [1, 1] }, "dormantMonths"],

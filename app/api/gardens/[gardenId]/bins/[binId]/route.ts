@@ -40,10 +40,6 @@ export const PATCH = route<Params>(async (request, { params }) => {
   if (startingWorms) values.startingWormCount = wormCount(startingWorms);
   const startedOn = values.startedOn ?? bin.startedOn;
   const retiredOn = "retiredOn" in values ? values.retiredOn : bin.retiredOn;
-  if (startedOn > todayIn(garden.timeZone))
-    throw new AppError("validation:started", "A bin cannot start in the future.", {
-      startedOn: "is after today",
-    });
   if (retiredOn && retiredOn < startedOn)
     throw new AppError("validation:retired", "A bin cannot retire before it started.", {
       retiredOn: "is before the start date",
