@@ -60,7 +60,7 @@ export function main(): void {
   for (const n of SIZES) {
     const inputs: GardenInputs = benchGarden(n);
     const rss0 = process.memoryUsage().rss;
-    let t = performance.now();
+    const t = performance.now();
     const first = computePlan(inputs, { suggestions: false });
     const cold = performance.now() - t;
     const ms = time(() => computePlan(inputs, { suggestions: false }), n >= 5000 ? 9 : 21);

@@ -18,7 +18,7 @@ CREATE TABLE "application_draws" (
 	"garden_id" uuid NOT NULL,
 	"application_id" uuid NOT NULL,
 	"lot_id" uuid NOT NULL,
-	"amount_si" numeric(14, 6) NOT NULL,
+	"amount_si" double precision NOT NULL,
 	CONSTRAINT "application_draws_application_id_lot_id_pk" PRIMARY KEY("application_id","lot_id"),
 	CONSTRAINT "application_draws_amount_positive" CHECK ("application_draws"."amount_si" > 0)
 );
@@ -47,9 +47,19 @@ ALTER TABLE "applications" DROP CONSTRAINT "applications_bed_id_beds_id_fk";
 --> statement-breakpoint
 ALTER TABLE "applications" DROP CONSTRAINT "applications_lot_id_stock_lots_id_fk";
 --> statement-breakpoint
+ALTER TABLE "gardens" ALTER COLUMN "castings_price_per_kg" SET DATA TYPE double precision;
+--> statement-breakpoint
 ALTER TABLE "gardens" ALTER COLUMN "castings_price_per_kg" DROP DEFAULT;
 --> statement-breakpoint
 ALTER TABLE "gardens" ALTER COLUMN "castings_price_per_kg" DROP NOT NULL;
+--> statement-breakpoint
+ALTER TABLE "beds" ALTER COLUMN "length_m" SET DATA TYPE double precision;
+--> statement-breakpoint
+ALTER TABLE "beds" ALTER COLUMN "width_m" SET DATA TYPE double precision;
+--> statement-breakpoint
+ALTER TABLE "beds" ALTER COLUMN "depth_m" SET DATA TYPE double precision;
+--> statement-breakpoint
+ALTER TABLE "beds" ALTER COLUMN "container_volume_l" SET DATA TYPE double precision;
 --> statement-breakpoint
 ALTER TABLE "crops" ALTER COLUMN "name" DROP NOT NULL;
 --> statement-breakpoint
@@ -57,11 +67,31 @@ ALTER TABLE "crops" ALTER COLUMN "edible_touches_soil" DROP DEFAULT;
 --> statement-breakpoint
 ALTER TABLE "crops" ALTER COLUMN "edible" DROP DEFAULT;
 --> statement-breakpoint
+ALTER TABLE "feeding_rules" ALTER COLUMN "amount_si" SET DATA TYPE double precision;
+--> statement-breakpoint
 ALTER TABLE "plantings" ALTER COLUMN "plant_count" DROP DEFAULT;
+--> statement-breakpoint
+ALTER TABLE "plantings" ALTER COLUMN "area_m2" SET DATA TYPE double precision;
 --> statement-breakpoint
 ALTER TABLE "plantings" ALTER COLUMN "priority" DROP DEFAULT;
 --> statement-breakpoint
 ALTER TABLE "plantings" ALTER COLUMN "priority" DROP NOT NULL;
+--> statement-breakpoint
+ALTER TABLE "bin_events" ALTER COLUMN "food_kg" SET DATA TYPE double precision;
+--> statement-breakpoint
+ALTER TABLE "bin_events" ALTER COLUMN "castings_kg" SET DATA TYPE double precision;
+--> statement-breakpoint
+ALTER TABLE "bin_events" ALTER COLUMN "liquid_l" SET DATA TYPE double precision;
+--> statement-breakpoint
+ALTER TABLE "bin_events" ALTER COLUMN "temperature_c" SET DATA TYPE double precision;
+--> statement-breakpoint
+ALTER TABLE "bin_events" ALTER COLUMN "moisture_percent" SET DATA TYPE double precision;
+--> statement-breakpoint
+ALTER TABLE "bins" ALTER COLUMN "tray_length_m" SET DATA TYPE double precision;
+--> statement-breakpoint
+ALTER TABLE "bins" ALTER COLUMN "tray_width_m" SET DATA TYPE double precision;
+--> statement-breakpoint
+ALTER TABLE "bins" ALTER COLUMN "tray_depth_m" SET DATA TYPE double precision;
 --> statement-breakpoint
 ALTER TABLE "bins" ALTER COLUMN "rotation_days" DROP DEFAULT;
 --> statement-breakpoint
@@ -71,27 +101,37 @@ ALTER TABLE "bins" ALTER COLUMN "processing_days" DROP DEFAULT;
 --> statement-breakpoint
 ALTER TABLE "bins" ALTER COLUMN "processing_days" DROP NOT NULL;
 --> statement-breakpoint
+ALTER TABLE "bins" ALTER COLUMN "fill_fraction" SET DATA TYPE double precision;
+--> statement-breakpoint
 ALTER TABLE "bins" ALTER COLUMN "fill_fraction" DROP DEFAULT;
 --> statement-breakpoint
 ALTER TABLE "bins" ALTER COLUMN "fill_fraction" DROP NOT NULL;
+--> statement-breakpoint
+ALTER TABLE "bins" ALTER COLUMN "bulk_density_kg_per_l" SET DATA TYPE double precision;
 --> statement-breakpoint
 ALTER TABLE "bins" ALTER COLUMN "bulk_density_kg_per_l" DROP DEFAULT;
 --> statement-breakpoint
 ALTER TABLE "bins" ALTER COLUMN "bulk_density_kg_per_l" DROP NOT NULL;
 --> statement-breakpoint
+ALTER TABLE "bins" ALTER COLUMN "leachate_estimate_l_per_week" SET DATA TYPE double precision;
+--> statement-breakpoint
 ALTER TABLE "bins" ALTER COLUMN "leachate_estimate_l_per_week" DROP DEFAULT;
 --> statement-breakpoint
 ALTER TABLE "bins" ALTER COLUMN "leachate_estimate_l_per_week" DROP NOT NULL;
+--> statement-breakpoint
+ALTER TABLE "stock_lots" ALTER COLUMN "initial_amount_si" SET DATA TYPE double precision;
 --> statement-breakpoint
 ALTER TABLE "stock_lots" ALTER COLUMN "manure_feedstock" DROP DEFAULT;
 --> statement-breakpoint
 ALTER TABLE "stock_lots" ALTER COLUMN "manure_feedstock" DROP NOT NULL;
 --> statement-breakpoint
+ALTER TABLE "applications" ALTER COLUMN "amount_si" SET DATA TYPE double precision;
+--> statement-breakpoint
 ALTER TABLE "gardens" ADD COLUMN "shelf_life_days" smallint;
 --> statement-breakpoint
 ALTER TABLE "gardens" ADD COLUMN "liquid_max_age_days" smallint;
 --> statement-breakpoint
-ALTER TABLE "gardens" ADD COLUMN "tea_castings_per_water" numeric(14, 6);
+ALTER TABLE "gardens" ADD COLUMN "tea_castings_per_water" double precision;
 --> statement-breakpoint
 ALTER TABLE "feeding_rules" ADD COLUMN "amount_measure" "amount_measure";
 --> statement-breakpoint
@@ -102,15 +142,15 @@ UPDATE "feeding_rules" SET "amount_measure" = CASE
 --> statement-breakpoint
 ALTER TABLE "feeding_rules" ALTER COLUMN "amount_measure" SET NOT NULL;
 --> statement-breakpoint
-ALTER TABLE "feeding_rules" ADD COLUMN "dilution_water_parts" numeric(14, 6);
+ALTER TABLE "feeding_rules" ADD COLUMN "dilution_water_parts" double precision;
 --> statement-breakpoint
-ALTER TABLE "feeding_rules" ADD COLUMN "tea_castings_per_water" numeric(14, 6);
+ALTER TABLE "feeding_rules" ADD COLUMN "tea_castings_per_water" double precision;
 --> statement-breakpoint
-ALTER TABLE "bin_events" ADD COLUMN "predicted_castings_kg" numeric(14, 6);
+ALTER TABLE "bin_events" ADD COLUMN "predicted_castings_kg" double precision;
 --> statement-breakpoint
-ALTER TABLE "bins" ADD COLUMN "intake_fraction_per_day" numeric(14, 6);
+ALTER TABLE "bins" ADD COLUMN "intake_fraction_per_day" double precision;
 --> statement-breakpoint
-ALTER TABLE "bins" ADD COLUMN "density_ceiling_kg_per_m2" numeric(14, 6);
+ALTER TABLE "bins" ADD COLUMN "density_ceiling_kg_per_m2" double precision;
 --> statement-breakpoint
 ALTER TABLE "applications" ADD COLUMN "planned_key" text;
 --> statement-breakpoint

@@ -35,7 +35,36 @@ export interface InsertGardenOptions {
   location?: string | null;
 }
 
-const newId = () => crypto.randomUUID();
+let lastMs = 0;
+let sequence = 0;
+
+/**
+ * A time-ordered uuid (RFC 9562 version 7, with a 12-bit counter within the
+ * millisecond): rows written in one transaction share created_at, and ordering
+ * them by id then keeps the order of the file they came from, so a garden read
+ * back lists its plantings and logs in the same order as the file.
+ */
+function newId(): string {
+  let ms = Date.now();
+  if (ms <= lastMs) {
+    sequence += 1;
+    if (sequence > 0xfff) {
+      lastMs += 1;
+      sequence = 0;
+    }
+    ms = lastMs;
+  } else {
+    lastMs = ms;
+    sequence = 0;
+  }
+  const b = crypto.randomBytes(16);
+  b.writeUIntBE(ms, 0, 6);
+  b[6] = 0x70 | (sequence >> 8);
+  b[7] = sequence & 0xff;
+  b[8] = (b[8]! & 0x3f) | 0x80;
+  const h = b.toString("hex");
+  return `${h.slice(0, 8)}-${h.slice(8, 12)}-${h.slice(12, 16)}-${h.slice(16, 20)}-${h.slice(20)}`;
+}
 
 /** A frost date as the gardens table keeps it: the month and day in the year of `asOf`. */
 function frostDate(md: MonthDay, asOf: string): string {
@@ -59,12 +88,14 @@ function ruleRow(gardenId: string, id: string, r: FeedingRuleInput) {
   };
 }
 
-/** The planned-feeding id `${plantingId}:${material}:${date}` with the planting's new id. */
-function remapPlannedKey(key: string | null, plantingIds: ReadonlyMap<string, string>) {
-  if (key === null) return null;
-  const cut = key.indexOf(":");
-  const planting = cut > 0 ? plantingIds.get(key.slice(0, cut)) : undefined;
-  return planting ? planting + key.slice(cut) : key;
+/**
+ * The planned feeding an application fulfils, renamed with its planting's new
+ * id: the engine's ids are `${plantingId}:${material}:${date}` (feedingId), and
+ * an application fulfils a feeding of its own planting.
+ */
+function remapPlannedKey(key: string | null, oldPlantingId: string, newPlantingId: string) {
+  if (key === null || !key.startsWith(`${oldPlantingId}:`)) return key;
+  return newPlantingId + key.slice(oldPlantingId.length);
 }
 
 export async function insertGardenInputs(
@@ -210,6 +241,7 @@ export async function insertGardenInputs(
   // makes its lot, whose id the applications' draws name.
   for (const h of logs.harvests) {
     const made = await insertHarvest(tx, {
+      ids: { eventId: newId(), lotId: newId() },
       gardenId,
       binId: mapped(h.binId),
       on: h.date,
@@ -220,6 +252,7 @@ export async function insertGardenInputs(
   }
   for (const d of logs.drains) {
     const made = await insertDrain(tx, {
+      ids: { eventId: newId(), lotId: newId() },
       gardenId,
       binId: mapped(d.binId),
       on: d.date,
@@ -254,20 +287,21 @@ export async function insertGardenInputs(
       })),
     );
   }
-  // Oldest first, so every draw is checked against the stock left at its time.
-  const plantingIds = new Map(inputs.plantings.map((p) => [p.id, mapped(p.id)]));
+  // Ids in file order (the order they read back in); written oldest first, so
+  // every draw is checked against the stock left at its time.
+  for (const a of logs.applications) idFor(a.id);
   for (const a of [...logs.applications].sort((x, y) => x.date.localeCompare(y.date))) {
-    const made = await insertApplicationWithDraws(tx, {
+    await insertApplicationWithDraws(tx, {
+      id: mapped(a.id),
       gardenId,
       plantingId: mapped(a.plantingId),
       appliedOn: a.date,
       material: a.material,
       method: a.method,
       amountSi: a.amount,
-      plannedKey: remapPlannedKey(a.plannedFeedingId, plantingIds),
+      plannedKey: remapPlannedKey(a.plannedFeedingId, a.plantingId, mapped(a.plantingId)),
       draws: a.draws.map((d) => ({ lotId: mapped(d.lotId), amountSi: d.amount })),
     });
-    ids.set(a.id, made.id);
   }
   return { gardenId, ids };
 }

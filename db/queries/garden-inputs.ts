@@ -11,6 +11,7 @@ import {
   feedingRules,
   gardens,
   plantings,
+  stockAdjustments,
   stockLots,
   wormMoves,
 } from "@/db/schema";
@@ -21,6 +22,8 @@ import { AppError } from "@/lib/errors";
 // no conversion to the grower's units and back. A null engine parameter stays
 // null (the engine's default). One query per table, each scoped by gardenId,
 // all in one read transaction so they see the same moment of the garden.
+// Rows come in the order they were written (created_at, then the time-ordered
+// ids of an import), so a garden plans in the same order as the file it came from.
 
 function monthDay(date: string): MonthDay {
   return { month: Number(date.slice(5, 7)), day: Number(date.slice(8, 10)) };
@@ -61,24 +64,24 @@ export async function readGardenInputs(
     .select()
     .from(bins)
     .where(eq(bins.gardenId, gardenId))
-    .orderBy(asc(bins.startedOn), asc(bins.name), asc(bins.id));
+    .orderBy(asc(bins.createdAt), asc(bins.id));
   const bedRows = await tx
     .select()
     .from(beds)
     .where(eq(beds.gardenId, gardenId))
-    .orderBy(asc(beds.name), asc(beds.id));
+    .orderBy(asc(beds.createdAt), asc(beds.id));
   const plantingRows = await tx
     .select()
     .from(plantings)
     .where(eq(plantings.gardenId, gardenId))
-    .orderBy(asc(plantings.plantedOn), asc(plantings.id));
+    .orderBy(asc(plantings.createdAt), asc(plantings.id));
   const cropRows = await tx.select().from(crops).where(eq(crops.gardenId, gardenId));
   const ruleRows = await tx.select().from(feedingRules).where(eq(feedingRules.gardenId, gardenId));
   const lotRows = await tx
     .select()
     .from(stockLots)
     .where(and(eq(stockLots.gardenId, gardenId), lte(stockLots.producedOn, asOf)))
-    .orderBy(asc(stockLots.producedOn), asc(stockLots.id));
+    .orderBy(asc(stockLots.createdAt), asc(stockLots.id));
   const eventRows = await tx
     .select()
     .from(binEvents)
@@ -89,24 +92,34 @@ export async function readGardenInputs(
         inArray(binEvents.kind, ["harvest", "liquid-drained", "observation"]),
       ),
     )
-    .orderBy(asc(binEvents.occurredOn), asc(binEvents.id));
+    .orderBy(asc(binEvents.createdAt), asc(binEvents.id));
   const applicationRows = await tx
     .select()
     .from(applications)
     .where(and(eq(applications.gardenId, gardenId), lte(applications.appliedOn, asOf)))
-    .orderBy(asc(applications.appliedOn), asc(applications.id));
+    .orderBy(asc(applications.createdAt), asc(applications.id));
   const drawRows = await tx
     .select()
     .from(applicationDraws)
     .where(eq(applicationDraws.gardenId, gardenId))
     .orderBy(asc(applicationDraws.applicationId), asc(applicationDraws.lotId));
+  const adjustmentRows = await tx
+    .select({ lotId: stockAdjustments.lotId, amountSi: stockAdjustments.amountSi })
+    .from(stockAdjustments)
+    .where(and(eq(stockAdjustments.gardenId, gardenId), lte(stockAdjustments.adjustedOn, asOf)));
   const moveRows = await tx
     .select()
     .from(wormMoves)
     .where(and(eq(wormMoves.gardenId, gardenId), lte(wormMoves.movedOn, asOf)))
-    .orderBy(asc(wormMoves.movedOn), asc(wormMoves.id));
+    .orderBy(asc(wormMoves.createdAt), asc(wormMoves.id));
 
   const cropById = byId(cropRows);
+  // Stop-gap until GardenInputs has an adjustments log: a lot's hand adjustments
+  // up to asOf are folded into its amount as made (so a spill counts from the
+  // lot's first day, and a harvest's calibration sees the adjusted weight).
+  const adjusted = new Map<string, number>();
+  for (const a of adjustmentRows) adjusted.set(a.lotId, (adjusted.get(a.lotId) ?? 0) + a.amountSi);
+  const withAdjustments = (lotId: string, amount: number) => amount + (adjusted.get(lotId) ?? 0);
   const ruleById = byId(ruleRows);
   const lotByEvent = new Map(
     lotRows.filter((l) => l.sourceEventId !== null).map((l) => [l.sourceEventId!, l]),
@@ -205,7 +218,7 @@ export async function readGardenInputs(
         binId: l.binId,
         material: l.material,
         madeOn: l.producedOn,
-        amount: l.initialAmountSi,
+        amount: withAdjustments(l.id, l.initialAmountSi),
         manureFeedstock: l.manureFeedstock,
       })),
     logs: {
@@ -213,14 +226,14 @@ export async function readGardenInputs(
         id: lotIdOf(e.id),
         binId: e.binId,
         date: e.occurredOn,
-        castingsKg: e.castingsKg ?? 0,
+        castingsKg: withAdjustments(lotIdOf(e.id), e.castingsKg ?? 0),
         predictedKg: e.predictedCastingsKg,
       })),
       drains: eventsOf("liquid-drained").map((e) => ({
         id: lotIdOf(e.id),
         binId: e.binId,
         date: e.occurredOn,
-        litres: e.liquidL ?? 0,
+        litres: withAdjustments(lotIdOf(e.id), e.liquidL ?? 0),
       })),
       applications: applicationRows.map((a) => ({
         id: a.id,

@@ -234,25 +234,24 @@ function scenarioInputs(raw: unknown): { inputs: GardenInputs; bedSizes: Map<str
 export async function insertGardenScenario(
   tx: DbOrTx,
   { scenario, ownerId, location }: { scenario: unknown; ownerId: string; location?: string | null },
-): Promise<{ gardenId: string }> {
+): Promise<{ gardenId: string; ids: Map<string, string> }> {
   const { inputs, bedSizes } = scenarioInputs(scenario);
-  const { gardenId } = await insertGardenInputs(tx, { inputs, ownerId, bedSizes, location });
-  return { gardenId };
+  return insertGardenInputs(tx, { inputs, ownerId, bedSizes, location });
 }
 
-/** A new garden from a scenario file, owned by ownerId; one transaction, so a failure creates nothing. */
+/**
+ * A new garden from a scenario file, owned by ownerId; one transaction, so a
+ * failure creates nothing. `ids` maps each id in the file to the new row's id.
+ */
 export async function importGardenScenario({
   scenario,
   ownerId,
 }: {
   scenario: unknown;
   ownerId: string;
-}): Promise<{ gardenId: string }> {
+}): Promise<{ gardenId: string; ids: Map<string, string> }> {
   // Parse and convert before opening the transaction: it holds no locks while we check the file.
   const { inputs, bedSizes } = scenarioInputs(scenario);
   const db = await getDb();
-  return db.transaction(async (tx) => {
-    const { gardenId } = await insertGardenInputs(tx, { inputs, ownerId, bedSizes });
-    return { gardenId };
-  });
+  return db.transaction((tx) => insertGardenInputs(tx, { inputs, ownerId, bedSizes }));
 }

@@ -1,13 +1,21 @@
 import "server-only";
 import { and, asc, eq, inArray, sql } from "drizzle-orm";
 import { getDb, type DbOrTx } from "@/db";
-import { applicationDraws, applications, binEvents, stockLots } from "@/db/schema";
+import {
+  applicationDraws,
+  applications,
+  binEvents,
+  stockAdjustments,
+  stockLots,
+} from "@/db/schema";
 import { AppError } from "@/lib/errors";
 
-// The one place that writes stock: lots (from harvests and drains) and the
-// draws applications make on them. What remains in a lot is never stored; it
-// is the lot's initial amount less its draws, and the functions here check, in
-// the same transaction and with the lots locked, that no lot goes below zero.
+// The one place that writes stock: lots (from harvests and drains), the draws
+// applications make on them, and adjustments by hand (spilled, given away). What
+// remains in a lot is never stored; it is the lot's initial amount less its
+// draws plus its adjustments (negative ones take away), and the functions here
+// check, in the same transaction and with the lots locked, that no lot goes
+// below zero.
 
 /** Slack for decimal rounding: numeric(14, 6) keeps micro-units. */
 const EPSILON = 1e-6;
@@ -19,6 +27,8 @@ export interface DrawInput {
 }
 
 export interface RecordApplicationInput {
+  /** Set by an import that keeps its file's order; otherwise the database makes one. */
+  id?: string;
   gardenId: string;
   plantingId: string;
   appliedOn: string;
@@ -63,7 +73,7 @@ export async function insertApplicationWithDraws(
         .where(and(eq(stockLots.gardenId, gardenId), inArray(stockLots.id, lotIds)))
         .for("update")
     : [];
-  const drawn = await drawnSoFar(tx, gardenId, lotIds);
+  const taken = await takenSoFar(tx, gardenId, lotIds);
   const fields: Record<string, string> = {};
   draws.forEach((d, i) => {
     const lot = lots.find((l) => l.id === d.lotId);
@@ -72,7 +82,7 @@ export async function insertApplicationWithDraws(
     else if (lot.material !== pool) fields[`${at}.lotId`] = `is ${lot.material}, not ${pool}`;
     else if (lot.producedOn > input.appliedOn) fields[`${at}.lotId`] = "was made after that day";
     else if (!(d.amountSi > 0)) fields[`${at}.amountSi`] = "must be more than zero";
-    else if (d.amountSi > lot.initial - (drawn.get(lot.id) ?? 0) + EPSILON)
+    else if (d.amountSi > lot.initial - (taken.get(lot.id) ?? 0) + EPSILON)
       fields[`${at}.amountSi`] = "is more than the lot has left";
   });
   if (Object.keys(fields).length) {
@@ -82,6 +92,7 @@ export async function insertApplicationWithDraws(
   const [row] = await tx
     .insert(applications)
     .values({
+      id: input.id,
       gardenId,
       plantingId: input.plantingId,
       material: input.material,
@@ -113,20 +124,85 @@ function plannedDate(key: string): string | null {
   return m ? m[1]! : null;
 }
 
-async function drawnSoFar(tx: DbOrTx, gardenId: string, lotIds: string[]) {
-  if (!lotIds.length) return new Map<string, number>();
-  const rows = await tx
+/** Per lot: everything drawn less every adjustment (what has left the lot so far). */
+async function takenSoFar(tx: DbOrTx, gardenId: string, lotIds: string[]) {
+  const taken = new Map<string, number>();
+  if (!lotIds.length) return taken;
+  const draws = await tx
     .select({
       lotId: applicationDraws.lotId,
-      total: sql<string>`sum(${applicationDraws.amountSi})`,
+      total: sql<number>`sum(${applicationDraws.amountSi})`,
     })
     .from(applicationDraws)
     .where(and(eq(applicationDraws.gardenId, gardenId), inArray(applicationDraws.lotId, lotIds)))
     .groupBy(applicationDraws.lotId);
-  return new Map(rows.map((r) => [r.lotId, Number(r.total)]));
+  const adjustments = await tx
+    .select({
+      lotId: stockAdjustments.lotId,
+      total: sql<number>`sum(${stockAdjustments.amountSi})`,
+    })
+    .from(stockAdjustments)
+    .where(and(eq(stockAdjustments.gardenId, gardenId), inArray(stockAdjustments.lotId, lotIds)))
+    .groupBy(stockAdjustments.lotId);
+  for (const d of draws) taken.set(d.lotId, Number(d.total));
+  for (const a of adjustments) taken.set(a.lotId, (taken.get(a.lotId) ?? 0) - Number(a.total));
+  return taken;
+}
+
+export interface RecordAdjustmentInput {
+  gardenId: string;
+  lotId: string;
+  adjustedOn: string;
+  /** In the lot's unit; negative takes away (spilled, given away, spoiled), positive corrects upward. */
+  amountSi: number;
+  reason: "spilled" | "given-away" | "spoiled" | "correction";
+  note?: string | null;
+  loggedBy?: string | null;
+}
+
+/** Changes a lot by hand in one transaction; refuses to take more than the lot has left. */
+export async function recordStockAdjustment(input: RecordAdjustmentInput): Promise<{ id: string }> {
+  const db = await getDb();
+  return db.transaction(async (tx) => {
+    const [lot] = await tx
+      .select({
+        id: stockLots.id,
+        initial: stockLots.initialAmountSi,
+        producedOn: stockLots.producedOn,
+      })
+      .from(stockLots)
+      .where(and(eq(stockLots.gardenId, input.gardenId), eq(stockLots.id, input.lotId)))
+      .for("update");
+    if (!lot)
+      throw new AppError("validation:lot", undefined, { lotId: "no such lot in this garden" });
+    if (lot.producedOn > input.adjustedOn)
+      throw new AppError("validation:lot", undefined, { adjustedOn: "is before the lot was made" });
+    if (input.amountSi === 0 || !Number.isFinite(input.amountSi))
+      throw new AppError("validation:amount", undefined, { amountSi: "must not be zero" });
+    const left = lot.initial - ((await takenSoFar(tx, input.gardenId, [lot.id])).get(lot.id) ?? 0);
+    if (left + input.amountSi < -EPSILON)
+      throw new AppError("conflict:stock", undefined, {
+        amountSi: "is more than the lot has left",
+      });
+    const [row] = await tx
+      .insert(stockAdjustments)
+      .values({
+        gardenId: input.gardenId,
+        lotId: lot.id,
+        adjustedOn: input.adjustedOn,
+        amountSi: input.amountSi,
+        reason: input.reason,
+        note: input.note ?? null,
+        loggedBy: input.loggedBy ?? null,
+      })
+      .returning({ id: stockAdjustments.id });
+    return row!;
+  });
 }
 
 export interface RecordYieldInput {
+  /** Ids for the event and its lot, set by an import that keeps its file's order. */
+  ids?: { eventId: string; lotId: string };
   gardenId: string;
   binId: string;
   on: string;
@@ -142,6 +218,7 @@ export async function insertHarvest(
   const [event] = await tx
     .insert(binEvents)
     .values({
+      id: input.ids?.eventId,
       gardenId: input.gardenId,
       binId: input.binId,
       kind: "harvest",
@@ -166,6 +243,7 @@ export async function insertDrain(
   const [event] = await tx
     .insert(binEvents)
     .values({
+      id: input.ids?.eventId,
       gardenId: input.gardenId,
       binId: input.binId,
       kind: "liquid-drained",
@@ -191,6 +269,7 @@ async function insertLotFor(
   const [lot] = await tx
     .insert(stockLots)
     .values({
+      id: input.ids?.lotId,
       gardenId: input.gardenId,
       binId: input.binId,
       sourceEventId: eventId,
@@ -222,34 +301,30 @@ export interface LotStock {
   material: "castings" | "leachate";
   producedOn: string;
   initialSi: number;
-  /** Initial amount less every draw (not aged out: that is the engine's to say). */
+  /** Initial amount less every draw, plus adjustments (not aged out: that is the engine's to say). */
   remainingSi: number;
 }
 
-/** Every lot of a garden with what its draws have left, oldest first. */
+/** Every lot of a garden with what its draws and adjustments have left, oldest first. */
 export async function listLotStock({ gardenId }: { gardenId: string }): Promise<LotStock[]> {
   const db = await getDb();
-  const rows = await db
+  const lots = await db
     .select({
       id: stockLots.id,
       binId: stockLots.binId,
       material: stockLots.material,
       producedOn: stockLots.producedOn,
       initialSi: stockLots.initialAmountSi,
-      drawn: sql<string>`coalesce(sum(${applicationDraws.amountSi}), 0)`,
     })
     .from(stockLots)
-    .leftJoin(
-      applicationDraws,
-      and(
-        eq(applicationDraws.gardenId, stockLots.gardenId),
-        eq(applicationDraws.lotId, stockLots.id),
-      ),
-    )
     .where(eq(stockLots.gardenId, gardenId))
-    .groupBy(stockLots.id)
     .orderBy(asc(stockLots.producedOn), asc(stockLots.id));
-  return rows.map(({ drawn, ...r }) => ({ ...r, remainingSi: r.initialSi - Number(drawn) }));
+  const taken = await takenSoFar(
+    db,
+    gardenId,
+    lots.map((l) => l.id),
+  );
+  return lots.map((l) => ({ ...l, remainingSi: l.initialSi - (taken.get(l.id) ?? 0) }));
 }
 
 // ── Added by the bins branch (issue 11): stock entered by hand. Data helper: move or

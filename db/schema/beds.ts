@@ -7,6 +7,7 @@ import {
   index,
   integer,
   pgTable,
+  smallint,
   text,
   unique,
   uuid,
@@ -80,6 +81,9 @@ export const beds = pgTable(
     depthM: quantity("depth_m"),
     containerVolumeL: quantity("container_volume_l"),
     notes: text("notes"),
+    // Archived beds keep their history (plantings, logged applications) but
+    // leave the plan; there is no hard delete while logs refer to a bed.
+    archivedOn: date("archived_on"),
     createdAt: createdAt(),
   },
   (t) => [
@@ -108,6 +112,11 @@ export const crops = pgTable(
     edible: boolean("edible").notNull(),
     // null = the engine's default rule for the feeder class.
     feedingRuleId: uuid("feeding_rule_id"),
+    // Typical days from planting to harvest and spacing between plants; null =
+    // not known (a garden's own crop entered without them).
+    daysToHarvest: smallint("days_to_harvest"),
+    spacingM: quantity("spacing_m"),
+    archivedOn: date("archived_on"),
     createdAt: createdAt(),
   },
   (t) => [
@@ -115,7 +124,10 @@ export const crops = pgTable(
     unique("crops_garden_id_id").on(t.gardenId, t.id),
     // The shared starter crops carry no rule (the engine's default for the class
     // applies), so every crop rule there is is checked by the garden-scoped key.
-    check("crops_starter_without_rule", sql`${t.gardenId} is not null or ${t.feedingRuleId} is null`),
+    check(
+      "crops_starter_without_rule",
+      sql`${t.gardenId} is not null or ${t.feedingRuleId} is null`,
+    ),
     check("crops_starter_named", sql`${t.gardenId} is not null or ${t.name} is not null`),
     foreignKey({
       name: "crops_rule_same_garden_fk",
@@ -148,6 +160,7 @@ export const plantings = pgTable(
     // An override of the crop's rule; null = the crop's rule.
     feedingRuleId: uuid("feeding_rule_id"),
     notes: text("notes"),
+    archivedOn: date("archived_on"),
     createdAt: createdAt(),
   },
   (t) => [
@@ -155,10 +168,7 @@ export const plantings = pgTable(
     index("plantings_bed_idx").on(t.bedId),
     unique("plantings_garden_id_id").on(t.gardenId, t.id),
     check("plantings_plant_count_positive", sql`${t.plantCount} > 0`),
-    check(
-      "plantings_end_after_start",
-      sql`${t.endedOn} is null or ${t.endedOn} >= ${t.plantedOn}`,
-    ),
+    check("plantings_end_after_start", sql`${t.endedOn} is null or ${t.endedOn} >= ${t.plantedOn}`),
     foreignKey({
       name: "plantings_bed_same_garden_fk",
       columns: [t.gardenId, t.bedId],

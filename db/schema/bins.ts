@@ -14,7 +14,12 @@ import {
 } from "drizzle-orm/pg-core";
 import { users } from "./accounts";
 import { createdAt, id, quantity } from "./columns";
-import { binEventKindEnum, binKindEnum, stockMaterialEnum } from "./enums";
+import {
+  binEventKindEnum,
+  binKindEnum,
+  stockAdjustmentReasonEnum,
+  stockMaterialEnum,
+} from "./enums";
 import { gardens } from "./gardens";
 
 // See beds.ts for the garden-scoping rule (composite keys) and why the engine
@@ -49,6 +54,8 @@ export const bins = pgTable(
     manureFeedstock: boolean("manure_feedstock").notNull().default(false),
     // Worms put in on started_on; later changes are worm_moves.
     startingWormCount: integer("starting_worm_count").notNull(),
+    // Days between drains of the base; null = the engine's default.
+    drainIntervalDays: smallint("drain_interval_days"),
     parentBinId: uuid("parent_bin_id"),
     retiredOn: date("retired_on"),
     createdAt: createdAt(),
@@ -80,6 +87,10 @@ export const binEvents = pgTable(
     // What the forecast said for this harvest when it was logged (calibration).
     predictedCastingsKg: quantity("predicted_castings_kg"),
     liquidL: quantity("liquid_l"),
+    // A harvest measured by volume (L) as well as, or instead of, by weight.
+    castingsL: quantity("castings_l"),
+    // What went in on a feeding, from the food list (vegetable, citrus, …).
+    foodKinds: text("food_kinds").array().notNull().default([]),
     wormCount: integer("worm_count"),
     targetBinId: uuid("target_bin_id"),
     temperatureC: quantity("temperature_c"),
@@ -159,6 +170,9 @@ export const stockLots = pgTable(
     initialAmountSi: quantity("initial_amount_si").notNull(),
     // null = the bin's flag (false for bought stock).
     manureFeedstock: boolean("manure_feedstock"),
+    // Bought castings: what was paid per kg; null for home-made stock.
+    pricePerKg: quantity("price_per_kg"),
+    note: text("note"),
     createdAt: createdAt(),
   },
   (t) => [
@@ -177,5 +191,37 @@ export const stockLots = pgTable(
       columns: [t.gardenId, t.sourceEventId],
       foreignColumns: [binEvents.gardenId, binEvents.id],
     }),
+  ],
+);
+
+// A lot changed by hand: spilled, given away, spoiled, or a count corrected.
+// Like application_draws, an adjustment lowers what remains of the lot (a
+// positive correction raises it); db/queries/lots.ts writes both and checks,
+// in the same transaction, that no lot goes below zero.
+export const stockAdjustments = pgTable(
+  "stock_adjustments",
+  {
+    id: id(),
+    gardenId: uuid("garden_id")
+      .notNull()
+      .references(() => gardens.id, { onDelete: "cascade" }),
+    lotId: uuid("lot_id").notNull(),
+    adjustedOn: date("adjusted_on").notNull(),
+    // In the lot's unit (kg castings, L leachate); negative takes away.
+    amountSi: quantity("amount_si").notNull(),
+    reason: stockAdjustmentReasonEnum("reason").notNull(),
+    note: text("note"),
+    loggedBy: uuid("logged_by").references(() => users.id, { onDelete: "set null" }),
+    createdAt: createdAt(),
+  },
+  (t) => [
+    index("stock_adjustments_garden_idx").on(t.gardenId),
+    index("stock_adjustments_lot_idx").on(t.lotId),
+    check("stock_adjustments_amount_non_zero", sql`${t.amountSi} <> 0`),
+    foreignKey({
+      name: "stock_adjustments_lot_same_garden_fk",
+      columns: [t.gardenId, t.lotId],
+      foreignColumns: [stockLots.gardenId, stockLots.id],
+    }).onDelete("cascade"),
   ],
 );

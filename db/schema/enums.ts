@@ -19,9 +19,10 @@ export const basisEnum = pgEnum("amount_basis", [
 ]);
 // What a feeding rule's amount measures per basis unit.
 export const amountMeasureEnum = pgEnum("amount_measure", ["mass", "volume", "percent-of-mix"]);
-export const binKindEnum = pgEnum("bin_kind", ["stacked-tray", "single"]);
+export const binKindEnum = pgEnum("bin_kind", ["stacked-tray", "single", "flow-through"]);
 export const binEventKindEnum = pgEnum("bin_event_kind", [
   "feeding",
+  "bedding-added",
   "tray-added",
   "harvest",
   "liquid-drained",
@@ -30,3 +31,10 @@ export const binEventKindEnum = pgEnum("bin_event_kind", [
 ]);
 export const stockMaterialEnum = pgEnum("stock_material", ["castings", "leachate"]);
 export const mailStatusEnum = pgEnum("mail_status", ["pending", "sent", "failed"]);
+// Why a lot was changed by hand rather than by a feeding.
+export const stockAdjustmentReasonEnum = pgEnum("stock_adjustment_reason", [
+  "spilled",
+  "given-away",
+  "spoiled",
+  "correction",
+]);

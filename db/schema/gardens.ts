@@ -1,4 +1,13 @@
-import { date, index, pgTable, primaryKey, smallint, text, timestamp, uuid } from "drizzle-orm/pg-core";
+import {
+  date,
+  index,
+  pgTable,
+  primaryKey,
+  smallint,
+  text,
+  timestamp,
+  uuid,
+} from "drizzle-orm/pg-core";
 import { users } from "./accounts";
 import { createdAt, id, quantity } from "./columns";
 import { mailStatusEnum, roleEnum, unitSystemEnum } from "./enums";

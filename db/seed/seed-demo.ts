@@ -35,11 +35,13 @@ export async function seedDemoGarden(db: Db): Promise<{ created: boolean }> {
       location: demoGarden.location,
     });
     // The importer is the owner; the other demo accounts join in their roles.
-    await tx.insert(memberships).values(
-      demoMembers
-        .filter((m) => m.role !== "owner")
-        .map((m) => ({ gardenId, userId: userIds[m.role]!, role: m.role })),
-    );
+    await tx
+      .insert(memberships)
+      .values(
+        demoMembers
+          .filter((m) => m.role !== "owner")
+          .map((m) => ({ gardenId, userId: userIds[m.role]!, role: m.role })),
+      );
     await insertNeighbourGarden(tx, userIds, hashes[0]!);
     return { created: true };
   });

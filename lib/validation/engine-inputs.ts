@@ -1,6 +1,6 @@
 import { z } from "zod";
-import { nominalBoardNames } from "@/lib/engine/supply/geometry";
-import { GEOMETRY_LIMITS } from "@/lib/engine/supply/geometry";
+import { nominalBoardNames } from "@/lib/engine";
+import { GEOMETRY_LIMITS } from "@/lib/engine";
 import { unitNames, unitSystems } from "@/lib/units";
 
 // Boundary schemas for the engine's inputs (scenario files, API bodies, forms).

@@ -1,6 +1,6 @@
 import { z } from "zod";
-import { EngineInputError } from "@/lib/engine/core/errors";
-import { parseRecurrence } from "@/lib/engine/demand/recurrence";
+import { EngineInputError } from "@/lib/engine";
+import { parseRecurrence } from "@/lib/engine";
 import {
   basisSchema,
   materialSchema,

@@ -1,6 +1,6 @@
 import { z } from "zod";
-import { GEOMETRY_LIMITS } from "@/lib/engine/supply/geometry";
-import { isBoundedRule } from "@/lib/engine/demand/recurrence";
+import { GEOMETRY_LIMITS } from "@/lib/engine";
+import { isBoundedRule } from "@/lib/engine";
 import {
   feederClassSchema,
   gardenSeasonSchema,

@@ -4,7 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { getDb } from "@/db";
 import { insertGardenInputs } from "@/db/queries/garden-inputs-write";
 import { loadGardenInputs } from "@/db/queries/garden-inputs";
-import { listLotStock, recordApplication } from "@/db/queries/lots";
+import { listLotStock, recordApplication, recordStockAdjustment } from "@/db/queries/lots";
 import { applications, stockLots, users } from "@/db/schema";
 import type { GardenInputs } from "@/lib/engine";
 import { closeHarness, tableRows } from "@/tests/support/integration/harness";
@@ -264,16 +264,8 @@ describe("database → GardenInputs", () => {
       },
     });
     const back = backToInputIds(loaded, ids);
-    // numeric(14, 6) keeps six decimals: compare SI values to 1e-6.
-    expect(
-      JSON.parse(JSON.stringify(normalise(back)), (_k, v: unknown) =>
-        typeof v === "number" ? Math.round(v * 1e6) / 1e6 : v,
-      ),
-    ).toEqual(
-      JSON.parse(JSON.stringify(normalise(inputs)), (_k, v: unknown) =>
-        typeof v === "number" ? Math.round(v * 1e6) / 1e6 : v,
-      ),
-    );
+    // Quantities are float8: every SI number comes back exactly as written.
+    expect(normalise(back)).toEqual(normalise(inputs));
   });
 
   it("leaves out logs and stock after asOf", async () => {
@@ -408,6 +400,35 @@ describe("lots: what remains is derived from the draws and never goes below zero
         "draws[2].lotId": "was made after that day",
       },
     });
+  });
+});
+
+describe("stock adjustments (spilled, given away) go through the same check", () => {
+  it("lower what remains, refuse taking more than is left, and reach the inputs", async () => {
+    const july = ids.get("h-july")!;
+    const remaining = async () =>
+      (await listLotStock({ gardenId })).find((l) => l.id === july)!.remainingSi;
+    const before = await remaining();
+    await recordStockAdjustment({
+      gardenId,
+      lotId: july,
+      adjustedOn: "2026-07-10",
+      amountSi: -2,
+      reason: "given-away",
+    });
+    expect(await remaining()).toBeCloseTo(before - 2, 9);
+    await expect(
+      recordStockAdjustment({
+        gardenId,
+        lotId: july,
+        adjustedOn: "2026-07-11",
+        amountSi: -(before - 2) - 0.01,
+        reason: "spilled",
+      }),
+    ).rejects.toMatchObject({ code: "conflict:stock" });
+    // Stop-gap: the adjustment is folded into the harvest's amount (44 lb = 19.95806428 kg, less 2 kg).
+    const loaded = await loadGardenInputs({ gardenId, asOf: inputs.asOf });
+    expect(loaded.logs.harvests.find((h) => h.id === july)!.castingsKg).toBeCloseTo(44 * LB - 2, 9);
   });
 });
 

@@ -22,25 +22,33 @@ async function one(query: ReturnType<typeof sql>): Promise<string> {
 }
 
 async function makeGarden(ids: Ids, name: string): Promise<void> {
-  ids.garden = await one(sql`insert into gardens (name, time_zone, last_spring_frost, first_fall_frost)
+  ids.garden =
+    await one(sql`insert into gardens (name, time_zone, last_spring_frost, first_fall_frost)
     values (${name}, 'America/Chicago', '2026-04-15', '2026-10-20') returning id`);
-  ids.rule = await one(sql`insert into feeding_rules (garden_id, material, method, basis, amount_measure, amount_si, rrule)
+  ids.rule =
+    await one(sql`insert into feeding_rules (garden_id, material, method, basis, amount_measure, amount_si, rrule)
     values (${ids.garden}, 'castings', 'top-dress', 'per-plant', 'mass', 0.1, 'FREQ=MONTHLY') returning id`);
-  ids.crop = await one(sql`insert into crops (garden_id, name, feeder_class, edible, edible_touches_soil)
+  ids.crop =
+    await one(sql`insert into crops (garden_id, name, feeder_class, edible, edible_touches_soil)
     values (${ids.garden}, 'Tomato', 'heavy', true, false) returning id`);
   ids.bed = await one(sql`insert into beds (garden_id, name, kind, length_m, width_m)
     values (${ids.garden}, 'North', 'bed', 2.4384, 1.2192) returning id`);
-  ids.planting = await one(sql`insert into plantings (garden_id, bed_id, crop_id, plant_count, planted_on)
+  ids.planting =
+    await one(sql`insert into plantings (garden_id, bed_id, crop_id, plant_count, planted_on)
     values (${ids.garden}, ${ids.bed}, ${ids.crop}, 6, '2026-05-10') returning id`);
-  ids.bin = await one(sql`insert into bins (garden_id, name, tray_length_m, tray_width_m, tray_depth_m,
+  ids.bin =
+    await one(sql`insert into bins (garden_id, name, tray_length_m, tray_width_m, tray_depth_m,
       tray_count, started_on, starting_worm_count)
     values (${ids.garden}, 'Stack', 0.5334, 0.4318, 0.1397, 4, '2026-02-01', 1500) returning id`);
-  ids.event = await one(sql`insert into bin_events (garden_id, bin_id, kind, occurred_on, castings_kg)
+  ids.event =
+    await one(sql`insert into bin_events (garden_id, bin_id, kind, occurred_on, castings_kg)
     values (${ids.garden}, ${ids.bin}, 'harvest', '2026-07-01', 19.958) returning id`);
-  ids.lot = await one(sql`insert into stock_lots (garden_id, bin_id, source_event_id, material, produced_on,
+  ids.lot =
+    await one(sql`insert into stock_lots (garden_id, bin_id, source_event_id, material, produced_on,
       initial_amount_si)
     values (${ids.garden}, ${ids.bin}, ${ids.event}, 'castings', '2026-07-01', 19.958) returning id`);
-  ids.application = await one(sql`insert into applications (garden_id, planting_id, material, method,
+  ids.application =
+    await one(sql`insert into applications (garden_id, planting_id, material, method,
       amount_si, applied_on)
     values (${ids.garden}, ${ids.planting}, 'castings', 'top-dress', 0.1, '2026-07-02') returning id`);
 }

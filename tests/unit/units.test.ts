@@ -1,5 +1,5 @@
 import { convert } from "convert";
-import { EngineInputError } from "@/lib/engine/core/errors";
+import { EngineInputError } from "@/lib/engine";
 import {
   convertUnit,
   quantityOf,

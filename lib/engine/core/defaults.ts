@@ -1,3 +1,4 @@
+import { toSi } from "@/lib/units";
 // Every default the engine uses, with where the number comes from (as cited in
 // the product brief). The UI shows `source` beside an overridable value, and a
 // forecast's explanation can say which defaults it leaned on.
@@ -7,8 +8,8 @@ export interface Sourced<T = number> {
   source: string;
 }
 
-const CUP_L = 0.2365882365; // NIST Handbook 44 App. C: 1 cup = 236.5882365 mL
-const INCH_M = 0.0254; // NIST Handbook 44 App. C: 1 in = 2.54 cm exactly
+const CUP_L = toSi(1, "cup"); // 236.5882365 mL (NIST Handbook 44 App. C, via lib/units)
+const INCH_M = toSi(1, "in"); // 2.54 cm exactly
 
 export const DEFAULTS = {
   rotationIntervalDays: {

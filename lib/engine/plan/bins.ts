@@ -4,7 +4,7 @@
 // the active tray's surface (surface rule).
 import { dflt } from "@/lib/engine/core/defaults";
 import { fromDayNumber, toDayNumber } from "@/lib/engine/core/dates";
-import { simulatePopulation, wormsToKg } from "@/lib/engine/supply/population";
+import { simulatePopulation } from "@/lib/engine/supply/population";
 import type { LedgerResult } from "@/lib/engine/balance/ledger";
 import type { GardenInputs } from "@/lib/engine/plan/inputs";
 import type { PlanContext } from "@/lib/engine/plan/context";

@@ -222,7 +222,7 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
     }
   }
   for (const l of liquid.values()) {
-    if (l.day < ctx.planStartDay) continue;
+    if (l.day < ctx.planStartDay || l.day > ctx.planEndDay) continue;
     warnings.push({
       kind: "aged-out",
       binId: l.binId ?? undefined,

@@ -2,14 +2,9 @@
 import { dflt } from "@/lib/engine/core/defaults";
 import { dayOfYearDate, fromDayNumber, toDayNumber, yearOfDay } from "@/lib/engine/core/dates";
 import { EngineInputError } from "@/lib/engine/core/errors";
-import type { FeederClass, IsoDate, Material, Method } from "@/lib/engine/core/types";
+import type { IsoDate, Material, Method } from "@/lib/engine/core/types";
 import { POOL_OF, type LedgerClaim, type LedgerLogged } from "@/lib/engine/balance/ledger";
-import {
-  DEFAULT_PRIORITY,
-  expandPlanting,
-  preHarvestBlockStart,
-  preHarvestDays,
-} from "@/lib/engine/demand/demand";
+import { expandPlanting, preHarvestBlockStart, preHarvestDays } from "@/lib/engine/demand/demand";
 import type { FeedingRule } from "@/lib/engine/demand/feeding-rules";
 import type {
   BedInput as DemandBed,

@@ -1,11 +1,12 @@
+import { toSi } from "@/lib/units";
 import { dflt } from "@/lib/engine/core/defaults";
 import { requireNonNegative, requirePositive } from "@/lib/engine/core/errors";
 import { fmt } from "@/lib/engine/core/format";
 
 // The surface rule, 1 ft² per lb of food per week, turned into SI with exact
 // NIST factors (1 lb = 0.45359237 kg, 1 ft² = 0.09290304 m²).
-const LB_KG = 0.45359237;
-const FT2_M2 = 0.09290304;
+const LB_KG = toSi(1, "lb");
+const FT2_M2 = toSi(1, "ft2");
 
 export interface CapacityInput {
   wormMassKg: number;

@@ -1,9 +1,10 @@
+import { toSi } from "@/lib/units";
 import { EngineInputError, requirePositive } from "@/lib/engine/core/errors";
 
 // Lengths in metres, volumes in litres, areas in m². The maxima catch typing
 // slips (a 40 ft tray, a 400 m bed) rather than describe physics.
 
-const INCH_M = 0.0254; // exact, NIST Handbook 44 App. C
+const INCH_M = toSi(1, "in"); // exact, NIST Handbook 44 App. C (lib/units)
 
 export const GEOMETRY_LIMITS = {
   traySideM: 2,

@@ -1,3 +1,4 @@
+import { toSi } from "@/lib/units";
 import { dflt } from "@/lib/engine/core/defaults";
 import {
   EngineInputError,
@@ -19,8 +20,8 @@ import {
 // Counting only today's weight would let the 83-day delay line overshoot the
 // ceiling several times over before laying ever slowed.
 
-const LB_KG = 0.45359237; // NIST Handbook 44 App. C
-const FT2_M2 = 0.09290304; // NIST Handbook 44 App. C
+const LB_KG = toSi(1, "lb"); // NIST Handbook 44 App. C, from lib/units
+const FT2_M2 = toSi(1, "ft2");
 
 export interface PopulationParams {
   cocoonsPerAdultPerWeek: number;

@@ -1,4 +1,9 @@
-import { daysToMultiply, kgToWorms, simulatePopulation, wormsToKg } from "@/lib/engine/supply/population";
+import {
+  daysToMultiply,
+  kgToWorms,
+  simulatePopulation,
+  wormsToKg,
+} from "@/lib/engine/supply/population";
 import { toSi } from "@/lib/units";
 
 // Biomass here is live weight: adults at 1/1,000 lb (about 1,000 worms per lb,

@@ -1,175 +1,282 @@
 import fc from "fast-check";
-import { computeBalance } from "@/lib/engine/balance/balance";
-import type { BalanceInput, BalanceResult } from "@/lib/engine/balance/types";
-import { closeGap } from "@/lib/engine/gap/gap";
-import { addDays } from "@/lib/engine/core/dates";
-import type { StockLot } from "@/lib/engine/balance/lots";
-import type { DemandOccurrence, SupplyEvent } from "@/lib/engine/core/types";
-import { collect, harvest, want } from "./balance-fixtures";
+import { describe, expect, it } from "vitest";
+import {
+  addDays,
+  computePlan,
+  runLedger,
+  toDayNumber,
+  type GardenInputs,
+  type GardenPlan,
+} from "@/lib/engine";
+import { application, bin, garden, lot, planting } from "./garden-fixtures";
 
-// Invariants of the balance (PRODUCT.md "Balance (the heart)"), checked on
-// random gardens. Tolerances are for float rounding only.
+// Invariants of the plan (PRODUCT.md "Balance (the heart)" and issue 8 "Checks"), on random
+// invented gardens. Tolerances are for float rounding only.
 const TOL = 1e-6;
-const START = "2026-03-01";
+const AS_OF = "2026-05-31";
 
-const supplyArb: fc.Arbitrary<SupplyEvent> = fc
+const gardenArb: fc.Arbitrary<GardenInputs> = fc
   .record({
-    day: fc.integer({ min: 0, max: 120 }),
-    amount: fc.double({ min: 0, max: 20, noNaN: true }),
-    liquid: fc.boolean(),
-  })
-  .map(({ day, amount, liquid }) => (liquid ? collect : harvest)(addDays(START, day), amount));
-
-const demandArb: fc.Arbitrary<DemandOccurrence> = fc
-  .record({
-    p: fc.integer({ min: 0, max: 5 }),
-    day: fc.integer({ min: 0, max: 120 }),
-    amount: fc.double({ min: 0, max: 10, noNaN: true }),
-    priority: fc.integer({ min: 1, max: 3 }),
-    feederClass: fc.constantFrom("heavy" as const, "medium" as const, "light" as const),
-    material: fc.constantFrom("castings" as const, "leachate" as const, "tea" as const),
-  })
-  .map((d) => want(`p${d.p}`, addDays(START, d.day), d.amount, d));
-
-const lotArb: fc.Arbitrary<StockLot> = fc
-  .record({
-    ago: fc.integer({ min: 1, max: 90 }),
-    amount: fc.double({ min: 0, max: 30, noNaN: true }),
-  })
-  .map(({ ago, amount }) => ({
-    id: `lot-${ago}`,
-    material: "castings" as const,
-    madeOn: addDays(START, -ago),
-    amount,
-  }));
-
-const inputArb: fc.Arbitrary<BalanceInput> = fc
-  .record({
-    supply: fc.array(supplyArb, { maxLength: 12 }),
-    demand: fc.array(demandArb, { maxLength: 25 }),
-    openingLots: fc.array(lotArb, { maxLength: 3 }),
-    months: fc.integer({ min: 1, max: 4 }),
-  })
-  .map(({ months, ...rest }) => ({
-    ...rest,
-    options: { from: "2026-03", months, teaCastingsKgPerLitre: 0.1 },
-  }));
-
-function allNumbers(value: unknown, out: number[] = []): number[] {
-  if (typeof value === "number") out.push(value);
-  else if (Array.isArray(value)) value.forEach((v) => allNumbers(v, out));
-  else if (value && typeof value === "object")
-    Object.values(value).forEach((v) => allNumbers(v, out));
-  return out;
-}
-
-const rows = (r: BalanceResult) => [...r.castings, ...r.leachate];
-
-describe("balance invariants", () => {
-  it("stock is never negative", () => {
-    fc.assert(
-      fc.property(inputArb, (input) => {
-        const r = computeBalance(input);
-        for (const m of rows(r)) {
-          expect(m.opening).toBeGreaterThanOrEqual(0);
-          expect(m.closing).toBeGreaterThanOrEqual(0);
-          expect(m.agedOut).toBeGreaterThanOrEqual(0);
-        }
-        for (const o of r.occurrences) expect(o.allocated).toBeGreaterThanOrEqual(0);
+    lots: fc.array(
+      fc.record({
+        ago: fc.integer({ min: -40, max: 90 }),
+        kg: fc.double({ min: 0, max: 8, noNaN: true }),
+        manure: fc.boolean(),
+        liquid: fc.boolean(),
       }),
+      { maxLength: 6 },
+    ),
+    plantings: fc.array(
+      fc.record({
+        start: fc.integer({ min: -20, max: 60 }),
+        length: fc.integer({ min: 10, max: 120 }),
+        priority: fc.integer({ min: 1, max: 3 }),
+        kg: fc.double({ min: 0.01, max: 2, noNaN: true }),
+        material: fc.constantFrom("castings" as const, "leachate" as const, "tea" as const),
+        edible: fc.boolean(),
+        soil: fc.boolean(),
+        weekly: fc.boolean(),
+      }),
+      { maxLength: 6 },
+    ),
+    withBin: fc.boolean(),
+    manureBin: fc.boolean(),
+    logs: fc.array(
+      fc.record({
+        p: fc.nat(5),
+        ago: fc.integer({ min: 0, max: 60 }),
+        kg: fc.double({ min: 0, max: 1, noNaN: true }),
+      }),
+      { maxLength: 5 },
+    ),
+  })
+  .map((r) => {
+    const g = garden({ asOf: AS_OF });
+    g.stockLots = r.lots.map((l, i) =>
+      lot({
+        id: `lot-${i}`,
+        madeOn: addDays(AS_OF, -l.ago),
+        amount: l.kg,
+        manureFeedstock: l.manure,
+        material: l.liquid ? "leachate" : "castings",
+      }),
+    );
+    if (r.withBin)
+      g.bins = [
+        bin({
+          startDate: "2026-01-10",
+          manureFeedstock: r.manureBin,
+          leachateEstimateLPerWeek: 0.5,
+        }),
+      ];
+    g.plantings = r.plantings.map((p, i) =>
+      planting({
+        id: `p${i}`,
+        startDate: addDays(AS_OF, p.start),
+        endDate: addDays(AS_OF, p.start + p.length),
+        priority: p.priority,
+        edible: p.edible,
+        edibleTouchesSoil: p.soil,
+        rule: {
+          material: p.material,
+          method: p.material === "castings" ? "top-dress" : "drench",
+          basis: "per-plant",
+          measure: p.material === "castings" ? "mass" : "volume",
+          amount: p.kg,
+          recurrence: p.weekly ? "FREQ=WEEKLY" : "FREQ=MONTHLY",
+          dilutionWaterParts: null,
+          teaCastingsPerWater: null,
+        },
+      }),
+    );
+    g.logs.applications = r.logs
+      .filter((l) => l.p < g.plantings.length)
+      .map((l, i) =>
+        application({
+          id: `a${i}`,
+          plantingId: `p${l.p}`,
+          date: addDays(AS_OF, -l.ago),
+          material: "castings",
+          amount: l.kg,
+        }),
+      );
+    return g;
+  });
+
+const plan = (g: GardenInputs): GardenPlan => computePlan(g, { months: 4, suggestions: false });
+
+describe("plan invariants", () => {
+  it("conserves stock every month: opening + in − allocated − aged out = closing, never negative", () => {
+    fc.assert(
+      fc.property(gardenArb, (g) => {
+        const p = plan(g);
+        for (const r of p.rows) {
+          expect(r.opening + r.supplied - r.allocated - r.agedOut - r.closing).toBeCloseTo(0, 6);
+          expect(r.closing).toBeGreaterThanOrEqual(-TOL);
+          expect(r.allocated).toBeLessThanOrEqual(r.demand + TOL);
+        }
+        for (const m of ["castings", "leachate"] as const) {
+          const rows = p.rows.filter((r) => r.pool === m);
+          for (let i = 1; i < rows.length; i++)
+            expect(rows[i]!.opening).toBeCloseTo(rows[i - 1]!.closing, 9);
+        }
+      }),
+      { numRuns: 60 },
     );
   });
 
-  it("allocated ≤ demand and ≤ available, per application and per month", () => {
+  it("replay conserves each lot: what is drawn from a lot never exceeds what it held", () => {
     fc.assert(
-      fc.property(inputArb, (input) => {
-        const r = computeBalance(input);
-        for (const o of r.occurrences) expect(o.allocated).toBeLessThanOrEqual(o.need + TOL);
-        for (const m of rows(r)) {
-          expect(m.allocated).toBeLessThanOrEqual(m.demand + TOL);
-          expect(m.allocated).toBeLessThanOrEqual(m.opening + m.supplied + TOL);
+      fc.property(gardenArb, (g) => {
+        const lots = g.stockLots.map((l) => ({
+          id: l.id,
+          pool: l.material,
+          madeDay: toDayNumber(l.madeOn),
+          amount: l.amount,
+          binId: null,
+          manure: l.manureFeedstock ?? false,
+        }));
+        const start = toDayNumber("2026-01-01");
+        const spans = Array.from({ length: 12 }, (_, k) => {
+          const from = toDayNumber(`2026-${String(k + 1).padStart(2, "0")}-01`);
+          const to =
+            k === 11
+              ? toDayNumber("2027-01-01")
+              : toDayNumber(`2026-${String(k + 2).padStart(2, "0")}-01`);
+          return { month: `2026-${String(k + 1).padStart(2, "0")}`, startDay: from, endDay: to };
+        });
+        const logged = g.logs.applications.map((a) => ({
+          pool: "castings" as const,
+          day: toDayNumber(a.date),
+          need: a.amount,
+          draws: [],
+        }));
+        const r = runLedger({
+          lots,
+          planned: [],
+          logged,
+          keepDays: { castings: 60, leachate: 7 },
+          spans,
+          recordDrawsFrom: start,
+        });
+        const drawn = new Map<string, number>();
+        for (const list of r.loggedDraws ?? [])
+          for (const d of list ?? []) drawn.set(d.lotId, (drawn.get(d.lotId) ?? 0) + d.amount);
+        for (const l of lots) expect(drawn.get(l.id) ?? 0).toBeLessThanOrEqual(l.amount + TOL);
+        const aged = new Map(r.agedOut.map((a) => [a.lotId, a.amount]));
+        // Made in 2026, each lot ends drawn, aged out or still on the shelf at the end of the year.
+        for (const l of lots) {
+          if (l.madeDay < start) continue;
+          const left = (r.snapshot ?? []).find((x) => x.id === l.id)?.amount ?? 0;
+          expect((drawn.get(l.id) ?? 0) + (aged.get(l.id) ?? 0) + left).toBeLessThanOrEqual(
+            l.amount + TOL,
+          );
         }
       }),
+      { numRuns: 60 },
     );
   });
 
-  it("conserves stock every month: opening + supplied − allocated − aged out = closing", () => {
+  it("a manure-fed lot is never given to an edible planting inside its 90/120-day window (7 CFR 205.203(c)(1))", () => {
     fc.assert(
-      fc.property(inputArb, (input) => {
-        const r = computeBalance(input);
-        for (const pool of [r.castings, r.leachate]) {
-          pool.forEach((m, i) => {
-            expect(m.opening + m.supplied - m.allocated - m.agedOut).toBeCloseTo(m.closing, 6);
-            const next = pool[i + 1];
-            if (next) expect(next.opening).toBeCloseTo(m.closing, 9);
-          });
+      fc.property(gardenArb, (g) => {
+        const p = plan(g);
+        const manureLots = new Set(g.stockLots.filter((l) => l.manureFeedstock).map((l) => l.id));
+        const manureBin = g.bins.some((b) => b.manureFeedstock);
+        for (const f of p.feedings) {
+          if (f.status === "logged") continue;
+          const pl = g.plantings.find((x) => x.id === f.plantingId)!;
+          if (!pl.edible) continue;
+          const days = pl.edibleTouchesSoil ? 120 : 90;
+          const harvest = toDayNumber(pl.harvestDate ?? pl.endDate!);
+          if (harvest - toDayNumber(f.date) >= days) continue;
+          for (const d of f.draws) {
+            expect(manureLots.has(d.lotId)).toBe(false);
+            if (manureBin) expect(d.lotId.startsWith("b1:")).toBe(false);
+          }
         }
       }),
+      { numRuns: 60 },
     );
   });
 
-  it("more supply never lowers any planting's coverage", () => {
+  it("more clean stock never lowers any planned feeding's coverage", () => {
     fc.assert(
-      fc.property(inputArb, fc.array(supplyArb, { minLength: 1, maxLength: 4 }), (input, more) => {
-        const before = computeBalance(input);
-        const after = computeBalance({ ...input, supply: [...input.supply, ...more] });
-        const key = (c: { plantingId: string; month: string; material: string }) =>
-          `${c.plantingId}|${c.month}|${c.material}`;
-        const was = new Map(before.coverage.map((c) => [key(c), c.coveragePct]));
-        for (const c of after.coverage)
-          expect(c.coveragePct).toBeGreaterThanOrEqual((was.get(key(c)) ?? 0) - TOL);
+      fc.property(
+        gardenArb,
+        fc.integer({ min: 0, max: 60 }),
+        fc.double({ min: 0.1, max: 10, noNaN: true }),
+        (g, ago, kg) => {
+          const before = plan(g);
+          const more = {
+            ...g,
+            stockLots: [
+              ...g.stockLots,
+              lot({ id: "extra", madeOn: addDays(AS_OF, -ago), amount: kg }),
+            ],
+          };
+          const after = new Map(plan(more).feedings.map((f) => [f.id, f]));
+          for (const f of before.feedings) {
+            if (f.status === "logged") continue;
+            expect(after.get(f.id)!.allocated).toBeGreaterThanOrEqual(f.allocated - TOL);
+          }
+        },
+      ),
+      { numRuns: 60 },
+    );
+  });
+
+  it("adding an unrelated planting changes no existing id", () => {
+    fc.assert(
+      fc.property(gardenArb, fc.integer({ min: 0, max: 60 }), (g, start) => {
+        const before = plan(g);
+        const more = {
+          ...g,
+          plantings: [...g.plantings, planting({ id: "new", startDate: addDays(AS_OF, start) })],
+        };
+        const after = plan(more);
+        const ids = new Set(after.feedings.map((f) => f.id));
+        for (const f of before.feedings) expect(ids.has(f.id)).toBe(true);
+        expect(after.bins.flatMap((b) => b.tasks.map((t) => t.id))).toEqual(
+          before.bins.flatMap((b) => b.tasks.map((t) => t.id)),
+        );
       }),
-      { numRuns: 300 },
+      { numRuns: 40 },
+    );
+  });
+
+  it("liquids never outlive their keep window: every leachate draw is younger than the max age", () => {
+    fc.assert(
+      fc.property(gardenArb, fc.integer({ min: 1, max: 10 }), (g, maxAge) => {
+        g.settings.liquidMaxAgeDays = maxAge;
+        const p = plan(g);
+        const made = new Map(g.stockLots.map((l) => [l.id, toDayNumber(l.madeOn)]));
+        for (const f of p.feedings) {
+          if (f.material !== "leachate") continue;
+          for (const d of f.draws) {
+            const m = made.get(d.lotId) ?? toDayNumber(d.lotId.slice(-10));
+            const age = toDayNumber(f.date) - m;
+            expect(age).toBeGreaterThanOrEqual(0);
+            expect(age).toBeLessThan(maxAge);
+          }
+        }
+      }),
+      { numRuns: 60 },
     );
   });
 
   it("never returns NaN or Infinity", () => {
     fc.assert(
-      fc.property(inputArb, (input) => {
-        const nums = allNumbers(computeBalance(input));
+      fc.property(gardenArb, (g) => {
+        const nums: number[] = [];
+        const walk = (v: unknown) => {
+          if (typeof v === "number") nums.push(v);
+          else if (v && typeof v === "object") Object.values(v).forEach(walk);
+        };
+        walk(computePlan(g, { months: 3 }));
         expect(nums.every(Number.isFinite)).toBe(true);
       }),
-    );
-  });
-});
-
-describe("gap suggestions, applied, leave no shortfall", () => {
-  it("holds for every suggestion on random short gardens", () => {
-    fc.assert(
-      fc.property(inputArb, fc.double({ min: 1, max: 15, noNaN: true }), (input, kgPerTray) => {
-        const bin = (start: string) =>
-          [30, 60, 90, 120].map((k) => harvest(addDays(start, k), kgPerTray, "bin-2"));
-        const report = closeGap({
-          base: input,
-          tray: { binId: "bin-a", kgPerTray, processingDays: 30, manureFeedstock: false },
-          secondBin: { binId: "bin-a", supplyFrom: bin },
-        });
-        expect(allNumbers(report).every(Number.isFinite)).toBe(true);
-        for (const s of report.suggestions) {
-          let applied: BalanceInput = input;
-          if (s.kind === "extra-trays") {
-            applied = {
-              ...input,
-              supply: [...input.supply, ...s.harvests.map((h) => harvest(h.harvestOn, h.kg))],
-            };
-          } else if (s.kind === "second-bin") {
-            applied = { ...input, supply: [...input.supply, ...bin(s.latestStart)] };
-          } else {
-            const ids = new Set(s.plantingIds);
-            applied = {
-              ...input,
-              demand: input.demand.map((d) =>
-                d.material !== "leachate" && ids.has(d.plantingId)
-                  ? { ...d, amount: d.amount * (1 - s.cutPct / 100) }
-                  : d,
-              ),
-            };
-          }
-          expect(computeBalance(applied).firstShortfall.castings).toBeNull();
-          expect(s.proof.totals.castings.shortfall).toBe(0);
-        }
-      }),
-      { numRuns: 60 },
+      { numRuns: 30 },
     );
   });
 });

@@ -1,0 +1,98 @@
+import { readFileSync } from "node:fs";
+import { describe, expect, it } from "vitest";
+import { ruleInput, scenarioToInputs } from "@/lib/scenario/to-inputs";
+import { parseScenario, type Scenario } from "@/lib/validation/scenario";
+
+// Scenario file (grower's units) → GardenInputs (SI), checked against NIST Handbook 44
+// Appendix C (1 in = 2.54 cm, 1 lb = 0.45359237 kg, 1 gal = 231 in³) and PS 20 lumber sizes.
+const hollis = (): Scenario => {
+  const r = parseScenario(
+    JSON.parse(readFileSync("tests/fixtures/scenarios/hollis-street-garden.json", "utf8")),
+  );
+  if (!r.ok) throw new Error(JSON.stringify(r.issues));
+  return r.scenario;
+};
+
+describe("scenario → GardenInputs", () => {
+  const inputs = scenarioToInputs(hollis());
+
+  it("turns a 24 × 20 in outside tray of 2×6 into 21 × 17 × 5½ in inside, in metres (PS 20)", () => {
+    const t = inputs.bins[0]!.tray;
+    expect(t.insideLengthM).toBeCloseTo(21 * 0.0254, 12);
+    expect(t.insideWidthM).toBeCloseTo(17 * 0.0254, 12);
+    expect(t.insideDepthM).toBeCloseTo(5.5 * 0.0254, 12);
+  });
+
+  it("keeps frost dates as month and day, and the price per kg ($1.00/lb ÷ 0.45359237)", () => {
+    expect(inputs.settings.lastSpringFrost).toEqual({ month: 4, day: 15 });
+    expect(inputs.settings.firstFallFrost).toEqual({ month: 10, day: 20 });
+    expect(inputs.settings.castingsPricePerKg).toBeCloseTo(1 / 0.45359237, 12);
+    expect(inputs.settings.liquidMaxAgeDays).toBe(7);
+  });
+
+  it("leaves unset engine parameters null (= the engine default), never a copied default", () => {
+    const b = inputs.bins[0]!;
+    expect([b.rotationIntervalDays, b.processingDays, b.fillFraction, b.bulkDensityKgPerL]).toEqual(
+      [null, null, null, null],
+    );
+  });
+
+  it("gives logged harvests and drains lot ids that applications can name", () => {
+    expect(inputs.logs.harvests.map((h) => h.id)).toContain("wood-stack:harvest:2026-07-01");
+    expect(inputs.logs.drains.map((d) => d.id)).toContain("wood-stack:drain:2026-07-26");
+    const july = inputs.logs.applications.find(
+      (a) => a.plantingId === "tomato-north" && a.date === "2026-07-10",
+    )!;
+    expect(july.draws).toEqual([
+      { lotId: "wood-stack:harvest:2026-07-01", amount: 2.2 * 0.45359237 },
+    ]);
+    expect(inputs.logs.wormMoves).toEqual([
+      {
+        id: "worm-move-1",
+        date: "2026-06-14",
+        fromBinId: "wood-stack",
+        toBinId: "plastic-pair",
+        worms: 600,
+      },
+    ]);
+  });
+
+  it("says what a rule amount measures, in SI", () => {
+    const base = { material: "castings", method: "top-dress", recurrence: "FREQ=MONTHLY" } as const;
+    // 1 cup = 236.5882365 mL; 2 oz = 56.69904625 g; ¼ in over 1 m² = 6.35 L; 2 qt per gal = 0.5 L/L.
+    expect(
+      ruleInput({ ...base, basis: "per-plant", amount: { value: 1, unit: "cup" } }),
+    ).toMatchObject({
+      measure: "volume",
+      amount: 0.2365882365,
+    });
+    const oz = ruleInput({ ...base, basis: "per-plant", amount: { value: 2, unit: "oz" } });
+    expect(oz.measure).toBe("mass");
+    expect(oz.amount).toBeCloseTo(0.05669904625, 12);
+    expect(
+      ruleInput({ ...base, basis: "per-area", amount: { value: 0.25, unit: "in" } }).amount,
+    ).toBeCloseTo(6.35, 12);
+    expect(
+      ruleInput({
+        ...base,
+        basis: "per-container-volume",
+        amount: { value: 2, unit: "qt", per: "gal" },
+      }).amount,
+    ).toBeCloseTo(0.5, 12);
+    expect(ruleInput({ ...base, basis: "percent-of-mix", amount: 15 })).toMatchObject({
+      measure: "percent-of-mix",
+      amount: 15,
+    });
+  });
+
+  it("takes the plant count as a whole number, in the file as in the inputs", () => {
+    const s = JSON.parse(
+      readFileSync("tests/fixtures/scenarios/hollis-street-garden.json", "utf8"),
+    );
+    s.plantings[0].plantCount = 2.5;
+    const r = parseScenario(s);
+    expect(r.ok).toBe(false);
+    if (!r.ok) expect(r.issues[0]!.path).toBe("plantings[0].plantCount");
+    expect(inputs.plantings.every((p) => Number.isInteger(p.plantCount))).toBe(true);
+  });
+});
