@@ -22,7 +22,7 @@ const MONTHS = ["Jan", "Feb", "Mar", "Apr", "May", "Jun", "Jul", "Aug", "Sep", "
 export interface BinFormInitial {
   id?: string;
   name: string;
-  kind: "stacked-tray" | "single";
+  kind: (typeof binKinds)[number];
   trayCount: number;
   trayLengthM: number | null;
   trayWidthM: number | null;
@@ -36,6 +36,7 @@ export interface BinFormInitial {
   rotationDays: number | null;
   fillFraction: number | null;
   bulkDensityKgPerL: number | null;
+  drainIntervalDays: number | null;
 }
 
 interface Values {
@@ -57,6 +58,7 @@ interface Values {
   rotationDays: string;
   fillFraction: string;
   bulkDensityKgPerL: string;
+  drainIntervalDays: string;
 }
 
 const num = (s: string) => (s.trim() === "" ? null : Number(s));
@@ -99,6 +101,7 @@ export function BinForm({
       rotationDays: str(initial.rotationDays, 0),
       fillFraction: str(initial.fillFraction),
       bulkDensityKgPerL: str(initial.bulkDensityKgPerL),
+      drainIntervalDays: str(initial.drainIntervalDays, 0),
     },
   });
   const v = useWatch({ control });
@@ -141,6 +144,7 @@ export function BinForm({
       rotationDays: num(values.rotationDays),
       fillFraction: num(values.fillFraction),
       bulkDensityKgPerL: num(values.bulkDensityKgPerL),
+      drainIntervalDays: num(values.drainIntervalDays),
     };
     try {
       const url = `/api/gardens/${gardenId}/bins${initial.id ? `/${initial.id}` : ""}`;
@@ -299,6 +303,13 @@ export function BinForm({
               step="any"
               {...register("bulkDensityKgPerL")}
             />
+          </Field>
+          <Field
+            label="Days between drains"
+            hint="Blank = drain when the base has collected a week's liquid (the garden's liquid keeping time)"
+            error={err("drainIntervalDays")}
+          >
+            <Input type="number" inputMode="numeric" {...register("drainIntervalDays")} />
           </Field>
         </div>
       </details>

@@ -18,6 +18,8 @@ export interface LogEntry {
   kind: BinEventKind;
   on: string;
   foodKg: number | null;
+  foods: string[];
+  castingsL: number | null;
   castingsKg: number | null;
   liquidL: number | null;
   temperatureC: number | null;
@@ -33,8 +35,11 @@ export interface LogEntry {
 function summary(e: LogEntry, system: UnitSystem): string {
   const parts: string[] = [];
   if (e.foodKg !== null) parts.push(formatAmount(e.foodKg, "castings-mass", system));
+  if (e.foods.length) parts.push(e.foods.join(", "));
   if (e.castingsKg !== null)
     parts.push(`${formatAmount(e.castingsKg, "castings-mass", system)} castings`);
+  if (e.castingsL !== null)
+    parts.push(`(${formatAmount(e.castingsL, "liquid", system)} by volume)`);
   if (e.liquidL !== null) parts.push(formatAmount(e.liquidL, "liquid", system));
   if (e.temperatureC !== null) parts.push(formatTemperature(e.temperatureC, system));
   if (e.moisturePercent !== null) parts.push(`${Math.round(e.moisturePercent)} % moisture`);

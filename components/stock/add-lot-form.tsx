@@ -23,6 +23,7 @@ export function AddLotForm({
   const [amount, setAmount] = useState("");
   const [on, setOn] = useState(today);
   const [manure, setManure] = useState(false);
+  const [price, setPrice] = useState("");
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [message, setMessage] = useState<string | null>(null);
   const [pending, setPending] = useState(false);
@@ -92,6 +93,19 @@ export function AddLotForm({
           <Input type="date" max={today} value={on} onChange={(e) => setOn(e.target.value)} />
         </Field>
       </div>
+      {reason === "bought" && material === "castings" ? (
+        <Field label={`Price paid per ${unit} (optional)`} error={errors.pricePerKg}>
+          <Input
+            className="max-w-40"
+            type="number"
+            inputMode="decimal"
+            step="any"
+            min={0}
+            value={price}
+            onChange={(e) => setPrice(e.target.value)}
+          />
+        </Field>
+      ) : null}
       <label className="flex min-h-11 items-center gap-2">
         <input type="checkbox" checked={manure} onChange={(e) => setManure(e.target.checked)} /> The
         seller says it was made with manure

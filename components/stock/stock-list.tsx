@@ -85,7 +85,7 @@ export function StockList({
               {lot.ageDays} days old (keeps {lot.limitDays}) · of{" "}
               {formatAmount(lot.initialSi, kindOf(lot.material), system)}
             </p>
-            {canAdjust && lot.origin === "entered" && lot.remainingSi > 0 ? (
+            {canAdjust && lot.remainingSi > 0 ? (
               <AdjustLot gardenId={gardenId} lot={lot} system={system} />
             ) : null}
           </li>
@@ -157,6 +157,7 @@ function AdjustLot({
         <Select value={reason} onChange={(e) => setReason(e.target.value)}>
           <option value="spilled">Spilled</option>
           <option value="given-away">Given away</option>
+          <option value="spoiled">Spoiled</option>
           <option value="correction">Recount</option>
         </Select>
       </label>

@@ -8,12 +8,6 @@ import type { BinEventKind } from "@/lib/validation/bin-event";
 // The bin log: rows of bin_events plus the worm_moves that touch the bin,
 // merged into one timeline. Harvests and drains go through db/queries/lots.ts,
 // which writes the lot with the event in the caller's transaction.
-//
-// Stop-gaps until the schema has them (asked in /work/briefs/engine-requests.md):
-// "bedding added" is stored as kind "feeding" with no food weight and a note
-// starting BEDDING_NOTE; the food list and a harvest's volume ride in the note.
-
-export const BEDDING_NOTE = "Bedding added";
 
 export interface BinLogEntry {
   id: string;
@@ -22,6 +16,8 @@ export interface BinLogEntry {
   kind: BinEventKind;
   on: string;
   foodKg: number | null;
+  foods: string[];
+  castingsL: number | null;
   castingsKg: number | null;
   predictedCastingsKg: number | null;
   liquidL: number | null;
@@ -37,12 +33,12 @@ export interface BinLogEntry {
   loggedAt: string;
 }
 
-const eventKind = (kind: string, foodKg: number | null, note: string | null): BinEventKind => {
+const eventKind = (kind: string): BinEventKind => {
   switch (kind) {
     case "feeding":
-      return foodKg === null && (note ?? "").startsWith(BEDDING_NOTE)
-        ? "bedding-added"
-        : "food-added";
+      return "food-added";
+    case "bedding-added":
+      return "bedding-added";
     case "tray-added":
       return "tray-added";
     case "harvest":
@@ -75,6 +71,8 @@ export async function listBinLog({
       kind: binEvents.kind,
       on: binEvents.occurredOn,
       foodKg: binEvents.foodKg,
+      foods: binEvents.foodKinds,
+      castingsL: binEvents.castingsL,
       castingsKg: binEvents.castingsKg,
       predictedCastingsKg: binEvents.predictedCastingsKg,
       liquidL: binEvents.liquidL,
@@ -124,7 +122,7 @@ export async function listBinLog({
     ...events.map((e) => ({
       ...e,
       source: "event" as const,
-      kind: eventKind(e.kind, e.foodKg, e.note),
+      kind: eventKind(e.kind),
       direction: null,
       otherBin: null,
       loggedAt: e.loggedAt.toISOString(),
@@ -138,6 +136,8 @@ export async function listBinLog({
         kind: "worms-moved" as const,
         on: m.on,
         foodKg: null,
+        foods: [],
+        castingsL: null,
         castingsKg: null,
         predictedCastingsKg: null,
         liquidL: null,
@@ -182,8 +182,9 @@ interface EventBase {
 export async function insertSimpleEvent(
   tx: DbOrTx,
   input: EventBase & {
-    kind: "feeding" | "tray-added" | "observation";
+    kind: "feeding" | "bedding-added" | "tray-added" | "observation";
     foodKg?: number | null;
+    foods?: string[];
     temperatureC?: number | null;
     moisturePercent?: number | null;
     wormCount?: number | null;
@@ -197,6 +198,7 @@ export async function insertSimpleEvent(
       kind: input.kind,
       occurredOn: input.on,
       foodKg: input.foodKg ?? null,
+      foodKinds: input.foods ?? [],
       temperatureC: input.temperatureC ?? null,
       moisturePercent: input.moisturePercent ?? null,
       wormCount: input.wormCount ?? null,
@@ -207,7 +209,22 @@ export async function insertSimpleEvent(
   return { eventId: row!.id };
 }
 
-export { insertDrain, insertHarvest };
+export { insertDrain };
+
+/** A harvest (via lots.ts, which writes its lot) plus the volume when it was measured that way. */
+export async function insertHarvestEvent(
+  tx: DbOrTx,
+  input: Parameters<typeof insertHarvest>[1] & { castingsL: number | null },
+) {
+  const { castingsL, ...rest } = input;
+  const made = await insertHarvest(tx, rest);
+  if (castingsL !== null)
+    await tx
+      .update(binEvents)
+      .set({ castingsL })
+      .where(and(eq(binEvents.gardenId, input.gardenId), eq(binEvents.id, made.eventId)));
+  return made;
+}
 
 /**
  * Worms out of one bin and, when the target is in another garden, into that

@@ -24,6 +24,7 @@ export const binColumns = {
   leachateEstimateLPerWeek: bins.leachateEstimateLPerWeek,
   intakeFractionPerDay: bins.intakeFractionPerDay,
   densityCeilingKgPerM2: bins.densityCeilingKgPerM2,
+  drainIntervalDays: bins.drainIntervalDays,
   dormantMonths: bins.dormantMonths,
   indoors: bins.indoors,
   manureFeedstock: bins.manureFeedstock,
@@ -35,7 +36,7 @@ export type BinDto = {
   id: string;
   gardenId: string;
   name: string;
-  kind: "stacked-tray" | "single";
+  kind: "stacked-tray" | "single" | "flow-through";
   trayLengthM: number;
   trayWidthM: number;
   trayDepthM: number;
@@ -48,6 +49,7 @@ export type BinDto = {
   leachateEstimateLPerWeek: number | null;
   intakeFractionPerDay: number | null;
   densityCeilingKgPerM2: number | null;
+  drainIntervalDays: number | null;
   dormantMonths: number[];
   indoors: boolean;
   manureFeedstock: boolean;

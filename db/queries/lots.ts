@@ -328,7 +328,7 @@ export async function listLotStock({ gardenId }: { gardenId: string }): Promise<
 }
 
 // ── Added by the bins branch (issue 11): stock entered by hand. Data helper: move or
-// reshape freely; the routes under app/api/gardens/[gardenId]/lots call only these two.
+// reshape freely; POST /api/gardens/[gardenId]/lots calls it.
 
 export interface EnteredLotInput {
   gardenId: string;
@@ -336,6 +336,8 @@ export interface EnteredLotInput {
   producedOn: string;
   amountSi: number;
   manureFeedstock: boolean;
+  pricePerKg?: number | null;
+  note?: string | null;
 }
 
 /** A bought bag or stock on hand before Castline: a lot with no bin and no source event. */
@@ -351,59 +353,9 @@ export async function recordEnteredLot(input: EnteredLotInput): Promise<{ lotId:
       producedOn: input.producedOn,
       initialAmountSi: input.amountSi,
       manureFeedstock: input.manureFeedstock,
+      pricePerKg: input.pricePerKg ?? null,
+      note: input.note ?? null,
     })
     .returning({ id: stockLots.id });
   return { lotId: lot!.id };
-}
-
-/**
- * Takes an amount out of a hand-entered lot (spilled, given away, a recount):
- * its entered amount goes down, never below what applications already drew.
- * Lots made by a harvest or drain are refused: their amount is the logged
- * event's (calibration reads it); losses from them wait for a stock
- * adjustments table (asked for in /work/briefs/engine-requests.md).
- */
-export async function removeFromEnteredLot({
-  gardenId,
-  lotId,
-  removeSi,
-}: {
-  gardenId: string;
-  lotId: string;
-  removeSi: number;
-}): Promise<LotStock> {
-  const db = await getDb();
-  return db.transaction(async (tx) => {
-    const [lot] = await tx
-      .select({
-        id: stockLots.id,
-        binId: stockLots.binId,
-        material: stockLots.material,
-        producedOn: stockLots.producedOn,
-        initialSi: stockLots.initialAmountSi,
-        sourceEventId: stockLots.sourceEventId,
-      })
-      .from(stockLots)
-      .where(and(eq(stockLots.gardenId, gardenId), eq(stockLots.id, lotId)))
-      .for("update");
-    if (!lot) throw new AppError("not_found:lot");
-    if (lot.sourceEventId !== null)
-      throw new AppError(
-        "conflict:lot_from_log",
-        "This lot came from a logged harvest or drain; recording a loss from it is not possible yet.",
-        { lotId: "came from the bin log" },
-      );
-    const left = lot.initialSi - ((await drawnSoFar(tx, gardenId, [lotId])).get(lotId) ?? 0);
-    if (removeSi > left + EPSILON)
-      throw new AppError("conflict:stock", "Stock cannot go below zero.", {
-        removeSi: `is more than the lot has left (${Math.max(0, left)})`,
-      });
-    const initialSi = Math.max(0, lot.initialSi - removeSi);
-    await tx
-      .update(stockLots)
-      .set({ initialAmountSi: initialSi })
-      .where(and(eq(stockLots.gardenId, gardenId), eq(stockLots.id, lotId)));
-    const { sourceEventId: _source, ...rest } = lot;
-    return { ...rest, initialSi, remainingSi: Math.max(0, left - removeSi) };
-  });
 }

@@ -51,6 +51,7 @@ export function nullParams(v: {
   leachateEstimateLPerWeek?: number | null;
   intakeFractionPerDay?: number | null;
   densityCeilingKgPerM2?: number | null;
+  drainIntervalDays?: number | null;
 }) {
   return {
     rotationDays: v.rotationDays ?? null,
@@ -60,5 +61,6 @@ export function nullParams(v: {
     leachateEstimateLPerWeek: v.leachateEstimateLPerWeek ?? null,
     intakeFractionPerDay: v.intakeFractionPerDay ?? null,
     densityCeilingKgPerM2: v.densityCeilingKgPerM2 ?? null,
+    drainIntervalDays: v.drainIntervalDays ?? null,
   };
 }

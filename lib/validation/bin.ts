@@ -6,10 +6,11 @@ import { isoDateSchema } from "./engine-inputs";
 // through lib/units). Engine parameters are nullable: null or absent means
 // "the engine's default", which the form shows with its source beside it.
 
-export const binKinds = ["stacked-tray", "single"] as const;
+export const binKinds = ["stacked-tray", "single", "flow-through"] as const;
 export const binKindLabels: Record<(typeof binKinds)[number], string> = {
   "stacked-tray": "Stacked trays",
   single: "Single bin",
+  "flow-through": "Flow-through",
 };
 
 const positive = (max: number, label: string) =>
@@ -70,11 +71,12 @@ export const binParamsShape = {
   leachateEstimateLPerWeek: nullableParam(0, 50, "leachate estimate"),
   intakeFractionPerDay: nullableParam(0.05, 1, "food intake"),
   densityCeilingKgPerM2: nullableParam(0.5, 40, "worm density ceiling"),
+  drainIntervalDays: nullableParam(1, 90, "days between drains", true),
 };
 
 const binFields = z.object({
   name: z.string().trim().min(1, "Give the bin a name.").max(60, "Use at most 60 characters."),
-  kind: z.enum(binKinds, { error: "Choose stacked trays or a single bin." }),
+  kind: z.enum(binKinds, { error: "Choose stacked trays, a single bin or flow-through." }),
   trayCount: z
     .number({ error: "Enter the number of trays." })
     .int("Trays come whole.")

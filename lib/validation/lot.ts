@@ -15,13 +15,16 @@ export const createLotSchema = z.object({
     .max(5000, "That looks too large (at most 5,000)."),
   // Bought castings carry no manure flag unless the seller says so.
   manureFeedstock: z.boolean().default(false),
+  // What was paid, per kg (the form converts from the garden's units); bought stock only.
+  pricePerKg: z.number().finite().nonnegative().max(1000).nullable().optional(),
+  note: z.string().trim().max(300).nullable().optional(),
 });
 export type CreateLotInput = z.infer<typeof createLotSchema>;
 
 /** Stock that left a lot without a feeding: spilled, given away, or a counting correction. */
 export const adjustLotSchema = z.object({
-  reason: z.enum(["spilled", "given-away", "correction"], {
-    error: "Choose a reason: spilled, given away or correction.",
+  reason: z.enum(["spilled", "given-away", "spoiled", "correction"], {
+    error: "Choose a reason: spilled, given away, spoiled or correction.",
   }),
   /** How much left the lot (kg or L). */
   removeSi: z

@@ -336,6 +336,33 @@ describe("stock", () => {
     expect(again.status).toBe(409);
   });
 
+  it("takes a spill out of a harvested lot, and the plan's stock sees it", async () => {
+    const made = await seedBin(world.gardenId);
+    const harvest = await logEvent("helper", made.id, {
+      kind: "tray-harvested",
+      on: "2026-11-25",
+      castingsKg: 10,
+    });
+    const lotId = harvest.json.lotId as string;
+    const res = await call(lot.PATCH, {
+      url: `/api/gardens/${world.gardenId}/lots/${lotId}`,
+      params: { gardenId: world.gardenId, lotId },
+      method: "PATCH",
+      cookie: await cookieFor(world.grower),
+      body: { reason: "spilled", removeSi: 4 },
+    });
+    expect(res.status).toBe(200);
+    expect(res.json.lot.remainingSi).toBeCloseTo(6, 9);
+    const helperTry = await call(lot.PATCH, {
+      url: `/api/gardens/${world.gardenId}/lots/${lotId}`,
+      params: { gardenId: world.gardenId, lotId },
+      method: "PATCH",
+      cookie: await cookieFor(world.helper),
+      body: { reason: "spilled", removeSi: 1 },
+    });
+    expect(helperTry.status).toBe(403);
+  });
+
   it("records a bought bag without a manure flag unless stated", async () => {
     const res = await call(lots.POST, {
       url: `/api/gardens/${world.gardenId}/lots`,

@@ -43,6 +43,7 @@ export async function seedBin(gardenId: string, overrides: Partial<BinValues> = 
       leachateEstimateLPerWeek: null,
       intakeFractionPerDay: null,
       densityCeilingKgPerM2: null,
+      drainIntervalDays: null,
       dormantMonths: [],
       indoors: true,
       manureFeedstock: false,

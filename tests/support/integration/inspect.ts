@@ -68,6 +68,7 @@ const SNAPSHOT_TABLES = [
   "bin_events",
   "worm_moves",
   "stock_lots",
+  "stock_adjustments",
   "uploads",
 ];
 

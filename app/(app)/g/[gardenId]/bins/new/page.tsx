@@ -54,6 +54,7 @@ export default async function NewBinPage({
               rotationDays: null,
               fillFraction: null,
               bulkDensityKgPerL: null,
+              drainIntervalDays: null,
             }}
           />
         </CardBody>

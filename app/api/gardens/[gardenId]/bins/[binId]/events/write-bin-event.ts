@@ -1,9 +1,8 @@
 import "server-only";
 import type { DbOrTx } from "@/db";
 import {
-  BEDDING_NOTE,
   insertDrain,
-  insertHarvest,
+  insertHarvestEvent,
   insertSimpleEvent,
   insertWormMove,
 } from "@/db/queries/bin-events";
@@ -23,9 +22,6 @@ export interface WriteResult {
   lotId?: string;
   warnings: string[];
 }
-
-const joinNote = (prefix: string, note: string | null | undefined) =>
-  note ? `${prefix}. ${note}` : prefix;
 
 /** What one full tray of this bin holds, and what the forecast expects from it (uncalibrated). */
 export function trayCapacity(bin: BinDto) {
@@ -57,24 +53,16 @@ export async function writeBinEvent(
   };
   switch (input.kind) {
     case "food-added": {
-      const foods = input.foods.length ? `Food: ${input.foods.join(", ")}` : null;
-      const note = foods ? joinNote(foods, input.note) : base.note;
       const { eventId } = await insertSimpleEvent(tx, {
         ...base,
-        note,
         kind: "feeding",
         foodKg: input.foodKg,
+        foods: input.foods,
       });
       return { eventId, warnings: warningsForFoods(input.foods) };
     }
     case "bedding-added": {
-      const note = joinNote(BEDDING_NOTE, input.note);
-      const { eventId } = await insertSimpleEvent(tx, {
-        ...base,
-        note,
-        kind: "feeding",
-        foodKg: null,
-      });
+      const { eventId } = await insertSimpleEvent(tx, { ...base, kind: "bedding-added" });
       return { eventId, warnings: [] };
     }
     case "tray-added": {
@@ -110,14 +98,10 @@ export async function writeBinEvent(
           },
         );
       }
-      const note =
-        input.castingsL !== undefined
-          ? joinNote(`Volume ${input.castingsL} L`, input.note)
-          : base.note;
-      const made = await insertHarvest(tx, {
+      const made = await insertHarvestEvent(tx, {
         ...base,
-        note,
         castingsKg: kg,
+        castingsL: input.castingsL ?? null,
         predictedKg: cap.predictedKg,
       });
       return { eventId: made.eventId, lotId: made.lotId, warnings: [] };
