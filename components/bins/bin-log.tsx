@@ -109,7 +109,11 @@ export function BinLog({
               <span>{summary(e, system)}</span>
             </div>
             {e.note ? <p className="text-soil-700">{e.note}</p> : null}
-            <p className="text-sm text-soil-600">Logged by {e.loggedBy ?? "a former member"}</p>
+            <p className="text-sm text-soil-600">
+              {e.loggedBy
+                ? `Logged by ${e.loggedBy}`
+                : "Logger not recorded (imported, or no longer a member)"}
+            </p>
           </li>
         ))}
       </ol>

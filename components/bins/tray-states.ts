@@ -20,19 +20,22 @@ export function trayStack({
   startedOn,
   trayCount,
   processingDays,
+  rotationDays,
   tasks,
   today,
 }: {
   startedOn: string;
   trayCount: number;
   processingDays: number;
+  /** Days between trays: the plan's tasks start at this month, so earlier trays follow the cadence. */
+  rotationDays: number;
   tasks: readonly BinTask[];
   today: string;
 }): TrayView[] {
-  const added = [
-    startedOn,
-    ...tasks.filter((t) => t.kind === "add-tray" && t.date <= today).map((t) => t.date),
-  ];
+  const added = [startedOn];
+  for (let day = addDays(startedOn, rotationDays); day <= today; day = addDays(day, rotationDays))
+    added.push(day);
+  added.push(...tasks.filter((t) => t.kind === "add-tray" && t.date <= today).map((t) => t.date));
   const onStack = [...new Set(added)].sort().reverse().slice(0, trayCount);
   return Array.from({ length: trayCount }, (_, i): TrayView => {
     const addedOn = onStack[i] ?? null;

@@ -55,7 +55,9 @@ export function StockList({
   });
   const [showUsed, setShowUsed] = useState(false);
   if (isPending) return <Skeleton className="h-32" />;
-  const shown = data.filter((l) => showUsed || l.status !== "used-up");
+  // Used-up and aged-out lots are history: hidden unless asked for, so the shelf reads at a glance.
+  const shown = data.filter((l) => showUsed || (l.status !== "used-up" && l.status !== "aged-out"));
+  const hidden = data.length - shown.length;
   return (
     <div className="flex flex-col gap-3">
       <label className="flex min-h-11 items-center gap-2">
@@ -86,7 +88,12 @@ export function StockList({
               {formatAmount(lot.initialSi, kindOf(lot.material), system)}
             </p>
             {canAdjust && lot.remainingSi > 0 ? (
-              <AdjustLot gardenId={gardenId} lot={lot} system={system} />
+              <details>
+                <summary className="min-h-11 cursor-pointer font-semibold text-leaf-800">
+                  Take some out
+                </summary>
+                <AdjustLot gardenId={gardenId} lot={lot} system={system} />
+              </details>
             ) : null}
           </li>
         ))}

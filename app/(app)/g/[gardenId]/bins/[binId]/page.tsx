@@ -40,6 +40,7 @@ export default async function BinPage({
     startedOn: bin.startedOn,
     trayCount: bin.trayCount,
     processingDays: bin.processingDays ?? dflt("processingDays"),
+    rotationDays: bin.rotationDays ?? dflt("rotationIntervalDays"),
     tasks: supply?.tasks ?? [],
     today,
   });
