@@ -4,6 +4,7 @@ import { seedDemoGarden } from "@/db/seed/seed-demo";
 import { ensureStarterCrops } from "@/db/seed/starter-crops";
 import { getEnv } from "@/lib/env";
 import { startLocalMailIfNeeded } from "@/services/mailer";
+import { getStorage } from "@/services/storage";
 
 // Runs once when the Next server process starts (instrumentation.ts): opens the
 // database (which takes the data-directory lock and applies migrations), loads
@@ -25,6 +26,8 @@ export async function startServer(): Promise<void> {
       );
     }
     await startLocalMailIfNeeded();
+    // Opens photo storage now: the local fake S3 starts with the app, and a bad S3_* setting stops the start.
+    await getStorage();
     installShutdownHandlers();
   } catch (error) {
     // If register() throws, `next start` keeps serving 500s; a refused start must really stop.

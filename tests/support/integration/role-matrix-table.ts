@@ -4,6 +4,10 @@ import * as bin from "@/app/api/gardens/[gardenId]/bins/[binId]/route";
 import * as bins from "@/app/api/gardens/[gardenId]/bins/route";
 import * as lot from "@/app/api/gardens/[gardenId]/lots/[lotId]/route";
 import * as lots from "@/app/api/gardens/[gardenId]/lots/route";
+import * as photo from "@/app/api/gardens/[gardenId]/photos/[photoId]/route";
+import * as photos from "@/app/api/gardens/[gardenId]/photos/route";
+import { createPhoto } from "@/db/queries/photos";
+import { getStorage } from "@/services/storage";
 import * as account from "@/app/api/account/route";
 import * as devOutbox from "@/app/api/dev/outbox/route";
 import * as resend from "@/app/api/gardens/[gardenId]/invitations/[invitationId]/resend/route";
@@ -547,6 +551,45 @@ export const roleMatrix: MatrixRow[] = [
         url: `/api/gardens/${ctx.world.gardenId}/lots/${lotId}`,
         params: { ...g(ctx), lotId },
         body: { reason: "spilled", removeSi: 1.5 },
+      };
+    },
+  },
+  {
+    method: "POST",
+    file: "app/api/gardens/[gardenId]/photos/route.ts",
+    variant: "no file: the role gate answers before the body is read",
+    handler: photos.POST,
+    mutates: false,
+    // Uploads themselves (multipart) are in photos.test.ts; here a JSON body is a 400 once past the gate.
+    expect: atLeast("helper", 400),
+    request: (ctx) => ({
+      url: `/api/gardens/${ctx.world.gardenId}/photos`,
+      params: g(ctx),
+      body: { file: null },
+    }),
+  },
+  {
+    method: "GET",
+    file: "app/api/gardens/[gardenId]/photos/[photoId]/route.ts",
+    handler: photo.GET,
+    mutates: false,
+    expect: viewerPlus,
+    request: async (ctx) => {
+      const storageKey = `photos/${ctx.world.gardenId}/${crypto.randomUUID()}.jpg`;
+      await (
+        await getStorage()
+      ).put(storageKey, Buffer.from([0xff, 0xd8, 0xff, 0xd9]), "image/jpeg");
+      const { id: photoId } = await createPhoto({
+        gardenId: ctx.world.gardenId,
+        uploadedBy: ctx.world.owner.id,
+        storageKey,
+        byteSize: 4,
+        originalName: "tray.jpg",
+        eventId: null,
+      });
+      return {
+        url: `/api/gardens/${ctx.world.gardenId}/photos/${photoId}`,
+        params: { ...g(ctx), photoId },
       };
     },
   },
