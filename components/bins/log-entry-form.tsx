@@ -7,6 +7,7 @@ import { useForm, useWatch } from "react-hook-form";
 import { FormMessage } from "@/components/forms/form-message";
 import { Alert, Button, Field, Input, Select, Textarea, useToast } from "@/components/ui";
 import { apiFetch, ApiError } from "@/lib/api-client";
+import { PhotoUpload } from "./photo-upload";
 import { queryKeys } from "@/lib/query-keys";
 import { toSi, type UnitSystem } from "@/lib/units";
 import {
@@ -67,6 +68,7 @@ export function LogEntryForm({
   const [formError, setFormError] = useState<string | null>(null);
   const [overCapacity, setOverCapacity] = useState(false);
   const [warnings, setWarnings] = useState<string[]>([]);
+  const [harvestId, setHarvestId] = useState<string | null>(null);
   const { register, handleSubmit, control, reset, formState } = useForm<Values>({
     defaultValues: { kind: "food-added", on: today, harvestBy: "weight", foods: [], target: "" },
   });
@@ -112,6 +114,7 @@ export function LogEntryForm({
         { body },
       );
       setWarnings(res.warnings);
+      setHarvestId(v.kind === "tray-harvested" ? res.eventId : null);
       setOverCapacity(false);
       toast.show({ title: `${binEventKindLabels[v.kind]}: logged.`, tone: "positive" });
       reset({ ...v, amount: "", foods: [], temperature: "", moisture: "", worms: "", note: "" });
@@ -244,6 +247,7 @@ export function LogEntryForm({
       <Button type="submit" pending={formState.isSubmitting}>
         Log it
       </Button>
+      {harvestId ? <PhotoUpload key={harvestId} gardenId={gardenId} eventId={harvestId} /> : null}
     </form>
   );
 }

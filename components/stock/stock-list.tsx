@@ -62,7 +62,7 @@ export function StockList({
     <div className="flex flex-col gap-3">
       <label className="flex min-h-11 items-center gap-2">
         <input type="checkbox" checked={showUsed} onChange={(e) => setShowUsed(e.target.checked)} />{" "}
-        Show used-up lots
+        Show used-up and aged-out lots{hidden && !showUsed ? ` (${hidden} hidden)` : ""}
       </label>
       {shown.length === 0 ? (
         <p className="text-soil-700">
