@@ -37,8 +37,14 @@ const config = [
               group: ["@/*", "!@/lib", "!@/lib/engine", "!@/lib/engine/**", "!@/lib/units"],
               message: "lib/engine imports only lib/engine and lib/units",
             },
-            { group: ["@/lib/*", "!@/lib/engine", "!@/lib/engine/**", "!@/lib/units"], message: "lib/engine imports only lib/engine and lib/units" },
-            { group: ["react", "react/*", "next", "next/*", "node:*", "fs", "path", "zod"], message: "lib/engine is pure" },
+            {
+              group: ["@/lib/*", "!@/lib/engine", "!@/lib/engine/**", "!@/lib/units"],
+              message: "lib/engine imports only lib/engine and lib/units",
+            },
+            {
+              group: ["react", "react/*", "next", "next/*", "node:*", "fs", "path", "zod"],
+              message: "lib/engine is pure",
+            },
             { group: ["../*", "./*"], message: "use @/lib/engine/… paths" },
           ],
         },

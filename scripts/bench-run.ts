@@ -88,7 +88,8 @@ export function main(): void {
   }
   const k = exponent(rows.map((r) => ({ n: r.n, ms: r.ms })));
   const at500 = rows.find((r) => r.n === 500)!.ms;
-  const gap5000 = rows.find((r) => r.n === 5000)!.gap;
+  const r5000 = rows.find((r) => r.n === 5000)!;
+  const gap5000 = r5000.gap - r5000.ms;
   process.stdout.write("\nmeasured                                   target      result\n");
   process.stdout.write(
     `500 plantings, median ms        ${at500.toFixed(2).padStart(10)}   ≤ ${TARGET_MS_500} ms    ${verdict(at500 <= TARGET_MS_500)}\n`,
@@ -98,6 +99,9 @@ export function main(): void {
   );
   process.stdout.write(
     `gap suggestions at 5,000, ms    ${gap5000.toFixed(1).padStart(10)}   ≤ ${TARGET_GAP_MS_5000} ms   ${verdict(gap5000 <= TARGET_GAP_MS_5000)}\n`,
+  );
+  process.stdout.write(
+    `(gap suggestions = 'with gap ms' − 'median ms' at 5,000 plantings; the whole plan with suggestions took ${r5000.gap.toFixed(1)} ms)\n`,
   );
   process.stdout.write(
     "\n'median ms' is computePlan without gap suggestions (replay, forecast, demand, ledger, worms); 'with gap ms'\n" +

@@ -131,6 +131,21 @@ export async function readGardenInputs(
     drawsByApplication.set(d.applicationId, list);
   }
 
+  // An archived planting (or one in an archived bed) is out of the garden from
+  // that day: its plan ends there. One archived before it was planted, with no
+  // logged application, was never in the garden and is left out.
+  const bedById = byId(bedRows);
+  const logged = new Set(applicationRows.map((a) => a.plantingId));
+  const endOf = (p: (typeof plantingRows)[number]): string | null | "gone" => {
+    const archived = [p.archivedOn, bedById.get(p.bedId)?.archivedOn ?? null]
+      .filter((d): d is string => d !== null)
+      .sort()[0];
+    if (archived === undefined) return p.endedOn;
+    if (archived <= p.plantedOn && !logged.has(p.id)) return "gone";
+    const end = p.endedOn !== null && p.endedOn < archived ? p.endedOn : archived;
+    return end < p.plantedOn ? p.plantedOn : end;
+  };
+
   const rule = (ruleId: string | null): FeedingRuleInput | null => {
     const r = ruleId === null ? undefined : ruleById.get(ruleId);
     if (!r) return null;
@@ -193,9 +208,11 @@ export async function readGardenInputs(
         b.kind === "bed" && b.lengthM !== null && b.widthM !== null ? b.lengthM * b.widthM : null,
       containerVolumeL: b.kind === "container" ? b.containerVolumeL : null,
     })),
-    plantings: plantingRows.map((p) => {
+    plantings: plantingRows.flatMap((p) => {
       // The composite key (garden_id, crop_id) guarantees the crop is this garden's.
       const crop = cropById.get(p.cropId)!;
+      const end = endOf(p);
+      if (end === "gone") return [];
       return {
         id: p.id,
         bedId: p.bedId,
@@ -203,7 +220,7 @@ export async function readGardenInputs(
         feederClass: crop.feederClass,
         plantCount: p.plantCount,
         startDate: p.plantedOn,
-        endDate: p.endedOn,
+        endDate: end,
         harvestDate: p.expectedHarvestOn,
         priority: p.priority,
         edible: crop.edible,

@@ -5,7 +5,8 @@ import { getDb } from "@/db";
 import { insertGardenInputs } from "@/db/queries/garden-inputs-write";
 import { loadGardenInputs } from "@/db/queries/garden-inputs";
 import { listLotStock, recordApplication, recordStockAdjustment } from "@/db/queries/lots";
-import { applications, stockLots, users } from "@/db/schema";
+import { getGardenSummary } from "@/db/queries/garden-summary";
+import { applications, plantings, stockLots, users } from "@/db/schema";
 import type { GardenInputs } from "@/lib/engine";
 import { closeHarness, tableRows } from "@/tests/support/integration/harness";
 
@@ -451,5 +452,46 @@ describe("writing inputs is all or nothing", () => {
       code: "conflict:stock",
     });
     expect(await tableRows("gardens")).toEqual(before);
+  });
+});
+
+describe("archived plantings and beds", () => {
+  it("end a planting's plan on the day it was archived; one archived before planting is left out", async () => {
+    const db = await getDb();
+    await db
+      .update(plantings)
+      .set({ archivedOn: "2026-07-15" })
+      .where(eq(plantings.id, ids.get("parsley")!));
+    const [kale] = await db
+      .select()
+      .from(plantings)
+      .where(eq(plantings.id, ids.get("kale")!));
+    const [planned] = await db
+      .insert(plantings)
+      .values({ ...kale!, id: undefined, plantedOn: "2026-09-01", archivedOn: "2026-08-01" })
+      .returning({ id: plantings.id });
+    const loaded = await loadGardenInputs({ gardenId, asOf: inputs.asOf });
+    expect(loaded.plantings.find((p) => p.id === ids.get("parsley"))!.endDate).toBe("2026-07-15");
+    expect(loaded.plantings.map((p) => p.id)).not.toContain(planned!.id);
+    // Not archived: unchanged (endDate null stays null, the engine's season end applies).
+    expect(loaded.plantings.find((p) => p.id === ids.get("kale"))!.endDate).toBeNull();
+  });
+
+  it("are not counted on the overview; plantings ended in the past are not either", async () => {
+    const db = await getDb();
+    const [kale] = await db
+      .select()
+      .from(plantings)
+      .where(eq(plantings.id, ids.get("kale")!));
+    await db
+      .insert(plantings)
+      .values({ ...kale!, id: undefined, plantedOn: "2019-05-01", endedOn: "2019-10-01" });
+    const summary = await getGardenSummary({ gardenId });
+    // kale (no end) counts; tomato ended 2026-10-10 and parsley is archived; the planned
+    // planting is archived; the 2019 one ended long ago. tomato counts only before 2026-10-11.
+    const today = new Date().toISOString().slice(0, 10);
+    expect(summary.activePlantings).toBe(today <= "2026-10-10" ? 2 : 1);
+    // The tote is retired on 2027-06-30; the stack never.
+    expect(summary).toMatchObject({ beds: 1, containers: 1, bins: today <= "2027-06-30" ? 2 : 1 });
   });
 });

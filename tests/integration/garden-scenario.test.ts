@@ -1,11 +1,12 @@
 import "@/tests/support/integration/env";
 import fs from "node:fs";
 import path from "node:path";
+import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { getDb } from "@/db";
 import { loadGardenInputs } from "@/db/queries/garden-inputs";
 import { exportGardenScenario, importGardenScenario } from "@/db/queries/garden-scenario";
-import { users } from "@/db/schema";
+import { gardens, users } from "@/db/schema";
 import { computePlan, type GardenInputs } from "@/lib/engine";
 import { scenarioToInputs } from "@/lib/scenario/to-inputs";
 import { parseScenario } from "@/lib/validation/scenario";
@@ -158,5 +159,25 @@ describe("database → export → import", () => {
       code: "conflict:stock",
     });
     expect(await counts()).toEqual(before);
+  });
+
+  it("lets a whole imported garden be deleted, its history with it, other gardens untouched", async () => {
+    const db = await getDb();
+    const { gardenId } = await importGardenScenario({ scenario: fixture, ownerId });
+    const tables = [
+      "plantings",
+      "applications",
+      "application_draws",
+      "stock_lots",
+      "bin_events",
+      "worm_moves",
+    ];
+    const counts = () => Promise.all(tables.map(countRows));
+    const withIt = await counts();
+    await db.delete(gardens).where(eq(gardens.id, gardenId));
+    const without = await counts();
+    // The fixture has plantings, applications with draws, lots, bin events and a worm move.
+    expect(without.every((n, i) => n < withIt[i]!)).toBe(true);
+    expect(await loadGardenInputs({ gardenId: first.gardenId, asOf: AS_OF })).toBeTruthy();
   });
 });

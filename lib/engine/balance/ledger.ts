@@ -195,6 +195,38 @@ class Shelf {
   }
 }
 
+/**
+ * One draw of `amount` for a group of claims on one day, shared in proportion to `weights`
+ * (recorded per claim, split the same way, when the caller records draws).
+ */
+function drawShared(
+  shelf: Shelf,
+  keep: number,
+  day: number,
+  amount: number,
+  mode: "clean-only" | "manure-first",
+  group: readonly number[],
+  weights: readonly number[],
+  records: LedgerResult["plannedDraws"],
+): number[] {
+  let total = 0;
+  for (const w of weights) total += w;
+  if (!(amount > AMOUNT_EPSILON) || !(total > 0)) return group.map(() => 0);
+  const [lo, hi] = shelf.range(day, keep);
+  const wantsRecord = records !== undefined && group.some((i) => records[i] !== undefined);
+  const drawn: { lotId: string; amount: number }[] | undefined = wantsRecord ? [] : undefined;
+  const got = shelf.draw(lo, hi, amount, mode, drawn);
+  const out = weights.map((w) => (got * w) / total);
+  if (drawn)
+    group.forEach((i, k) => {
+      const list = records![i];
+      if (!list) return;
+      const part = weights[k]! / total;
+      for (const d of drawn) list.push({ lotId: d.lotId, amount: d.amount * part });
+    });
+  return out;
+}
+
 function compareClaims(a: LedgerClaim, b: LedgerClaim): number {
   return (
     a.priority - b.priority ||
@@ -237,11 +269,27 @@ export function runLedger(input: LedgerInput): LedgerResult {
     const m = monthIndex(c.day);
     if (m >= 0 && c.need > 0) plannedByMonth[slot(m, c.pool)]!.push(i);
   });
+  // Logged claims bucketed by day (a counting sort: days are integers), so each month's list
+  // is already in date order.
   const loggedByMonth: number[][] = Array.from({ length: spans.length * 2 }, () => []);
-  input.logged.forEach((c, i) => {
-    const m = monthIndex(c.day);
-    if (m >= 0) loggedByMonth[slot(m, c.pool)]!.push(i);
-  });
+  if (spans.length > 0 && input.logged.length > 0) {
+    const first = spans[0]!.startDay;
+    const width = spans[spans.length - 1]!.endDay - first;
+    const counts = new Int32Array(width + 1);
+    for (const c of input.logged)
+      if (c.day >= first && c.day < first + width) counts[c.day - first + 1]!++;
+    for (let d = 1; d <= width; d++) counts[d]! += counts[d - 1]!;
+    const order = new Int32Array(counts[width]!);
+    input.logged.forEach((c, i) => {
+      if (c.day >= first && c.day < first + width) order[counts[c.day - first]!++] = i;
+    });
+    let m = 0;
+    for (const i of order) {
+      const c = input.logged[i]!;
+      while (c.day >= spans[m]!.endDay) m++;
+      loggedByMonth[slot(m, c.pool)]!.push(i);
+    }
+  }
 
   const from = input.recordDrawsFrom;
   const record = from !== undefined;
@@ -284,35 +332,62 @@ export function runLedger(input: LedgerInput): LedgerResult {
       let demand = 0;
       let allocated = 0;
 
-      // 1. What was done: logged applications, in date order.
+      // 1. What was done: logged applications, in date order. Those that name no lot and fall
+      //    on the same day draw together (oldest first) and share the result in proportion.
       const logged = loggedByMonth[slot(m, pool)]!;
-      logged.sort((a, b) => input.logged[a]!.day - input.logged[b]!.day || a - b);
-      for (const i of logged) {
-        const c = input.logged[i]!;
-        const out = result.loggedDraws?.[i];
-        let got = 0;
-        for (const d of c.draws) {
-          const at = byId.get(d.lotId);
-          const lot = at && at.pool === pool ? at.shelf.lots[at.index]! : undefined;
-          const take = lot ? Math.min(lot.remaining, Math.max(0, d.amount)) : 0;
-          if (lot && take > 0) {
-            lot.remaining -= take;
-            out?.push({ lotId: lot.id, amount: take });
+      for (let t = 0; t < logged.length;) {
+        const first = input.logged[logged[t]!]!;
+        let end = t + 1;
+        if (first.draws.length === 0)
+          while (
+            end < logged.length &&
+            input.logged[logged[end]!]!.day === first.day &&
+            input.logged[logged[end]!]!.draws.length === 0
+          )
+            end++;
+        const group = logged.slice(t, end);
+        let rest = 0;
+        const named = new Float64Array(group.length);
+        group.forEach((i, k) => {
+          const c = input.logged[i]!;
+          const out = result.loggedDraws?.[i];
+          let got = 0;
+          for (const d of c.draws) {
+            const at = byId.get(d.lotId);
+            const lot = at && at.pool === pool ? at.shelf.lots[at.index]! : undefined;
+            const take = lot ? Math.min(lot.remaining, Math.max(0, d.amount)) : 0;
+            if (lot && take > 0) {
+              lot.remaining -= take;
+              out?.push({ lotId: lot.id, amount: take });
+            }
+            got += take;
+            if (take < d.amount - AMOUNT_EPSILON)
+              result.overdrawn.push({ loggedIndex: i, lotId: d.lotId, amount: d.amount - take });
           }
-          got += take;
-          if (take < d.amount - AMOUNT_EPSILON)
-            result.overdrawn.push({ loggedIndex: i, lotId: d.lotId, amount: d.amount - take });
-        }
-        if (c.need - got > AMOUNT_EPSILON) {
-          const [lo, hi] = shelf.range(c.day, keep);
-          got += shelf.draw(lo, hi, c.need - got, "manure-first", out);
-        }
-        result.loggedGot[i] = got;
-        demand += c.need;
-        allocated += got;
+          named[k] = got;
+          rest += Math.max(0, c.need - got);
+          demand += c.need;
+        });
+        const shared = group.map((i, k) => Math.max(0, input.logged[i]!.need - named[k]!));
+        const got = drawShared(
+          shelf,
+          keep,
+          first.day,
+          rest,
+          "manure-first",
+          group,
+          shared,
+          result.loggedDraws,
+        );
+        group.forEach((i, k) => {
+          result.loggedGot[i] = named[k]! + got[k]!;
+          allocated += named[k]! + got[k]!;
+        });
+        t = end;
       }
 
-      // 2. What is planned: tier by tier.
+      // 2. What is planned: tier by tier. Within a tier, clean-only claims draw first (clean lots),
+      //    then the others (manure-fed lots first); each group draws once and shares pro rata.
       const planned = plannedByMonth[slot(m, pool)]!;
       planned.sort((a, b) => compareClaims(input.planned[a]!, input.planned[b]!) || a - b);
       for (let t = 0; t < planned.length;) {
@@ -321,40 +396,51 @@ export function runLedger(input: LedgerInput): LedgerResult {
         while (end < planned.length && compareClaims(head, input.planned[planned[end]!]!) === 0)
           end++;
         const [lo, hi] = shelf.range(head.day, keep);
-        let need = 0;
+        const cleanGroup: number[] = [];
+        const otherGroup: number[] = [];
         let needClean = 0;
+        let needOther = 0;
         for (let k = t; k < end; k++) {
-          const c = input.planned[planned[k]!]!;
-          need += c.need;
-          if (c.cleanOnly) needClean += c.need;
+          const i = planned[k]!;
+          const c = input.planned[i]!;
+          if (c.cleanOnly) {
+            cleanGroup.push(i);
+            needClean += c.need;
+          } else {
+            otherGroup.push(i);
+            needOther += c.need;
+          }
         }
+        const need = needClean + needOther;
         const all = shelf.available(lo, hi, false);
-        const clean = shelf.available(lo, hi, true);
-        // Clean-only claims can have at most the clean stock; the rest shares what is left.
+        const clean = needClean > 0 ? shelf.available(lo, hi, true) : 0;
+        // Clean-only claims can have at most the clean stock; everyone shares when short.
         const shareClean = needClean > 0 ? Math.min(1, clean / needClean, all / need) : 1;
         const shareAll = Math.min(1, all / need);
-        // Clean-only claims first, so the manure-first draws of the others do not matter to them.
-        const order = planned.slice(t, end).sort((a, b) => {
-          const ca = input.planned[a]!.cleanOnly ? 0 : 1;
-          const cb = input.planned[b]!.cleanOnly ? 0 : 1;
-          return ca - cb || a - b;
-        });
-        for (const i of order) {
-          const c = input.planned[i]!;
-          const want = c.need * (c.cleanOnly ? shareClean : shareAll);
-          const got = shelf.draw(
-            lo,
-            hi,
-            want,
-            c.cleanOnly ? "clean-only" : "manure-first",
-            result.plannedDraws?.[i],
+        for (const [group, groupNeed, share, mode] of [
+          [cleanGroup, needClean, shareClean, "clean-only"],
+          [otherGroup, needOther, shareAll, "manure-first"],
+        ] as const) {
+          if (group.length === 0) continue;
+          const needs = group.map((i) => input.planned[i]!.need);
+          const got = drawShared(
+            shelf,
+            keep,
+            head.day,
+            groupNeed * share,
+            mode,
+            group,
+            needs,
+            result.plannedDraws,
           );
-          result.plannedGot[i] = got;
-          if (c.cleanOnly && got < c.need - AMOUNT_EPSILON) {
-            result.manureRefused[i] = Math.min(c.need - got, all - clean);
-          }
-          demand += c.need;
-          allocated += got;
+          group.forEach((i, k) => {
+            const c = input.planned[i]!;
+            result.plannedGot[i] = got[k]!;
+            if (c.cleanOnly && got[k]! < c.need - AMOUNT_EPSILON)
+              result.manureRefused[i] = Math.min(c.need - got[k]!, all - clean);
+            demand += c.need;
+            allocated += got[k]!;
+          });
         }
         t = end;
       }

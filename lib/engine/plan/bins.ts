@@ -5,7 +5,6 @@
 import { dflt } from "@/lib/engine/core/defaults";
 import { fromDayNumber, toDayNumber } from "@/lib/engine/core/dates";
 import { simulatePopulation } from "@/lib/engine/supply/population";
-import type { LedgerResult } from "@/lib/engine/balance/ledger";
 import type { GardenInputs } from "@/lib/engine/plan/inputs";
 import type { PlanContext } from "@/lib/engine/plan/context";
 import type { BinSupplyInfo, LotInfo } from "@/lib/engine/plan/supply";
@@ -44,7 +43,9 @@ export function binWorms(
   changes.delete(0);
   const startWorms = Math.max(0, start?.set ?? bin.startingWorms + (start?.add ?? 0));
   const ceilingPerM2 = bin.densityCeilingKgPerM2;
-  const run = simulatePopulation({
+  const worms = new Float64Array(days + 1);
+  const kg = new Float64Array(days + 1);
+  simulatePopulation({
     startWorms,
     surfaceM2: areaM2,
     days,
@@ -56,16 +57,14 @@ export function binWorms(
     // The stack grows by one tray every P days until it is full; worms spread into every tray.
     surfaceOnDay: (t) => Math.min(bin.trays, 1 + Math.floor(t / P)) * areaM2,
     changes,
+    totalsOnly: { worms, kg },
   });
-  const worms = Float64Array.from(run.series, (d) => d.worms);
-  const kg = Float64Array.from(run.series, (d) => d.biomassKg);
   return { startDay, worms, kg };
 }
 
 export function buildBins(
   infos: BinSupplyInfo[],
   lots: LotInfo[],
-  ledger: LedgerResult,
   inputs: GardenInputs,
   ctx: PlanContext,
   warnings: PlanWarning[],
@@ -180,7 +179,6 @@ export function buildBins(
       next += maxAge;
     }
     tasks.sort((a, b) => (a.date < b.date ? -1 : a.date > b.date ? 1 : a.kind < b.kind ? -1 : 1));
-    void ledger;
     return {
       binId: bin.id,
       name: bin.name,

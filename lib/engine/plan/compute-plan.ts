@@ -215,6 +215,7 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
         },
       });
     } else {
+      if (a.day < ctx.planStartDay || a.day > ctx.planEndDay) continue;
       const key = `${a.binId}:${fromDayNumber(a.day).slice(0, 7)}`;
       const l = liquid.get(key) ?? { binId: a.binId, day: a.day, amount: 0 };
       l.amount += a.amount;
@@ -302,7 +303,7 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
     })),
   }));
 
-  const bins = buildBins(supply.bins, supply.lots, ledger, inputs, ctx, warnings);
+  const bins = buildBins(supply.bins, supply.lots, inputs, ctx, warnings);
 
   // First shortfall per pool in the plan's months.
   const first: Record<Pool, string | null> = { castings: null, leachate: null };

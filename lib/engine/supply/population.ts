@@ -69,6 +69,8 @@ export interface PopulationInput {
   surfaceOnDay?: (t: number) => number;
   /** Worms added (positive) or removed (negative), or a counted total (`set`), on day t; taken from adults and juveniles in proportion. */
   changes?: ReadonlyMap<number, { add?: number; set?: number }>;
+  /** Only totals per day (worms, biomass) into these arrays, no day objects; `series` then holds day 0 and the last day. */
+  totalsOnly?: { worms: Float64Array; kg: Float64Array };
 }
 
 export interface PopulationDay {
@@ -176,7 +178,14 @@ export function simulatePopulation(input: PopulationInput, field = "population")
     ageSum *= k;
   };
 
+  const totals = input.totalsOnly;
+  const record = (t: number) => {
+    if (!totals) return void series.push(snapshot(t));
+    totals.worms[t] = adults + jTotal;
+    totals.kg[t] = adults * adultKg + ((ageSum + jTotal) / M) * adultKg;
+  };
   const series: PopulationDay[] = [snapshot(0)];
+  if (totals) record(0);
   for (let t = 1; t <= days; t++) {
     if (input.surfaceOnDay) ceilingWorms = ceilingKgFor(input.surfaceOnDay(t)) / adultKg;
     const change = input.changes?.get(t);
@@ -207,8 +216,9 @@ export function simulatePopulation(input: PopulationInput, field = "population")
     cTotal -= cocoons[ci] as number;
     cocoons[ci] = adults * layPerAdultDay * density(committed);
     cTotal += cocoons[ci] as number;
-    series.push(snapshot(t));
+    record(t);
   }
+  if (totals && days > 0) series.push(snapshot(days));
   return { series, final: series[series.length - 1] as PopulationDay, ceilingKg, params: p };
 }
 
