@@ -1,8 +1,9 @@
+import fs from "node:fs";
 import path from "node:path";
 import { PGlite } from "@electric-sql/pglite";
 import type { PgDatabase, PgQueryResultHKT } from "drizzle-orm/pg-core";
 import { getEnv } from "@/lib/env";
-import { acquireDataDirLock } from "./lock";
+import { acquireDataDirLock, realDataDir } from "./lock";
 import * as schema from "./schema";
 
 // The one database client. Which engine backs it is decided here and nowhere
@@ -34,8 +35,7 @@ async function openPglite(dataDir: string): Promise<Handle> {
   const inMemory = dataDir.startsWith("memory://");
   const release = inMemory ? () => {} : acquireDataDirLock(dataDir);
   try {
-    const client = new PGlite(inMemory ? dataDir : path.resolve(dataDir));
-    await client.waitReady;
+    const client = inMemory ? new PGlite(dataDir) : await openPgliteDir(dataDir);
     const db = drizzle({ client, schema });
     await migrate(db, { migrationsFolder });
     return {
@@ -49,6 +49,28 @@ async function openPglite(dataDir: string): Promise<Handle> {
   } catch (error) {
     release();
     throw error;
+  }
+}
+
+// PGlite reports file-system trouble as a bare "errno 44" (Emscripten's ENOENT);
+// say which directory and what is wrong with it.
+async function openPgliteDir(dataDir: string): Promise<PGlite> {
+  const real = realDataDir(dataDir);
+  const shown = real === path.resolve(dataDir) ? dataDir : `${dataDir} (→ ${real})`;
+  const stat = fs.statSync(real, { throwIfNoEntry: false });
+  if (stat && !stat.isDirectory())
+    throw new Error(`PGLITE_DIR ${shown} is not a directory. Point PGLITE_DIR at a directory.`);
+  if (!stat && fs.lstatSync(real, { throwIfNoEntry: false }))
+    throw new Error(
+      `PGLITE_DIR ${shown} is a symlink to nothing. Fix the link or point PGLITE_DIR at a directory.`,
+    );
+  try {
+    const client = new PGlite(real);
+    await client.waitReady;
+    return client;
+  } catch (error) {
+    const reason = error instanceof Error && error.message ? error.message : String(error);
+    throw new Error(`Could not open the PGlite database in ${shown}: ${reason}`, { cause: error });
   }
 }
 

@@ -20,8 +20,31 @@ export class DataDirLockedError extends Error {
   }
 }
 
+/**
+ * The directory's real location: symlinks resolved along the part of the path
+ * that exists, the rest appended. PGlite's in-WebAssembly file system cannot
+ * follow a symlink itself, and two links to one directory must share one lock.
+ */
+export function realDataDir(dataDir: string): string {
+  const missing: string[] = [];
+  let existing = path.resolve(dataDir);
+  for (;;) {
+    try {
+      return path.join(fs.realpathSync(existing), ...missing);
+    } catch (error) {
+      const parent = path.dirname(existing);
+      // A dangling symlink or an unreadable path: leave it for the open to report.
+      if ((error as NodeJS.ErrnoException).code !== "ENOENT" || parent === existing)
+        return path.resolve(dataDir);
+      if (fs.lstatSync(existing, { throwIfNoEntry: false })) return path.resolve(dataDir);
+      missing.unshift(path.basename(existing));
+      existing = parent;
+    }
+  }
+}
+
 function lockPath(dataDir: string): string {
-  return `${path.resolve(dataDir)}.lock`;
+  return `${realDataDir(dataDir)}.lock`;
 }
 
 function isAlive(pid: number): boolean {

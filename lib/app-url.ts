@@ -1,23 +1,20 @@
 import { getEnv } from "./env";
 
 /**
- * Absolute base for links in e-mails and feeds. AUTH_URL wins. Without it,
- * local and demo use take the Host the browser sent (Next builds request.url
- * from its own hostname, so 127.0.0.1 visitors would get "localhost" links).
- * A production server without AUTH_URL does not trust Host: a forged header
- * would put an attacker's domain into password-reset links.
+ * Absolute base for links in e-mails and feeds: APP_ORIGIN, else AUTH_URL. Without
+ * either, development and demo use http://localhost:${PORT:-3000}. The request's Host
+ * header never decides: a forged one would put an attacker's domain into reset links.
+ * A production server (not demo) without a configured origin refuses to make links
+ * rather than send mail pointing at localhost.
  */
-export function appBaseUrl(request: Request): string {
+export function appBaseUrl(): string {
   const env = getEnv();
-  if (env.AUTH_URL) return env.AUTH_URL.replace(/\/+$/, "");
-  const fallback = new URL(request.url);
-  if (env.NODE_ENV === "production" && !env.CASTLINE_DEMO) return fallback.origin;
-  const host = request.headers.get("host");
-  if (
-    !host ||
-    (!/^[a-z0-9.-]+(:\d{1,5})?$/i.test(host) && !/^\[[0-9a-f:]+\](:\d{1,5})?$/i.test(host))
-  ) {
-    return fallback.origin;
+  const configured = env.APP_ORIGIN ?? env.AUTH_URL;
+  if (configured) return new URL(configured).origin;
+  if (env.NODE_ENV === "production" && !env.CASTLINE_DEMO) {
+    throw new Error(
+      "Set APP_ORIGIN (or AUTH_URL) to the public origin, e.g. https://garden.example.org",
+    );
   }
-  return `${fallback.protocol}//${host}`;
+  return `http://localhost:${env.PORT ?? 3000}`;
 }

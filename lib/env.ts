@@ -12,6 +12,13 @@ const envSchema = z.object({
     .transform((v) => v === "1" || v === "true"),
   AUTH_SECRET: z.string().min(16).optional(),
   AUTH_URL: z.url().optional(),
+  // Origin of links in e-mails (e.g. https://garden.example.org). Wins over AUTH_URL.
+  // Unset in development and demo: http://localhost:${PORT:-3000}. The Host header never decides.
+  APP_ORIGIN: z.url().optional(),
+  PORT: z.coerce.number().int().min(1).max(65535).optional(),
+  // How many reverse proxies we run in front of the server. Each appends to
+  // X-Forwarded-For; only those entries are believed (lib/auth/throttle.ts clientAddress).
+  TRUSTED_PROXY_COUNT: z.coerce.number().int().min(0).max(10).default(0),
   SMTP_HOST: z.string().min(1).optional(),
   SMTP_PORT: z.coerce.number().int().min(1).max(65535).optional(),
   SMTP_USER: z.string().optional(),

@@ -1,4 +1,5 @@
 import type { ZodError } from "zod";
+import { logError } from "./log";
 
 // One error type for the whole app. A code names what went wrong and which
 // thing it concerns ("forbidden:bed"); the part before the colon picks the
@@ -10,8 +11,12 @@ const statusByKind = {
   unauthorized: 401,
   forbidden: 403,
   not_found: 404,
+  method_not_allowed: 405,
+  request_timeout: 408,
   conflict: 409,
   gone: 410,
+  payload_too_large: 413,
+  unsupported_media_type: 415,
   rate_limited: 429,
   unavailable: 503,
   internal: 500,
@@ -26,8 +31,12 @@ const defaultMessages: Record<ErrorKind, string> = {
   unauthorized: "Please sign in first.",
   forbidden: "Your role in this garden does not allow that.",
   not_found: "We could not find that.",
+  method_not_allowed: "That address does not accept this kind of request.",
+  request_timeout: "The request took too long to arrive.",
   conflict: "That clashes with something that already exists.",
   gone: "That link has expired or was already used.",
+  payload_too_large: "The request is too large.",
+  unsupported_media_type: "Send the request as JSON (Content-Type: application/json).",
   rate_limited: "Too many attempts. Please wait a little and try again.",
   unavailable: "A service we depend on is not answering. Please try again shortly.",
   internal: "Something went wrong on our side. Please try again.",
@@ -77,14 +86,20 @@ export interface ErrorBody {
   error: { code: string; message: string; fields?: FieldErrors };
 }
 
-/** The only way a handler turns an error into a response: internals are logged, never sent. */
+// API answers are per person and per moment: no browser or proxy may keep them.
+export const NO_STORE = { "Cache-Control": "no-store" } as const;
+
+/** The only way a handler turns an error into a response: internals are logged (redacted), never sent. */
 export function toResponse(error: unknown): Response {
   if (error instanceof AppError) {
     const body: ErrorBody = { error: { code: error.code, message: error.message } };
     if (error.fields) body.error.fields = error.fields;
-    return Response.json(body, { status: error.status, headers: error.headers });
+    return Response.json(body, {
+      status: error.status,
+      headers: { ...NO_STORE, ...error.headers },
+    });
   }
-  console.error("[castline] unexpected error", error);
+  logError("unexpected error", error);
   const body: ErrorBody = { error: { code: "internal", message: defaultMessages.internal } };
-  return Response.json(body, { status: 500 });
+  return Response.json(body, { status: 500, headers: NO_STORE });
 }

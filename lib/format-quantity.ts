@@ -1,4 +1,4 @@
-import { displayUnits, fromSi, unitLabel, type UnitName, type UnitSystem } from "@/lib/units";
+import { displayUnits, fromSi, toSi, unitLabel, type UnitName, type UnitSystem } from "@/lib/units";
 
 // The one place an SI quantity becomes words on a screen, in a CSV or in an
 // e-mail, in the garden's units. Rounding follows how growers measure: a scoop
@@ -141,4 +141,132 @@ export function formatPercent(share: number): string {
 export function formatMoney(dollars: number): string {
   if (!Number.isFinite(dollars)) return "—";
   return new Intl.NumberFormat("en-US", { style: "currency", currency: "USD" }).format(dollars);
+}
+
+/** The two stock pools of the balance: castings by mass, leachate by volume. */
+export type PoolKind = "castings" | "leachate";
+
+/** A pool amount (kg castings or L leachate) in the garden's units, e.g. "44 lb", "1.2 gal". */
+export function formatPoolAmount(si: number, pool: PoolKind, system: UnitSystem): string {
+  return formatAmount(si, pool === "castings" ? "castings-mass" : "liquid", system);
+}
+
+/** Units an engine figure is tagged with (lib/engine ExplainValue). */
+export type SiTag =
+  | "kg"
+  | "L"
+  | "m"
+  | "m2"
+  | "kg/m2"
+  | "L/m2"
+  | "kg/day"
+  | "kg/week"
+  | "L/day"
+  | "L/week"
+  | "money"
+  | "money/kg"
+  | "percent"
+  | "ratio"
+  | "days"
+  | "count";
+
+const countFormat = new Intl.NumberFormat("en-US", { maximumFractionDigits: 0 });
+
+/**
+ * Any tagged engine figure in words, in the garden's units: "44 lb", "0.3 lb a day",
+ * "$1.00 per lb", "60 days", "78 %". Rates per area are shown per ft² or m².
+ */
+export function formatTagged(value: number, tag: SiTag, system: UnitSystem): string {
+  if (!Number.isFinite(value)) return "—";
+  const area = displayUnits(system).area;
+  const perArea = fromSi(1, area) === 0 ? 1 : 1 / fromSi(1, area); // m² in one display area unit
+  switch (tag) {
+    case "kg":
+      return formatAmount(value, "castings-mass", system);
+    case "L":
+      return formatAmount(value, "liquid", system);
+    case "m":
+      return formatAmount(value, "length", system);
+    case "m2":
+      return formatAmount(value, "area", system);
+    case "kg/m2":
+      return `${formatAmount(value * perArea, "castings-mass", system)} per ${unitLabel(area)}`;
+    case "L/m2":
+      return `${formatAmount(value * perArea, "liquid", system)} per ${unitLabel(area)}`;
+    case "kg/day":
+      return `${formatAmount(value, "castings-mass", system)} a day`;
+    case "kg/week":
+      return `${formatAmount(value, "castings-mass", system)} a week`;
+    case "L/day":
+      return `${formatAmount(value, "liquid", system)} a day`;
+    case "L/week":
+      return `${formatAmount(value, "liquid", system)} a week`;
+    case "money":
+      return formatMoney(value);
+    case "money/kg": {
+      const unit = displayUnits(system).castingsMass;
+      return `${formatMoney(toSi(1, unit) * value)} per ${unitLabel(unit)}`;
+    }
+    case "percent":
+      return `${Math.round(value)} %`;
+    case "ratio":
+      return numberFormat.format(roundForDisplay(value));
+    case "days":
+      return `${countFormat.format(value)} ${Math.round(value) === 1 ? "day" : "days"}`;
+    case "count":
+      return countFormat.format(value);
+  }
+}
+
+/** A bulk density given in kg per litre, as lb per ft³ (US) or kg per litre (metric). */
+export function formatDensity(kgPerL: number, system: UnitSystem): string {
+  if (!Number.isFinite(kgPerL)) return "—";
+  if (system === "metric") return `${numberFormat.format(roundForDisplay(kgPerL))} kg per litre`;
+  const lbPerFt3 = fromSi(kgPerL * toSi(1, "ft3"), "lb");
+  return `${numberFormat.format(roundForDisplay(lbPerFt3))} lb per ft³`;
+}
+
+/**
+ * The one unit a table column of `kind` is in (a CSV column or a sortable table
+ * column cannot switch to oz or fl oz for its small rows the way a label does).
+ */
+export function columnUnit(kind: AmountKind, system: UnitSystem): UnitName {
+  const units = displayUnits(system);
+  switch (kind) {
+    case "castings-mass":
+      return units.castingsMass;
+    case "castings-volume":
+      return units.castingsVolume;
+    case "liquid":
+      return units.liquid;
+    case "area":
+      return units.area;
+    case "length":
+      return units.length;
+    case "depth":
+      return units.depth;
+    case "tray-volume":
+      return units.trayVolume;
+    case "tray-side":
+      return system === "us" ? "in" : "cm";
+  }
+}
+
+/** An SI amount as a number in its column's unit, rounded as on screen (44, 1.2, 0.75). */
+export function toColumnValue(si: number, kind: AmountKind, system: UnitSystem): number {
+  return roundForDisplay(fromSi(si, columnUnit(kind, system)));
+}
+
+/** "Castings opening (lb)": a column header with its unit. */
+export function columnHeader(title: string, kind: AmountKind, system: UnitSystem): string {
+  return `${title} (${unitLabel(columnUnit(kind, system))})`;
+}
+
+// toColumnValue has already rounded (two significant figures below 1): show every digit it kept.
+const columnNumber = new Intl.NumberFormat("en-US", { maximumFractionDigits: 6 });
+
+/** An amount in its column's fixed unit, e.g. "0.75 lb" (the table beside its CSV shows the same number). */
+export function formatColumnAmount(si: number, kind: AmountKind, system: UnitSystem): string {
+  if (!Number.isFinite(si)) return "—";
+  return `${columnNumber.format(toColumnValue(si, kind, system))} ${unitLabel(columnUnit(kind, system))}`;
 }

@@ -18,3 +18,6 @@ export const resetProblems = {
   expired: "This reset link has expired (links last one hour). Ask for a new one.",
   used: "This reset link was already used. Ask for a new one if you still need it.",
 } as const;
+
+export const SIGN_UP_REQUESTED_MESSAGE =
+  "Thanks. We have sent a message to that address. If it is new to Castline, your account is ready and this browser is signed in; if it already has an account, sign in with its password or reset it.";

@@ -8,7 +8,11 @@ export const queryKeys = {
   binLog: (gardenId: string, binId: string, kind?: string) =>
     ["gardens", gardenId, "bins", binId, "log", kind ?? "all"] as const,
   lots: (gardenId: string) => ["gardens", gardenId, "lots"] as const,
-  // The Balance reads stock and bins: every bin or stock write invalidates it.
-  balance: (gardenId: string) => ["gardens", gardenId, "balance"] as const,
+  /** Everything computed from the plan; a write that changes supply or demand invalidates this prefix. */
+  plan: (gardenId: string) => ["gardens", gardenId, "balance"] as const,
+  balance: (gardenId: string, from: string, months: number) =>
+    ["gardens", gardenId, "balance", from, months] as const,
+  whatIf: (gardenId: string, from: string, months: number, changes: unknown) =>
+    ["gardens", gardenId, "balance", from, months, "what-if", changes] as const,
   outbox: () => ["dev", "outbox"] as const,
 };

@@ -106,7 +106,6 @@ export function main(): void {
   process.stdout.write(
     "\n'median ms' is computePlan without gap suggestions (replay, forecast, demand, ledger, worms); 'with gap ms'\n" +
       "adds the suggestions, which re-run the ledger to prove each fix. Repeated runs reuse the RRULE expansion cache\n" +
-      "of lib/engine/demand/recurrence.ts; 'first run ms' is the run that filled it. Loading the demo garden's\n" +
-      "inputs from PGlite is measured on the data branch (db/queries).\n",
+      "of lib/engine/demand/recurrence.ts; 'first run ms' is the run that filled it.\n",
   );
 }

@@ -1,11 +1,13 @@
+import { logError } from "@/lib/log";
 import { getEnv } from "@/lib/env";
 import {
   createMailer,
   ensureLocalSmtpServer,
-  isMailError,
+  getLocalOutbox,
   mailerConfigFromEnv,
   type Mailer,
   type OutgoingMail,
+  type ReceivedMail,
 } from "@/services/mail";
 
 // The app's one mailer, chosen by configuration: real SMTP when SMTP_HOST is
@@ -22,12 +24,30 @@ export function usesLocalMail(): boolean {
   return !getEnv().SMTP_HOST;
 }
 
-/** The outbox page shows mail caught locally; never in production unless asked for. */
+/**
+ * The outbox page shows mail caught locally; never in production unless asked for, and
+ * never at all when a real SMTP server is configured (CASTLINE_OUTBOX cannot override that).
+ */
 export function isOutboxEnabled(): boolean {
   const env = getEnv();
   if (!usesLocalMail()) return false;
   if (env.CASTLINE_OUTBOX !== undefined) return env.CASTLINE_OUTBOX;
   return env.NODE_ENV !== "production" || env.CASTLINE_DEMO;
+}
+
+/**
+ * The caught mail one person may read: only messages to their own address, and nothing
+ * for a signed-out visitor. Otherwise anyone could ask for a reset of someone else's
+ * password and read the link here (the one asking is the attacker, so "the browser that
+ * asked" is no safeguard). Other recipients of a message are not shown.
+ */
+export async function readOutboxFor(email: string | null): Promise<ReceivedMail[]> {
+  if (!email || !isOutboxEnabled()) return [];
+  const own = email.trim().toLowerCase();
+  const messages = (await getLocalOutbox()) ?? [];
+  return messages
+    .filter((m) => m.to.some((to) => to.toLowerCase() === own))
+    .map((m) => ({ ...m, to: [own] }));
 }
 
 export async function startLocalMailIfNeeded(): Promise<void> {
@@ -50,7 +70,8 @@ export async function trySend(
     const { messageId } = await getMailer().send(message);
     return { sent: true, messageId };
   } catch (error) {
-    console.error("[castline] mail not sent", isMailError(error) ? error.message : error);
+    // Through the redacting logger: an SMTP error can carry the recipient's address.
+    logError("mail not sent", error);
     return { sent: false };
   }
 }

@@ -6,6 +6,7 @@ import { FormMessage } from "@/components/forms/form-message";
 import { useApiForm } from "@/components/forms/use-api-form";
 import { Button, Field, Input } from "@/components/ui";
 import { apiFetch } from "@/lib/api-client";
+import { safeNextPath } from "@/lib/safe-next";
 import { signInSchema } from "@/lib/validation/auth";
 
 export function SignInForm({ next }: { next: string }) {
@@ -15,7 +16,8 @@ export function SignInForm({ next }: { next: string }) {
 
   const onSubmit = submit(async (values) => {
     await apiFetch("/api/session", { body: values });
-    router.replace(next);
+    // Checked again here: this is the line that navigates.
+    router.replace(safeNextPath(next));
     router.refresh();
   });
 

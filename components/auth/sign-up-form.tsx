@@ -2,15 +2,18 @@
 
 import Link from "next/link";
 import { useRouter } from "next/navigation";
+import { useState } from "react";
 import { FormMessage } from "@/components/forms/form-message";
 import { useApiForm } from "@/components/forms/use-api-form";
-import { Button, Field, Input } from "@/components/ui";
+import { Alert, Button, Field, Input } from "@/components/ui";
 import { apiFetch } from "@/lib/api-client";
+import { safeNextPath } from "@/lib/safe-next";
 import { signUpSchema } from "@/lib/validation/auth";
 import { PASSWORD_MIN } from "@/lib/validation/password";
 
 export function SignUpForm({ next }: { next: string }) {
   const router = useRouter();
+  const [done, setDone] = useState<string | null>(null);
   const { form, formError, submit } = useApiForm(signUpSchema, {
     name: "",
     email: "",
@@ -18,11 +21,22 @@ export function SignUpForm({ next }: { next: string }) {
   });
   const { register, formState } = form;
 
+  // The answer is the same whether or not the address already had an account (so the
+  // form cannot be used to find out). A new address is signed in at once; a known one
+  // gets an e-mail instead, and this form says so.
   const onSubmit = submit(async (values) => {
-    await apiFetch("/api/account", { body: values });
-    router.replace(next);
-    router.refresh();
+    const result = await apiFetch<{ message: string }>("/api/account", { body: values });
+    const signedIn = await fetch("/api/account", { credentials: "same-origin" });
+    if (signedIn.ok) {
+      // Checked again here: this is the line that navigates.
+      router.replace(safeNextPath(next));
+      router.refresh();
+    } else {
+      setDone(result.message);
+    }
   });
+
+  if (done) return <Alert tone="info">{done}</Alert>;
 
   return (
     <form

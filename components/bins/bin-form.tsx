@@ -153,7 +153,7 @@ export function BinForm({
         body,
       });
       await queryClient.invalidateQueries({ queryKey: queryKeys.bins(gardenId) });
-      await queryClient.invalidateQueries({ queryKey: queryKeys.balance(gardenId) });
+      await queryClient.invalidateQueries({ queryKey: queryKeys.plan(gardenId) });
       toast.show({ title: initial.id ? "Bin saved." : "Bin added.", tone: "positive" });
       router.push(`/g/${gardenId}/bins/${res.bin.id}`);
       router.refresh();

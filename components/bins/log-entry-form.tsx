@@ -121,7 +121,7 @@ export function LogEntryForm({
       await Promise.all([
         queryClient.invalidateQueries({ queryKey: ["gardens", gardenId, "bins"] }),
         queryClient.invalidateQueries({ queryKey: queryKeys.lots(gardenId) }),
-        queryClient.invalidateQueries({ queryKey: queryKeys.balance(gardenId) }),
+        queryClient.invalidateQueries({ queryKey: queryKeys.plan(gardenId) }),
       ]);
       onLogged?.({ eventId: res.eventId, kind: v.kind });
       router.refresh();

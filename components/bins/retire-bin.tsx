@@ -38,7 +38,7 @@ export function RetireBin({
           try {
             await apiFetch(`/api/gardens/${gardenId}/bins/${binId}`, { method: "DELETE" });
             await queryClient.invalidateQueries({ queryKey: queryKeys.bins(gardenId) });
-            await queryClient.invalidateQueries({ queryKey: queryKeys.balance(gardenId) });
+            await queryClient.invalidateQueries({ queryKey: queryKeys.plan(gardenId) });
             toast.show({ title: `${name} retired.`, tone: "positive" });
             router.push(`/g/${gardenId}/bins/${binId}`);
             router.refresh();

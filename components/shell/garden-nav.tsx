@@ -8,6 +8,7 @@ import type { Role } from "@/lib/auth/roles";
 // Only sections that exist are listed; later features add theirs here.
 const sections: { path: string; label: string; minimum: Role }[] = [
   { path: "", label: "Overview", minimum: "viewer" },
+  { path: "/balance", label: "Balance", minimum: "viewer" },
   { path: "/bins", label: "Bins", minimum: "viewer" },
   { path: "/stock", label: "Stock", minimum: "viewer" },
   { path: "/members", label: "Members", minimum: "viewer" },

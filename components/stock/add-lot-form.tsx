@@ -54,7 +54,7 @@ export function AddLotForm({
           setAmount("");
           toast.show({ title: "Stock added.", tone: "positive" });
           await queryClient.invalidateQueries({ queryKey: queryKeys.lots(gardenId) });
-          await queryClient.invalidateQueries({ queryKey: queryKeys.balance(gardenId) });
+          await queryClient.invalidateQueries({ queryKey: queryKeys.plan(gardenId) });
         } catch (err) {
           if (err instanceof ApiError) {
             setErrors(err.fields ?? {});

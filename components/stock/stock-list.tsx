@@ -135,7 +135,7 @@ function AdjustLot({
           setAmount("");
           toast.show({ title: "Stock updated.", tone: "positive" });
           await queryClient.invalidateQueries({ queryKey: queryKeys.lots(gardenId) });
-          await queryClient.invalidateQueries({ queryKey: queryKeys.balance(gardenId) });
+          await queryClient.invalidateQueries({ queryKey: queryKeys.plan(gardenId) });
         } catch (err) {
           setError(
             err instanceof ApiError

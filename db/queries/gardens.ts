@@ -1,4 +1,5 @@
 import "server-only";
+import { markGardenInputsChanged } from "@/db/queries/garden-inputs-version";
 import { eq } from "drizzle-orm";
 import { getDb } from "@/db";
 import { gardens, memberships } from "@/db/schema";
@@ -70,6 +71,7 @@ export async function updateGarden({
     .set({ ...input, updatedAt: new Date() })
     .where(eq(gardens.id, gardenId))
     .returning(gardenColumns);
+  markGardenInputsChanged(gardenId); // settings feed the plan (units, zone, frost dates, prices)
   return row ?? null;
 }
 
@@ -77,4 +79,5 @@ export async function updateGarden({
 export async function deleteGarden({ gardenId }: { gardenId: string }): Promise<void> {
   const db = await getDb();
   await db.delete(gardens).where(eq(gardens.id, gardenId));
+  markGardenInputsChanged(gardenId);
 }

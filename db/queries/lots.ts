@@ -1,6 +1,7 @@
 import "server-only";
 import { and, asc, eq, inArray, sql } from "drizzle-orm";
 import { getDb, type DbOrTx } from "@/db";
+import { markGardenInputsChanged } from "@/db/queries/garden-inputs-version";
 import {
   applicationDraws,
   applications,
@@ -46,7 +47,9 @@ export interface RecordApplicationInput {
 /** Logs an application and its draws in one transaction; refuses a draw larger than what is left. */
 export async function recordApplication(input: RecordApplicationInput): Promise<{ id: string }> {
   const db = await getDb();
-  return db.transaction((tx) => insertApplicationWithDraws(tx, input));
+  const result = await db.transaction((tx) => insertApplicationWithDraws(tx, input));
+  markGardenInputsChanged(input.gardenId); // after commit: see garden-inputs-version.ts
+  return result;
 }
 
 /** recordApplication inside the caller's transaction (the import uses it for every logged application). */
@@ -163,7 +166,7 @@ export interface RecordAdjustmentInput {
 /** Changes a lot by hand in one transaction; refuses to take more than the lot has left. */
 export async function recordStockAdjustment(input: RecordAdjustmentInput): Promise<{ id: string }> {
   const db = await getDb();
-  return db.transaction(async (tx) => {
+  const result = await db.transaction(async (tx) => {
     const [lot] = await tx
       .select({
         id: stockLots.id,
@@ -198,6 +201,8 @@ export async function recordStockAdjustment(input: RecordAdjustmentInput): Promi
       .returning({ id: stockAdjustments.id });
     return row!;
   });
+  markGardenInputsChanged(input.gardenId); // after commit: see garden-inputs-version.ts
+  return result;
 }
 
 export interface RecordYieldInput {
@@ -287,12 +292,16 @@ export async function recordHarvest(
   input: RecordYieldInput & { castingsKg: number; predictedKg?: number | null },
 ) {
   const db = await getDb();
-  return db.transaction((tx) => insertHarvest(tx, input));
+  const result = await db.transaction((tx) => insertHarvest(tx, input));
+  markGardenInputsChanged(input.gardenId);
+  return result;
 }
 
 export async function recordDrain(input: RecordYieldInput & { litres: number }) {
   const db = await getDb();
-  return db.transaction((tx) => insertDrain(tx, input));
+  const result = await db.transaction((tx) => insertDrain(tx, input));
+  markGardenInputsChanged(input.gardenId);
+  return result;
 }
 
 export interface LotStock {

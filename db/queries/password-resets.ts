@@ -1,7 +1,7 @@
 import "server-only";
-import { and, eq, isNull, sql } from "drizzle-orm";
+import { and, eq, isNull } from "drizzle-orm";
 import { getDb } from "@/db";
-import { passwordResetTokens, users } from "@/db/schema";
+import { passwordResetTokens, sessions, users } from "@/db/schema";
 
 export const RESET_TTL_MS = 60 * 60 * 1000;
 
@@ -29,7 +29,7 @@ export async function createPasswordReset(input: {
 export type ResetOutcome =
   { ok: true; userId: string } | { ok: false; reason: "invalid" | "expired" | "used" };
 
-/** Marks the token used, sets the new hash and ends every session, all at once. */
+/** Marks the token used, sets the new hash and deletes every session, all at once. */
 export async function consumePasswordReset(input: {
   tokenHash: string;
   newPasswordHash: string;
@@ -58,26 +58,24 @@ export async function consumePasswordReset(input: {
       .where(eq(passwordResetTokens.id, row.id));
     await tx
       .update(users)
-      .set({
-        passwordHash: input.newPasswordHash,
-        sessionVersion: sql`${users.sessionVersion} + 1`,
-      })
+      .set({ passwordHash: input.newPasswordHash })
       .where(eq(users.id, row.userId));
+    // A new password ends every session, for good (the allow-list rows go).
+    await tx.delete(sessions).where(eq(sessions.userId, row.userId));
     return { ok: true, userId: row.userId } as const;
   });
 }
 
-export async function setPassword(input: {
-  userId: string;
-  passwordHash: string;
-}): Promise<number> {
+/** Sets a new password and ends every session of the account in the same transaction. */
+export async function setPassword(input: { userId: string; passwordHash: string }): Promise<void> {
   const db = await getDb();
-  const [row] = await db
-    .update(users)
-    .set({ passwordHash: input.passwordHash, sessionVersion: sql`${users.sessionVersion} + 1` })
-    .where(eq(users.id, input.userId))
-    .returning({ v: users.sessionVersion });
-  return row?.v ?? 0;
+  await db.transaction(async (tx) => {
+    await tx
+      .update(users)
+      .set({ passwordHash: input.passwordHash })
+      .where(eq(users.id, input.userId));
+    await tx.delete(sessions).where(eq(sessions.userId, input.userId));
+  });
 }
 
 /** What a reset link's page shows before the form: usable, or why not. */
@@ -94,4 +92,18 @@ export async function getPasswordResetStatus(input: {
   if (!row) return "invalid";
   if (row.usedAt) return "used";
   return row.expiresAt.getTime() <= (input.now ?? new Date()).getTime() ? "expired" : "ok";
+}
+
+/** Whose password a reset link would set (for refusing their own e-mail or name). */
+export async function getResetAccount(input: {
+  tokenHash: string;
+}): Promise<{ email: string; name: string } | null> {
+  const db = await getDb();
+  const [row] = await db
+    .select({ email: users.email, name: users.name })
+    .from(passwordResetTokens)
+    .innerJoin(users, eq(users.id, passwordResetTokens.userId))
+    .where(eq(passwordResetTokens.tokenHash, input.tokenHash))
+    .limit(1);
+  return row ?? null;
 }

@@ -1,27 +1,54 @@
 import "server-only";
-import { eq, lt } from "drizzle-orm";
+import { and, eq, gt, lt } from "drizzle-orm";
 import { getDb } from "@/db";
-import { endedSessions } from "@/db/schema";
+import { sessions, users } from "@/db/schema";
+import type { UserDto } from "./users";
 
-export async function endSession(input: {
-  tokenId: string;
+// The session allow-list: a session exists exactly as long as its row does.
+
+export async function createSession(input: {
+  sessionId: string;
   userId: string;
   expiresAt: Date;
 }): Promise<void> {
   const db = await getDb();
   await db.transaction(async (tx) => {
-    await tx.insert(endedSessions).values(input).onConflictDoNothing();
-    // Rows past their token's expiry can never match again.
-    await tx.delete(endedSessions).where(lt(endedSessions.expiresAt, new Date()));
+    await tx
+      .insert(sessions)
+      .values({ id: input.sessionId, userId: input.userId, expiresAt: input.expiresAt });
+    // Rows past their expiry can never be used again; keep the table small.
+    await tx.delete(sessions).where(lt(sessions.expiresAt, new Date()));
   });
 }
 
-export async function isSessionEnded({ tokenId }: { tokenId: string }): Promise<boolean> {
+/** The user of a live session, or null when the row is gone, expired or names someone else. */
+export async function getSessionUser(input: {
+  sessionId: string;
+  userId: string;
+}): Promise<UserDto | null> {
   const db = await getDb();
-  const rows = await db
-    .select({ id: endedSessions.tokenId })
-    .from(endedSessions)
-    .where(eq(endedSessions.tokenId, tokenId))
+  const [row] = await db
+    .select({ id: users.id, email: users.email, name: users.name })
+    .from(sessions)
+    .innerJoin(users, eq(users.id, sessions.userId))
+    .where(
+      and(
+        eq(sessions.id, input.sessionId),
+        eq(sessions.userId, input.userId),
+        gt(sessions.expiresAt, new Date()),
+      ),
+    )
     .limit(1);
-  return rows.length > 0;
+  return row ?? null;
+}
+
+export async function deleteSession({ sessionId }: { sessionId: string }): Promise<void> {
+  const db = await getDb();
+  await db.delete(sessions).where(eq(sessions.id, sessionId));
+}
+
+/** "Sign out everywhere": every session of this user ends. */
+export async function deleteUserSessions({ userId }: { userId: string }): Promise<void> {
+  const db = await getDb();
+  await db.delete(sessions).where(eq(sessions.userId, userId));
 }

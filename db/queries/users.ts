@@ -1,16 +1,15 @@
 import "server-only";
-import { eq, sql } from "drizzle-orm";
+import { eq } from "drizzle-orm";
 import { getDb } from "@/db";
 import { users } from "@/db/schema";
 
 // Public shape of a user: never carries the password hash.
-export type UserDto = { id: string; email: string; name: string; sessionVersion: number };
+export type UserDto = { id: string; email: string; name: string };
 
 const publicColumns = {
   id: users.id,
   email: users.email,
   name: users.name,
-  sessionVersion: users.sessionVersion,
 };
 
 export function normalizeEmail(email: string): string {
@@ -50,30 +49,18 @@ export async function getPasswordHash({ userId }: { userId: string }): Promise<s
   return row?.h ?? null;
 }
 
+/** Makes an account; null when the address already has one. */
 export async function createUser(input: {
   email: string;
   name: string;
   passwordHash: string;
-}): Promise<UserDto> {
+}): Promise<UserDto | null> {
   const db = await getDb();
   const [row] = await db
     .insert(users)
     .values({ ...input, email: normalizeEmail(input.email) })
     .onConflictDoNothing({ target: users.email })
     .returning(publicColumns);
-  if (!row) throw new EmailTakenError();
-  return row;
-}
-
-export class EmailTakenError extends Error {}
-
-/** Ends every other session: tokens carry the version they were issued with. */
-export async function bumpSessionVersion({ userId }: { userId: string }): Promise<number> {
-  const db = await getDb();
-  const [row] = await db
-    .update(users)
-    .set({ sessionVersion: sql`${users.sessionVersion} + 1` })
-    .where(eq(users.id, userId))
-    .returning({ v: users.sessionVersion });
-  return row?.v ?? 0;
+  // null: the address already has an account (the caller must not say so).
+  return row ?? null;
 }

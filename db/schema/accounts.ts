@@ -1,4 +1,4 @@
-import { boolean, index, integer, pgTable, text, timestamp, uuid } from "drizzle-orm/pg-core";
+import { index, integer, pgTable, text, timestamp, uuid } from "drizzle-orm/pg-core";
 import { createdAt, id } from "./columns";
 
 export const users = pgTable("users", {
@@ -7,9 +7,6 @@ export const users = pgTable("users", {
   email: text("email").notNull().unique(),
   name: text("name").notNull(),
   passwordHash: text("password_hash").notNull(),
-  // Bumped by "sign out everywhere" and password changes; tokens carrying an
-  // older number stop working.
-  sessionVersion: integer("session_version").notNull().default(0),
   createdAt: createdAt(),
 });
 
@@ -29,29 +26,28 @@ export const passwordResetTokens = pgTable(
   (t) => [index("password_reset_tokens_user_idx").on(t.userId)],
 );
 
-export const signInAttempts = pgTable(
-  "sign_in_attempts",
-  {
-    id: id(),
-    // "email:<address>" or "ip:<address>": throttling counts both kinds.
-    throttleKey: text("throttle_key").notNull(),
-    succeeded: boolean("succeeded").notNull(),
-    attemptedAt: timestamp("attempted_at", { withTimezone: true }).notNull().defaultNow(),
-  },
-  (t) => [index("sign_in_attempts_key_time_idx").on(t.throttleKey, t.attemptedAt)],
-);
+// Counters for every rate limit (sign-in failures, sign-up, reset and invitation mail),
+// one row per key and fixed window. One INSERT … ON CONFLICT … RETURNING bumps and reads
+// a counter, so parallel requests can never both see "one left" (lib/auth/throttle.ts).
+export const throttleCounters = pgTable("throttle_counters", {
+  // e.g. "signin-account:<e-mail>", "signin-address:<address>", "reset-email:<e-mail>".
+  key: text("key").primaryKey(),
+  windowStartedAt: timestamp("window_started_at", { withTimezone: true }).notNull(),
+  hits: integer("hits").notNull(),
+});
 
-// Sessions ended by "sign out" on one device. The cookie is a self-contained
-// token, so the server keeps its id here until it would have expired anyway.
-export const endedSessions = pgTable(
-  "ended_sessions",
+// The server-side allow-list of sessions. The cookie names a session id; the session is
+// valid only while this row exists, so deleting it ends the session for good (sign-out,
+// password change, "sign out everywhere").
+export const sessions = pgTable(
+  "sessions",
   {
-    tokenId: text("token_id").primaryKey(),
+    id: text("id").primaryKey(),
     userId: uuid("user_id")
       .notNull()
       .references(() => users.id, { onDelete: "cascade" }),
+    createdAt: createdAt(),
     expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
-    endedAt: timestamp("ended_at", { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index("ended_sessions_expiry_idx").on(t.expiresAt)],
+  (t) => [index("sessions_user_idx").on(t.userId), index("sessions_expiry_idx").on(t.expiresAt)],
 );

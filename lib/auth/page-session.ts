@@ -31,9 +31,3 @@ export async function requirePageMember(gardenId: string, minimum: Role): Promis
     notFound();
   }
 }
-
-/** Only same-site paths may be used after sign-in, never another origin. */
-export function safeNextPath(next: string | string[] | undefined): string {
-  const value = Array.isArray(next) ? next[0] : next;
-  return value && value.startsWith("/") && !value.startsWith("//") ? value : "/gardens";
-}

@@ -1,25 +1,37 @@
 import "server-only";
+import crypto from "node:crypto";
 import { decode, encode } from "next-auth/jwt";
-import { endSession, isSessionEnded } from "@/db/queries/sessions";
-import { getUserById, type UserDto } from "@/db/queries/users";
+import {
+  createSession,
+  deleteSession,
+  deleteUserSessions,
+  getSessionUser,
+} from "@/db/queries/sessions";
+import type { UserDto } from "@/db/queries/users";
 import { AppError } from "@/lib/errors";
 import { readCookie, SESSION_COOKIE, SESSION_MAX_AGE_SECONDS, serializeCookie } from "./cookies";
 import { getAuthSecret } from "./secret";
 
-// Sessions are Auth.js JWTs (encrypted, in one HttpOnly cookie). They carry who
-// you are and the session version they were issued under — never a role: every
-// request re-reads membership from the database.
+// Sessions are an allow-list on the server. The cookie is an Auth.js JWT (encrypted,
+// HttpOnly) carrying who you are and a random session id (`sid`) — never a role. A
+// session is valid only while its row exists in `sessions`, so signing out, changing
+// the password or "sign out everywhere" deletes the row and the cookie is dead for good,
+// whatever copy of it is left anywhere.
 
 interface SessionClaims {
   sub: string;
-  sv: number;
-  jti?: string;
-  exp?: number;
+  sid: string;
 }
 
 export async function issueSessionCookie(user: UserDto): Promise<string> {
+  const sessionId = crypto.randomBytes(32).toString("base64url");
+  await createSession({
+    sessionId,
+    userId: user.id,
+    expiresAt: new Date(Date.now() + SESSION_MAX_AGE_SECONDS * 1000),
+  });
   const token = await encode({
-    token: { sub: user.id, email: user.email, name: user.name, sv: user.sessionVersion },
+    token: { sub: user.id, sid: sessionId },
     secret: getAuthSecret(),
     salt: SESSION_COOKIE,
     maxAge: SESSION_MAX_AGE_SECONDS,
@@ -35,28 +47,18 @@ async function claimsFrom(token: string | undefined): Promise<SessionClaims | nu
   if (!token) return null;
   try {
     const payload = await decode({ token, secret: getAuthSecret(), salt: SESSION_COOKIE });
-    if (!payload || typeof payload.sub !== "string") return null;
-    return {
-      sub: payload.sub,
-      sv: typeof payload.sv === "number" ? payload.sv : -1,
-      jti: typeof payload.jti === "string" ? payload.jti : undefined,
-      exp: typeof payload.exp === "number" ? payload.exp : undefined,
-    };
+    if (!payload || typeof payload.sub !== "string" || typeof payload.sid !== "string") return null;
+    return { sub: payload.sub, sid: payload.sid };
   } catch {
     return null;
   }
 }
 
-/** The signed-in user for a cookie value, or null if signed out, expired or revoked. */
+/** The signed-in user for a cookie value, or null if signed out, expired or ended. */
 export async function userFromSessionToken(token: string | undefined): Promise<UserDto | null> {
   const claims = await claimsFrom(token);
   if (!claims) return null;
-  // Signed out on this device: the token id was recorded as ended.
-  if (!claims.jti || (await isSessionEnded({ tokenId: claims.jti }))) return null;
-  const user = await getUserById({ userId: claims.sub });
-  // A password change or "sign out everywhere" bumped the version: this token is dead.
-  if (!user || user.sessionVersion !== claims.sv) return null;
-  return user;
+  return getSessionUser({ sessionId: claims.sid, userId: claims.sub });
 }
 
 export function sessionTokenFromRequest(request: Request): string | undefined {
@@ -69,12 +71,13 @@ export async function getRequestUser(request: Request): Promise<UserDto | null> 
 
 /** Ends the session this request carries, on the server as well as in the browser (ASVS 7.4.1). */
 export async function endRequestSession(request: Request): Promise<void> {
-  const token = sessionTokenFromRequest(request);
-  const claims = await claimsFrom(token);
-  // Nothing to end for a token that is already dead (or names a deleted user).
-  if (!claims?.jti || !(await userFromSessionToken(token))) return;
-  const expiresAt = new Date((claims.exp ?? Date.now() / 1000 + SESSION_MAX_AGE_SECONDS) * 1000);
-  await endSession({ tokenId: claims.jti, userId: claims.sub, expiresAt });
+  const claims = await claimsFrom(sessionTokenFromRequest(request));
+  if (claims) await deleteSession({ sessionId: claims.sid });
+}
+
+/** Ends every session of the user, this one included (ASVS 7.4.5). */
+export async function endAllSessions(userId: string): Promise<void> {
+  await deleteUserSessions({ userId });
 }
 
 export async function requireUser(request: Request): Promise<UserDto> {

@@ -1,5 +1,6 @@
 import { z } from "zod";
-import { newPasswordSchema } from "./password";
+import { accountPasswordProblem, newPasswordSchema } from "./password";
+import { plainText } from "./text";
 
 export const emailSchema = z
   .string({ error: "Enter your e-mail address." })
@@ -13,11 +14,18 @@ export const signInSchema = z.object({
 });
 export type SignInInput = z.infer<typeof signInSchema>;
 
-export const signUpSchema = z.object({
-  name: z.string().trim().min(1, "Enter your name.").max(100, "Use at most 100 characters."),
-  email: emailSchema,
-  password: newPasswordSchema,
-});
+export const signUpSchema = z
+  .object({
+    name: plainText("Enter your name.")
+      .min(1, "Enter your name.")
+      .max(100, "Use at most 100 characters."),
+    email: emailSchema,
+    password: newPasswordSchema,
+  })
+  .superRefine((v, ctx) => {
+    const problem = accountPasswordProblem(v.password, v);
+    if (problem) ctx.addIssue({ code: "custom", path: ["password"], message: problem });
+  });
 export type SignUpInput = z.infer<typeof signUpSchema>;
 
 export const changePasswordSchema = z.object({

@@ -1,5 +1,11 @@
 import { z } from "zod";
 import { roles } from "@/lib/auth/roles";
+import { plainText } from "./text";
+
+// Frost dates a garden could have: far enough back for old records, not the
+// 0000-01-01 or 9999-12-31 a mistyped field produces.
+export const FIRST_YEAR = 1900;
+export const LAST_YEAR = 2200;
 
 const isoDay = (label: string) =>
   z
@@ -10,7 +16,11 @@ const isoDay = (label: string) =>
     .refine((d) => {
       const parsed = new Date(`${d}T00:00:00Z`);
       return !Number.isNaN(parsed.getTime()) && parsed.toISOString().slice(0, 10) === d;
-    }, `The ${label} is not a real date.`);
+    }, `The ${label} is not a real date.`)
+    .refine((d) => {
+      const year = Number(d.slice(0, 4));
+      return year >= FIRST_YEAR && year <= LAST_YEAR;
+    }, `The ${label} must be between ${FIRST_YEAR} and ${LAST_YEAR}.`);
 
 function isTimeZone(tz: string): boolean {
   try {
@@ -22,15 +32,14 @@ function isTimeZone(tz: string): boolean {
 }
 
 const gardenFields = z.object({
-  name: z.string().trim().min(1, "Give the garden a name.").max(80, "Use at most 80 characters."),
-  timeZone: z
-    .string()
+  name: plainText().min(1, "Give the garden a name.").max(80, "Use at most 80 characters."),
+  timeZone: plainText()
     .min(1, "Choose a time zone.")
     .refine(isTimeZone, "That is not a time zone we know."),
   unitSystem: z.enum(["us", "metric"], { error: "Choose US customary or metric." }),
   lastSpringFrost: isoDay("last spring frost date"),
   firstFallFrost: isoDay("first fall frost date"),
-  location: z.string().trim().max(200, "Use at most 200 characters.").optional().nullable(),
+  location: plainText().max(200, "Use at most 200 characters.").optional().nullable(),
 });
 
 const frostOrder = (v: { lastSpringFrost?: string; firstFallFrost?: string }) =>
@@ -47,9 +56,10 @@ export const updateGardenSchema = gardenFields.partial().refine(frostOrder, fros
 export type UpdateGardenInput = z.infer<typeof updateGardenSchema>;
 
 export const deleteGardenSchema = z.object({
-  confirmName: z
-    .string({ error: "Type the garden's name to confirm." })
-    .min(1, "Type the garden's name to confirm."),
+  confirmName: plainText("Type the garden's name to confirm.").min(
+    1,
+    "Type the garden's name to confirm.",
+  ),
 });
 
 export const roleSchema = z.enum(roles, {

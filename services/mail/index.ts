@@ -54,6 +54,8 @@ export {
   PRODUCT_NAME,
   reminderMail,
   renderMail,
+  signUpAttemptMail,
+  welcomeMail,
 } from "./templates";
 export type {
   InvitedRole,

@@ -180,6 +180,36 @@ export function passwordResetMail(input: {
   return { subject: `Reset your ${PRODUCT_NAME} password`, ...rendered };
 }
 
+/** Sent after a sign-up with a new address: the account is ready. */
+export function welcomeMail(input: { name: string; signInUrl: string }): MailContent {
+  const name = requireLine(input.name, "name");
+  const rendered = renderMail({
+    heading: `Welcome to ${PRODUCT_NAME}, ${name}`,
+    paragraphs: [
+      `Your ${PRODUCT_NAME} account for this address is ready, and the browser you signed up in is signed in.`,
+      "If you did not sign up, reset the password from the sign-in page or simply ignore the account.",
+    ],
+    action: { label: "Sign in", url: input.signInUrl },
+    footerNote: `someone signed up for ${PRODUCT_NAME} with this address`,
+  });
+  return { subject: `Your ${PRODUCT_NAME} account is ready`, ...rendered };
+}
+
+/** Sent instead of an error when someone signs up with an address that already has an account. */
+export function signUpAttemptMail(input: { signInUrl: string; resetUrl: string }): MailContent {
+  const rendered = renderMail({
+    heading: "Someone tried to sign up with your address",
+    paragraphs: [
+      `Someone tried to sign up for ${PRODUCT_NAME} with this address, which already has an account. No new account was made and nothing changed.`,
+      `If it was you, sign in with your password, or choose a new one at ${input.resetUrl}.`,
+      "If it was not you, you need do nothing.",
+    ],
+    action: { label: "Sign in", url: input.signInUrl },
+    footerNote: `a sign-up was attempted with this address on ${PRODUCT_NAME}`,
+  });
+  return { subject: `Sign-up attempt for your ${PRODUCT_NAME} account`, ...rendered };
+}
+
 export type ReminderItem = { date: string; text: string };
 
 // Reminder dates are floating all-day dates (YYYY-MM-DD), so they are read and shown in UTC

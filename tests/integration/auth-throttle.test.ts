@@ -4,8 +4,9 @@ import * as session from "@/app/api/session/route";
 import { BAD_CREDENTIALS_MESSAGE } from "@/lib/auth/credentials";
 import { call, closeHarness, signUpUser, uniqueEmail } from "@/tests/support/integration/harness";
 
-// Limits are the project's own (lib/auth/throttle.ts): 10 failures per account and
-// 50 per address in 15 minutes. Addresses are from RFC 5737 documentation ranges,
+// Limits are the project's own (lib/auth/throttle.ts): 10 failures per account from
+// browsers without a device cookie, and 50 per address, in 15 minutes (device cookies:
+// throttle-hardening.test.ts). Addresses are from RFC 5737 documentation ranges,
 // one per test so the tests do not count each other's failures.
 
 afterAll(closeHarness);

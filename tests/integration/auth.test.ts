@@ -55,7 +55,7 @@ describe("sign up", () => {
       email: uniqueEmail("eight"),
       password: "qzvlmnop",
     });
-    expect(eight.status).toBe(201);
+    expect(eight.status).toBe(202);
   });
 
   it("accepts 64 characters and more (up to our 128 cap)", async () => {
@@ -65,7 +65,7 @@ describe("sign up", () => {
       expect(password).toHaveLength(length);
       const email = uniqueEmail(`long${length}`);
       const res = await signUpWith({ name: "Rowan", email, password });
-      expect(res.status, `length ${length}`).toBe(201);
+      expect(res.status, `length ${length}`).toBe(202);
       await expect(signIn(email, password)).resolves.toMatch(/^castline\.session=/);
     }
   });
@@ -74,16 +74,16 @@ describe("sign up", () => {
     // NIST SP 800-63B §5.1.1.2: spaces and Unicode SHOULD be accepted; paste allowed.
     const password = "  Three trays high — the worms ate 4 banana peels & a café filter 🍌  ";
     const email = uniqueEmail("paste");
-    expect((await signUpWith({ name: "Rowan", email, password })).status).toBe(201);
+    expect((await signUpWith({ name: "Rowan", email, password })).status).toBe(202);
     await expect(signIn(email, password)).resolves.toMatch(/^castline\.session=/);
     // Trimmed is a different password: the stored one keeps its spaces.
     await expect(signIn(email, password.trim())).rejects.toThrow(/401/);
   });
 
-  it("signs the new person in, never returns the hash, and refuses a taken address in any case", async () => {
+  it("signs the new person in, never returns the hash, and makes no second account for a taken address", async () => {
     const email = uniqueEmail("rowan");
     const res = await signUpWith({ name: "Rowan Hale", email, password: "sifted-castings-77" });
-    expect(res.status).toBe(201);
+    expect(res.status).toBe(202);
     expect(JSON.stringify(res.json)).not.toMatch(/hash|argon/i);
     expect((await me(res.cookie!)).json.user.email).toBe(email);
 
@@ -92,8 +92,12 @@ describe("sign up", () => {
       email: email.toUpperCase(),
       password: "sifted-castings-78",
     });
-    expect(again.status).toBe(409);
-    expect(again.json.error.fields.email).toBeTruthy();
+    // The same answer as for a new address (issue 7 item 8), no session, no second row.
+    expect(again.status).toBe(202);
+    expect(again.json).toEqual(res.json);
+    expect(again.setCookie).toBeNull();
+    const rows = (await tableRows("users")) as { email: string }[];
+    expect(rows.filter((r) => r.email === email)).toHaveLength(1);
   });
 });
 
@@ -205,7 +209,7 @@ describe("sessions", () => {
       segments.map((s, i) => (i === seg ? flip(s, Math.floor(s.length / 2)) : s)).join("."),
     );
     const foreign = await encode({
-      token: { sub: user.id, sv: 0 },
+      token: { sub: user.id, sid: "made-up-session-id" },
       secret: "a-different-secret-of-enough-length-000",
       salt: SESSION_COOKIE,
     });

@@ -86,8 +86,10 @@ describe("invitations", () => {
   it("refuses a link used by an account with another address (403) and adds nobody", async () => {
     const g = await makeGardenWithRoles(world);
     const { token } = await invite(g.gardenId, uniqueEmail("intended"), "owner");
+    // Minted first: a cookie is a row in the sessions allow-list.
+    const cookie = await cookieFor(world.outsider);
     const before = await snapshotDb();
-    const res = await acceptAs(await cookieFor(world.outsider), token);
+    const res = await acceptAs(cookie, token);
     expect(res.status).toBe(403);
     expect(res.json.error.code).toBe("forbidden:invitation_wrong_account");
     expect(await snapshotDb()).toBe(before);
@@ -100,8 +102,10 @@ describe("invitations", () => {
     await db.execute(
       sql`update invitations set expires_at = now() - interval '1 second' where token_hash = ${hashLinkToken(token)}`,
     );
+    // Minted first: a cookie is a row in the sessions allow-list.
+    const cookie = await cookieFor(world.outsider);
     const before = await snapshotDb();
-    const res = await acceptAs(await cookieFor(world.outsider), token);
+    const res = await acceptAs(cookie, token);
     expect(res.status).toBe(410);
     expect(res.json.error.code).toBe("gone:invitation_expired");
     expect(await snapshotDb()).toBe(before);

@@ -2,13 +2,9 @@ import { afterEach, describe, expect, it, vi } from "vitest";
 import { appBaseUrl } from "@/lib/app-url";
 import { resetEnvCache } from "@/lib/env";
 
-// Links in e-mails: AUTH_URL when set; the browser's Host locally; never a
-// forged Host on a production server (password-reset poisoning).
-
-function request(host: string) {
-  // Next builds request.url from its own hostname, not the Host header.
-  return new Request("http://localhost:3000/api/password-reset", { headers: { host } });
-}
+// Links in e-mails: the configured origin (APP_ORIGIN, else AUTH_URL); locally and in the
+// demo http://localhost:${PORT:-3000}. No request is even consulted, so a forged Host
+// cannot put an attacker's domain into a reset link (issue 7 item 9).
 
 function withEnv(vars: Record<string, string | undefined>) {
   for (const [k, v] of Object.entries(vars)) vi.stubEnv(k, v);
@@ -21,25 +17,32 @@ afterEach(() => {
 });
 
 describe("appBaseUrl", () => {
-  it("uses AUTH_URL, without a trailing slash, whatever Host says", () => {
-    withEnv({ AUTH_URL: "https://garden.example.com/", NODE_ENV: "production" });
-    expect(appBaseUrl(request("evil.example.net"))).toBe("https://garden.example.com");
+  it("uses APP_ORIGIN before AUTH_URL, as an origin without a trailing slash", () => {
+    withEnv({ APP_ORIGIN: "https://garden.example.com/", AUTH_URL: "https://auth.example.com" });
+    expect(appBaseUrl()).toBe("https://garden.example.com");
+    withEnv({ APP_ORIGIN: undefined, AUTH_URL: "https://garden.example.org/api/auth" });
+    expect(appBaseUrl()).toBe("https://garden.example.org");
   });
 
-  it("follows the Host the browser used in development and demo", () => {
-    withEnv({ AUTH_URL: undefined, NODE_ENV: "development" });
-    expect(appBaseUrl(request("127.0.0.1:43955"))).toBe("http://127.0.0.1:43955");
-    withEnv({ NODE_ENV: "production", CASTLINE_DEMO: "1" });
-    expect(appBaseUrl(request("127.0.0.1:3000"))).toBe("http://127.0.0.1:3000");
+  it("defaults to localhost and PORT in development and demo", () => {
+    withEnv({
+      APP_ORIGIN: undefined,
+      AUTH_URL: undefined,
+      NODE_ENV: "development",
+      PORT: undefined,
+    });
+    expect(appBaseUrl()).toBe("http://localhost:3000");
+    withEnv({ NODE_ENV: "production", CASTLINE_DEMO: "1", PORT: "4100" });
+    expect(appBaseUrl()).toBe("http://localhost:4100");
   });
 
-  it("ignores Host on a production server without AUTH_URL", () => {
-    withEnv({ AUTH_URL: undefined, NODE_ENV: "production", CASTLINE_DEMO: "0" });
-    expect(appBaseUrl(request("evil.example.net"))).toBe("http://localhost:3000");
-  });
-
-  it("refuses a malformed Host header", () => {
-    withEnv({ AUTH_URL: undefined, NODE_ENV: "development" });
-    expect(appBaseUrl(request("a b/c"))).toBe("http://localhost:3000");
+  it("refuses to make links on a production server with no configured origin", () => {
+    withEnv({
+      APP_ORIGIN: undefined,
+      AUTH_URL: undefined,
+      NODE_ENV: "production",
+      CASTLINE_DEMO: "0",
+    });
+    expect(() => appBaseUrl()).toThrow(/APP_ORIGIN/);
   });
 });

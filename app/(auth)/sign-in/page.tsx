@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { SignInForm } from "@/components/auth/sign-in-form";
 import { Card, CardBody, Table, TBody, Td, Th, THead, Tr } from "@/components/ui";
 import { demoMembers } from "@/db/seed/demo-garden";
-import { safeNextPath } from "@/lib/auth/page-session";
+import { safeNextPath } from "@/lib/safe-next";
 import { getEnv } from "@/lib/env";
 
 export const metadata: Metadata = { title: "Sign in" };
@@ -47,6 +47,14 @@ export default async function SignInPage({
                 ))}
               </TBody>
             </Table>
+            <p className="mt-3 text-sm text-soil-700">
+              The demo sends no real e-mail: it lands in the{" "}
+              <a className="underline" href="/dev/outbox">
+                local outbox
+              </a>
+              , where each signed-in person reads only mail to their own address. To follow an
+              invitation, sign up with the invited address first, then open the outbox.
+            </p>
           </CardBody>
         </Card>
       ) : null}

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { SignUpForm } from "@/components/auth/sign-up-form";
 import { Card, CardBody } from "@/components/ui";
-import { safeNextPath } from "@/lib/auth/page-session";
+import { safeNextPath } from "@/lib/safe-next";
 
 export const metadata: Metadata = { title: "Make an account" };
 

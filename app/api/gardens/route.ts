@@ -1,7 +1,7 @@
 import { createGarden } from "@/db/queries/gardens";
 import { listGardensForUser } from "@/db/queries/memberships";
 import { requireUser } from "@/lib/auth/session";
-import { parseJson, route } from "@/lib/http";
+import { parseJson, route, refuseOtherMethods } from "@/lib/http";
 import { createGardenSchema } from "@/lib/validation/garden";
 
 // The gardens the signed-in person belongs to, with their role in each.
@@ -17,3 +17,6 @@ export const POST = route(async (request) => {
   const garden = await createGarden({ input, ownerId: user.id });
   return Response.json({ garden }, { status: 201 });
 });
+
+// Any other method: a JSON 405 with an Allow header, not Next's empty one.
+export const { PUT, PATCH, DELETE } = refuseOtherMethods({ GET, POST });

@@ -1,5 +1,7 @@
 import { sql } from "drizzle-orm";
 import { getDb, getDbKind } from "@/db";
+import { refuseOtherMethods } from "@/lib/http";
+import { logError } from "@/lib/log";
 import packageJson from "@/package.json";
 
 export const dynamic = "force-dynamic";
@@ -11,7 +13,7 @@ export async function GET(): Promise<Response> {
     await db.execute(sql`select 1`);
     return Response.json({ status: "ok", version: packageJson.version, db: await getDbKind() });
   } catch (error) {
-    console.error("[castline] health check failed", error);
+    logError("health check failed", error);
     return Response.json(
       {
         status: "error",
@@ -22,3 +24,6 @@ export async function GET(): Promise<Response> {
     );
   }
 }
+
+// Any other method: a JSON 405 with an Allow header, not Next's empty one.
+export const { POST, PUT, PATCH, DELETE } = refuseOtherMethods({ GET });

@@ -125,6 +125,7 @@ export function closePlanGap(a: GapArgs): GapReport {
       report.suggestions.push({
         kind: "extra-trays",
         trays: extras.length,
+        harvestDates: extras.map((e) => fromDayNumber(e.madeDay)),
         remainingShortfallKg: 0,
         explanation: {
           kind: "gap-extra-trays",

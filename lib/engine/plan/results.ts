@@ -196,6 +196,8 @@ export interface GapSuggestion {
   kind: "extra-trays" | "second-bin" | "rate-cut" | "start-bin" | "buy-castings";
   /** extra-trays: trays; rate-cut: percent (< 100) and plantings; start-bin: size, worms, start; buy: kg and cost. */
   trays?: number;
+  /** extra-trays: the day each extra tray's castings are ready (what the check assumed). */
+  harvestDates?: IsoDate[];
   cutPct?: number;
   plantingIds?: string[];
   startDate?: IsoDate;

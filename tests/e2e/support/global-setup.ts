@@ -70,6 +70,8 @@ export async function setup(project: TestProject) {
         PGLITE_DIR: path.join(dataDir, "pglite"),
         CASTLINE_SECRET_FILE: path.join(dataDir, "auth-secret"),
         CASTLINE_DEMO: "1",
+        // E-mailed links use the configured origin, never the Host header (README, "E-mail").
+        APP_ORIGIN: `http://127.0.0.1:${port}`,
         LOCAL_SMTP_PORT: "0",
         // Mail goes to the in-process catcher, whatever the developer's shell says.
         SMTP_HOST: "",

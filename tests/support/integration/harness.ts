@@ -5,6 +5,7 @@ import { memberships } from "@/db/schema";
 import * as accountRoute from "@/app/api/account/route";
 import * as gardensRoute from "@/app/api/gardens/route";
 import * as sessionRoute from "@/app/api/session/route";
+import { settleAfterResponseWork } from "@/lib/after-response";
 import type { Role } from "@/lib/auth/roles";
 import { issueSessionCookie } from "@/lib/auth/session";
 import { stopLocalSmtpServer } from "@/services/mail";
@@ -44,6 +45,13 @@ export interface CallResult {
   cookie: string | null;
 }
 
+let addressCounter = 0;
+/** A fresh address from 198.18.0.0/15 (RFC 2544, reserved for testing). */
+function nextTestAddress(): string {
+  addressCounter += 1;
+  return `198.${18 + Math.floor(addressCounter / 65_536)}.${Math.floor(addressCounter / 256) % 256}.${addressCounter % 256}`;
+}
+
 export async function call(handler: Handler, options: CallOptions = {}): Promise<CallResult> {
   const headers = new Headers(options.headers);
   let body: string | undefined;
@@ -52,6 +60,8 @@ export async function call(handler: Handler, options: CallOptions = {}): Promise
     if (!headers.has("content-type")) headers.set("content-type", "application/json");
   }
   if (options.cookie) headers.set("cookie", options.cookie);
+  // Each call from its own address (env.ts trusts one proxy), unless the test picks one.
+  if (!headers.has("x-forwarded-for")) headers.set("x-forwarded-for", nextTestAddress());
   const method = options.method ?? (body === undefined ? "GET" : "POST");
   const url = new URL(options.url ?? "/api/test", BASE_URL);
   const request = new Request(url, { method, headers, body });
@@ -101,9 +111,13 @@ export async function signUpUser(label: string, password = TEST_PASSWORD): Promi
     url: "/api/account",
     body: { name, email, password },
   });
-  if (res.status !== 201 || !res.cookie)
+  if (res.status !== 202 || !res.cookie)
     throw new Error(`sign-up failed (${res.status}): ${res.text}`);
-  return { id: res.json.user.id, email, name, password, cookie: res.cookie };
+  // The welcome mail goes out after the response; let it land so tests start quiet.
+  await settleAfterResponseWork();
+  const me = await call(accountRoute.GET, { url: "/api/account", cookie: res.cookie });
+  if (me.status !== 200) throw new Error(`sign-up did not sign in (${me.status}): ${me.text}`);
+  return { id: me.json.user.id, email, name, password, cookie: res.cookie };
 }
 
 /** Signs up and returns the session cookie ("castline.session=..."). */
@@ -116,7 +130,7 @@ export async function signUp(
     url: "/api/account",
     body: { name, email, password },
   });
-  if (res.status !== 201 || !res.cookie)
+  if (res.status !== 202 || !res.cookie)
     throw new Error(`sign-up failed (${res.status}): ${res.text}`);
   return res.cookie;
 }

@@ -16,6 +16,22 @@ export async function latestMailTo(to: string): Promise<ReceivedMail | undefined
   return (await outbox()).find((m) => m.to.includes(to.toLowerCase()));
 }
 
+/**
+ * Waits (up to 5 s) for a message to `to` whose subject matches: some mail is sent after the
+ * response, so a test may not find it in the outbox the moment the handler returns.
+ */
+export async function waitForMailTo(to: string, subject: RegExp = /./): Promise<ReceivedMail> {
+  const deadline = Date.now() + 5_000;
+  for (;;) {
+    const found = (await getLocalOutbox())?.find(
+      (m) => m.to.includes(to.toLowerCase()) && subject.test(m.subject),
+    );
+    if (found) return found;
+    if (Date.now() > deadline) throw new Error(`no mail to ${to} matching ${String(subject)}`);
+    await new Promise((resolve) => setTimeout(resolve, 20));
+  }
+}
+
 export function invitationTokenFrom(mail: ReceivedMail): string {
   const match = /\/invitations\/([A-Za-z0-9_-]{20,})/.exec(mail.text);
   if (!match) throw new Error(`no invitation link in: ${mail.text}`);
@@ -57,13 +73,14 @@ export async function countRows(table: string): Promise<number> {
   return result.rows[0]!.n;
 }
 
-// sign_in_attempts is left out on purpose: a refused sign-in is meant to be recorded.
+// throttle_counters is left out on purpose: a refused request is meant to be counted.
 const SNAPSHOT_TABLES = [
   "users",
   "gardens",
   "memberships",
   "invitations",
   "password_reset_tokens",
+  "sessions",
   "bins",
   "bin_events",
   "worm_moves",

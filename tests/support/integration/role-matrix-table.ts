@@ -1,7 +1,8 @@
+import { eq } from "drizzle-orm";
 import * as accountPassword from "@/app/api/account/password/route";
 import * as binEvents from "@/app/api/gardens/[gardenId]/bins/[binId]/events/route";
 import * as bin from "@/app/api/gardens/[gardenId]/bins/[binId]/route";
-import * as bins from "@/app/api/gardens/[gardenId]/bins/route";
+import * as binsRoute from "@/app/api/gardens/[gardenId]/bins/route";
 import * as lot from "@/app/api/gardens/[gardenId]/lots/[lotId]/route";
 import * as lots from "@/app/api/gardens/[gardenId]/lots/route";
 import * as photo from "@/app/api/gardens/[gardenId]/photos/[photoId]/route";
@@ -9,13 +10,18 @@ import * as photos from "@/app/api/gardens/[gardenId]/photos/route";
 import { createPhoto } from "@/db/queries/photos";
 import { getStorage } from "@/services/storage";
 import * as account from "@/app/api/account/route";
+import * as authJs from "@/app/api/auth/[...nextauth]/route";
 import * as devOutbox from "@/app/api/dev/outbox/route";
 import * as resend from "@/app/api/gardens/[gardenId]/invitations/[invitationId]/resend/route";
 import * as invitation from "@/app/api/gardens/[gardenId]/invitations/[invitationId]/route";
 import * as invitations from "@/app/api/gardens/[gardenId]/invitations/route";
 import * as member from "@/app/api/gardens/[gardenId]/members/[userId]/route";
 import * as members from "@/app/api/gardens/[gardenId]/members/route";
+import * as balance from "@/app/api/gardens/[gardenId]/balance/route";
+import * as gardenExport from "@/app/api/gardens/[gardenId]/export/route";
 import * as garden from "@/app/api/gardens/[gardenId]/route";
+import * as whatIf from "@/app/api/gardens/[gardenId]/what-if/route";
+import * as gardenImport from "@/app/api/gardens/import/route";
 import * as gardens from "@/app/api/gardens/route";
 import * as health from "@/app/api/health/route";
 import * as accept from "@/app/api/invitations/accept/route";
@@ -23,7 +29,9 @@ import * as resetConfirm from "@/app/api/password-reset/confirm/route";
 import * as resetRequest from "@/app/api/password-reset/route";
 import * as everywhere from "@/app/api/session/everywhere/route";
 import * as session from "@/app/api/session/route";
+import { getDb } from "@/db";
 import { createInvitation } from "@/db/queries/invitations";
+import { bins } from "@/db/schema";
 import { createPasswordReset } from "@/db/queries/password-resets";
 import { createLinkToken } from "@/lib/auth/tokens";
 import { binBody, seedBin, seedBoughtLot } from "./bins";
@@ -60,8 +68,11 @@ export interface MatrixRow {
   /** Which variant of the call, when one route appears more than once. */
   variant?: string;
   handler: Handler;
-  /** True when a 2xx answer must change the database (proves the snapshot can see a change). */
-  mutates: boolean;
+  /**
+   * True when a 2xx answer must change the database (proves the snapshot can see a change);
+   * a function when that depends on the caller (signing out changes nothing when signed out).
+   */
+  mutates: boolean | ((actor: Actor) => boolean);
   expect: Record<Actor, number>;
   /** Builds the call; may set up what it needs (an invitation, a reset token) first. */
   request: (
@@ -115,6 +126,9 @@ const atLeast = (minimum: "helper" | "grower", ok: number) => ({
 });
 
 const g = (ctx: RowContext) => ({ gardenId: ctx.world.gardenId });
+// The catch-all's params are a list of path segments.
+const authPath = (path: string) =>
+  ({ nextauth: path.split("/") }) as unknown as Record<string, string>;
 
 async function openInvitation(ctx: RowContext, email = uniqueEmail("invitee")) {
   const { token, tokenHash } = createLinkToken();
@@ -127,6 +141,48 @@ async function openInvitation(ctx: RowContext, email = uniqueEmail("invitee")) {
   });
   return { token, invitationId: inv.id };
 }
+
+/** A bin in the world's garden for a what-if to change (made once; the matrix garden starts empty). */
+async function aBin(ctx: RowContext): Promise<string> {
+  const db = await getDb();
+  const [existing] = await db
+    .select({ id: bins.id })
+    .from(bins)
+    .where(eq(bins.gardenId, ctx.world.gardenId))
+    .limit(1);
+  if (existing) return existing.id;
+  // 21 × 17 × 5½ in inside (PRODUCT.md's 24 × 20 in 2×6 tray), in metres.
+  const [row] = await db
+    .insert(bins)
+    .values({
+      gardenId: ctx.world.gardenId,
+      name: "Matrix stack",
+      trayLengthM: 0.5334,
+      trayWidthM: 0.4318,
+      trayDepthM: 0.1397,
+      trayCount: 4,
+      startedOn: "2026-02-01",
+      startingWormCount: 1500,
+    })
+    .returning({ id: bins.id });
+  return row!.id;
+}
+
+/** A small valid scenario file (an invented one-bin porch garden). */
+const tinyScenario = {
+  format: "castline-scenario",
+  version: 1,
+  garden: { name: "Matrix Porch" },
+  settings: {
+    unitSystem: "us",
+    timeZone: "America/Chicago",
+    lastSpringFrost: "04-15",
+    firstFallFrost: "10-20",
+  },
+  bins: [],
+  beds: [],
+  plantings: [],
+};
 
 export const roleMatrix: MatrixRow[] = [
   {
@@ -142,9 +198,10 @@ export const roleMatrix: MatrixRow[] = [
     file: "app/api/dev/outbox/route.ts",
     handler: devOutbox.GET,
     mutates: false,
-    // Open to anyone, but only while mail is caught locally outside production
-    // (services/mailer.ts isOutboxEnabled); these tests run with NODE_ENV=test.
-    expect: everyone(200),
+    // Only while mail is caught locally outside production (services/mailer.ts
+    // isOutboxEnabled; these tests run with NODE_ENV=test), and only a signed-in
+    // person's own mail (outbox-privacy.test.ts).
+    expect: signedIn(200),
     request: () => ({ url: "/api/dev/outbox" }),
   },
   {
@@ -152,7 +209,8 @@ export const roleMatrix: MatrixRow[] = [
     file: "app/api/session/route.ts",
     variant: "sign in with own password",
     handler: session.POST,
-    mutates: false,
+    // A new row in the sessions allow-list.
+    mutates: true,
     expect: everyone(200),
     request: ({ user }) => ({
       url: "/api/session",
@@ -163,7 +221,8 @@ export const roleMatrix: MatrixRow[] = [
     method: "DELETE",
     file: "app/api/session/route.ts",
     handler: session.DELETE,
-    mutates: false,
+    // Deletes the caller's session row; a signed-out caller has none.
+    mutates: (actor) => actor !== "signedOut",
     expect: everyone(200),
     request: () => ({ url: "/api/session" }),
   },
@@ -189,7 +248,8 @@ export const roleMatrix: MatrixRow[] = [
     variant: "sign up a new address",
     handler: account.POST,
     mutates: true,
-    expect: everyone(201),
+    // 202 for a new and a known address alike (account-enumeration.test.ts).
+    expect: everyone(202),
     request: () => ({
       url: "/api/account",
       body: {
@@ -198,6 +258,50 @@ export const roleMatrix: MatrixRow[] = [
         password: "a-fresh-bed-of-leaves",
       },
     }),
+  },
+  {
+    method: "POST",
+    file: "app/api/account/route.ts",
+    variant: "sign up an address that has an account",
+    handler: account.POST,
+    // Nothing is made; the address's owner is e-mailed after the response.
+    mutates: false,
+    expect: everyone(202),
+    request: ({ user }) => ({
+      url: "/api/account",
+      body: { name: "Someone Else", email: user.email, password: "a-fresh-bed-of-leaves" },
+    }),
+  },
+  {
+    method: "GET",
+    file: "app/api/auth/[...nextauth]/route.ts",
+    variant: "Auth.js session endpoint (switched off)",
+    handler: authJs.GET as Handler,
+    mutates: false,
+    expect: everyone(404),
+    request: () => ({ url: "/api/auth/session", params: authPath("session") }),
+  },
+  {
+    method: "POST",
+    file: "app/api/auth/[...nextauth]/route.ts",
+    variant: "Auth.js credentials callback (switched off)",
+    handler: authJs.POST as Handler,
+    mutates: false,
+    expect: everyone(404),
+    request: ({ user }) => ({
+      url: "/api/auth/callback/credentials",
+      params: authPath("callback/credentials"),
+      body: { email: user.email, password: user.password },
+    }),
+  },
+  {
+    method: "POST",
+    file: "app/api/auth/[...nextauth]/route.ts",
+    variant: "Auth.js sign-out (ends the session like DELETE /api/session)",
+    handler: authJs.POST as Handler,
+    mutates: (actor) => actor !== "signedOut",
+    expect: everyone(200),
+    request: () => ({ url: "/api/auth/signout", params: authPath("signout") }),
   },
   {
     method: "POST",
@@ -284,6 +388,46 @@ export const roleMatrix: MatrixRow[] = [
       params: g(ctx),
       body: { confirmName: ctx.world.gardenName },
     }),
+  },
+  {
+    method: "GET",
+    file: "app/api/gardens/[gardenId]/balance/route.ts",
+    handler: balance.GET,
+    mutates: false,
+    expect: viewerPlus,
+    request: (ctx) => ({
+      url: `/api/gardens/${ctx.world.gardenId}/balance?months=6`,
+      params: g(ctx),
+    }),
+  },
+  {
+    method: "POST",
+    file: "app/api/gardens/[gardenId]/what-if/route.ts",
+    handler: whatIf.POST,
+    // A viewer may try what-ifs: nothing is written (the matrix checks the database is unchanged).
+    mutates: false,
+    expect: viewerPlus,
+    request: async (ctx) => ({
+      url: `/api/gardens/${ctx.world.gardenId}/what-if`,
+      params: g(ctx),
+      body: { months: 3, changes: [{ kind: "bin-trays", binId: await aBin(ctx), trays: 5 }] },
+    }),
+  },
+  {
+    method: "GET",
+    file: "app/api/gardens/[gardenId]/export/route.ts",
+    handler: gardenExport.GET,
+    mutates: false,
+    expect: viewerPlus,
+    request: (ctx) => ({ url: `/api/gardens/${ctx.world.gardenId}/export`, params: g(ctx) }),
+  },
+  {
+    method: "POST",
+    file: "app/api/gardens/import/route.ts",
+    handler: gardenImport.POST,
+    mutates: true,
+    expect: signedIn(201),
+    request: () => ({ url: "/api/gardens/import", body: tinyScenario }),
   },
   {
     method: "GET",
@@ -412,7 +556,7 @@ export const roleMatrix: MatrixRow[] = [
   {
     method: "GET",
     file: "app/api/gardens/[gardenId]/bins/route.ts",
-    handler: bins.GET,
+    handler: binsRoute.GET,
     mutates: false,
     expect: viewerPlus,
     request: (ctx) => ({ url: `/api/gardens/${ctx.world.gardenId}/bins`, params: g(ctx) }),
@@ -420,7 +564,7 @@ export const roleMatrix: MatrixRow[] = [
   {
     method: "POST",
     file: "app/api/gardens/[gardenId]/bins/route.ts",
-    handler: bins.POST,
+    handler: binsRoute.POST,
     mutates: true,
     expect: atLeast("grower", 201),
     request: (ctx) => ({
@@ -597,6 +741,6 @@ export const roleMatrix: MatrixRow[] = [
 
 /** Route files deliberately outside the matrix, with the reason. */
 export const matrixExclusions: Record<string, string> = {
-  "app/api/auth/[...nextauth]/route.ts":
-    "Auth.js's own endpoints (CSRF token + form posts); they share verifyCredentials and the throttle with POST /api/session, which the matrix covers.",
+  "app/api/[...path]/route.ts":
+    "The JSON 404 for /api paths no route claims: the same answer for everyone (request-guards.test.ts).",
 };

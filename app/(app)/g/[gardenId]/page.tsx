@@ -1,11 +1,25 @@
 import type { Metadata } from "next";
 import { Badge, Card, CardBody } from "@/components/ui";
 import { SafetyCautions } from "@/components/garden/safety-cautions";
+import { gardenNamesFrom } from "@/components/balance/garden-names";
+import { gardenStatus } from "@/components/overview/garden-status";
+import {
+  DueThisWeek,
+  FirstSteps,
+  NextHarvests,
+  StockOnHand,
+  ThisMonth,
+  Warnings,
+} from "@/components/overview/overview-sections";
 import { getGardenById } from "@/db/queries/gardens";
 import { getGardenSummary } from "@/db/queries/garden-summary";
+import { loadGardenInputs } from "@/db/queries/garden-inputs";
+import { listLotStock } from "@/db/queries/lots";
 import { requirePageMember } from "@/lib/auth/page-session";
 import { roleLabels } from "@/lib/auth/roles";
+import { computePlan } from "@/lib/engine";
 import { formatDay } from "@/lib/format";
+import { todayIn } from "@/lib/garden-today";
 
 export const metadata: Metadata = { title: "Overview" };
 
@@ -16,11 +30,22 @@ export default async function GardenOverviewPage({
 }) {
   const { gardenId } = await params;
   const member = await requirePageMember(gardenId, "viewer");
-  const [garden, summary] = await Promise.all([
-    getGardenById({ gardenId }),
-    getGardenSummary({ gardenId }),
-  ]);
+  const garden = await getGardenById({ gardenId });
   if (!garden) return null;
+  const today = todayIn(garden.timeZone);
+  const [summary, inputs, lots] = await Promise.all([
+    getGardenSummary({ gardenId }),
+    loadGardenInputs({ gardenId, asOf: today }),
+    listLotStock({ gardenId }),
+  ]);
+  const names = gardenNamesFrom(inputs);
+  const ready = inputs.bins.length > 0 && inputs.beds.length > 0;
+  // Three months cover "this month", this week's feedings and the next harvests.
+  const plan = ready
+    ? computePlan(inputs, { from: today.slice(0, 7), months: 3, suggestions: false })
+    : null;
+  const status = plan ? gardenStatus(plan, inputs, lots) : null;
+  const system = garden.unitSystem;
   const figures = [
     { label: "Beds", value: summary.beds },
     { label: "Containers", value: summary.containers },
@@ -40,19 +65,35 @@ export default async function GardenOverviewPage({
           {garden.location ? ` · ${garden.location}` : ""}
         </p>
       </header>
-      <section
-        aria-label="The garden at a glance"
-        className="grid grid-cols-2 gap-3 sm:grid-cols-5"
-      >
-        {figures.map((f) => (
-          <Card key={f.label}>
-            <CardBody>
-              <p className="text-3xl font-semibold tabular-nums">{f.value}</p>
-              <p className="text-sm text-soil-700">{f.label}</p>
-            </CardBody>
-          </Card>
-        ))}
-      </section>
+      {status ? (
+        <>
+          <Warnings status={status} names={names} system={system} />
+          <div className="grid gap-3 md:grid-cols-2">
+            <ThisMonth status={status} system={system} gardenId={gardenId} />
+            <DueThisWeek status={status} names={names} system={system} />
+            <NextHarvests status={status} names={names} system={system} />
+            <StockOnHand status={status} names={names} system={system} />
+          </div>
+        </>
+      ) : (
+        <FirstSteps hasBins={inputs.bins.length > 0} hasBeds={inputs.beds.length > 0} />
+      )}
+      {/* An empty garden gets first steps, not a row of zeros. */}
+      {status ? (
+        <section
+          aria-label="The garden at a glance"
+          className="grid grid-cols-2 gap-3 sm:grid-cols-5"
+        >
+          {figures.map((f) => (
+            <Card key={f.label}>
+              <CardBody>
+                <p className="text-3xl font-semibold tabular-nums">{f.value}</p>
+                <p className="text-sm text-soil-700">{f.label}</p>
+              </CardBody>
+            </Card>
+          ))}
+        </section>
+      ) : null}
       <SafetyCautions />
     </>
   );

@@ -2,7 +2,7 @@ import { z } from "zod";
 import { deleteGarden, getGardenById, updateGarden } from "@/db/queries/gardens";
 import { requireRole } from "@/lib/auth/require-role";
 import { AppError } from "@/lib/errors";
-import { parseJson, parseParams, parseWith, route } from "@/lib/http";
+import { parseJson, parseParams, parseWith, route, refuseOtherMethods } from "@/lib/http";
 import {
   createGardenSchema,
   deleteGardenSchema,
@@ -13,7 +13,7 @@ const paramsSchema = z.object({ gardenId: z.uuid() });
 type Params = z.infer<typeof paramsSchema>;
 
 export const GET = route<Params>(async (request, { params }) => {
-  const { gardenId } = await parseParams(params, paramsSchema);
+  const { gardenId } = await parseParams(request, params, paramsSchema);
   const member = await requireRole(request, gardenId, "viewer");
   const garden = await getGardenById({ gardenId });
   if (!garden) throw new AppError("not_found:garden");
@@ -21,7 +21,7 @@ export const GET = route<Params>(async (request, { params }) => {
 });
 
 export const PATCH = route<Params>(async (request, { params }) => {
-  const { gardenId } = await parseParams(params, paramsSchema);
+  const { gardenId } = await parseParams(request, params, paramsSchema);
   await requireRole(request, gardenId, "owner");
   const input = await parseJson(request, updateGardenSchema);
   const current = await getGardenById({ gardenId });
@@ -34,7 +34,7 @@ export const PATCH = route<Params>(async (request, { params }) => {
 
 // Deleting needs the owner to type the garden's name: it takes every bed, bin and log with it.
 export const DELETE = route<Params>(async (request, { params }) => {
-  const { gardenId } = await parseParams(params, paramsSchema);
+  const { gardenId } = await parseParams(request, params, paramsSchema);
   await requireRole(request, gardenId, "owner");
   const { confirmName } = await parseJson(request, deleteGardenSchema);
   const garden = await getGardenById({ gardenId });
@@ -47,3 +47,6 @@ export const DELETE = route<Params>(async (request, { params }) => {
   await deleteGarden({ gardenId });
   return Response.json({ ok: true });
 });
+
+// Any other method: a JSON 405 with an Allow header, not Next's empty one.
+export const { POST, PUT } = refuseOtherMethods({ GET, PATCH, DELETE });

@@ -2,7 +2,7 @@ import { acceptInvitation } from "@/db/queries/invitations";
 import { requireUser } from "@/lib/auth/session";
 import { hashLinkToken } from "@/lib/auth/tokens";
 import { AppError } from "@/lib/errors";
-import { parseJson, route } from "@/lib/http";
+import { parseJson, route, refuseOtherMethods } from "@/lib/http";
 import { invitationProblems } from "@/lib/messages";
 import { acceptInvitationSchema } from "@/lib/validation/garden";
 
@@ -21,3 +21,6 @@ export const POST = route(async (request) => {
     throw new AppError(`gone:invitation_${outcome.reason}`, invitationProblems[outcome.reason]);
   return Response.json({ gardenId: outcome.gardenId, role: outcome.role });
 });
+
+// Any other method: a JSON 405 with an Allow header, not Next's empty one.
+export const { GET, PUT, PATCH, DELETE } = refuseOtherMethods({ POST });

@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { createBin, listBins } from "@/db/queries/bins";
 import { requireRole } from "@/lib/auth/require-role";
-import { parseJson, parseParams, route } from "@/lib/http";
+import { parseJson, parseParams, route, refuseOtherMethods } from "@/lib/http";
 import { createBinSchema } from "@/lib/validation/bin";
 import { nullParams, trayBox, wormCount } from "@/lib/validation/bin-values";
 
@@ -9,14 +9,14 @@ const paramsSchema = z.object({ gardenId: z.uuid() });
 type Params = z.infer<typeof paramsSchema>;
 
 export const GET = route<Params>(async (request, { params }) => {
-  const { gardenId } = await parseParams(params, paramsSchema);
+  const { gardenId } = await parseParams(request, params, paramsSchema);
   await requireRole(request, gardenId, "viewer");
   return Response.json({ bins: await listBins({ gardenId }) });
 });
 
 // A start date may lie ahead: a second bin planned from the Balance's suggestion starts later.
 export const POST = route<Params>(async (request, { params }) => {
-  const { gardenId } = await parseParams(params, paramsSchema);
+  const { gardenId } = await parseParams(request, params, paramsSchema);
   await requireRole(request, gardenId, "grower");
   const input = await parseJson(request, createBinSchema);
   const { tray, startingWorms, ...rest } = input;
@@ -40,3 +40,5 @@ export const POST = route<Params>(async (request, { params }) => {
   });
   return Response.json({ bin }, { status: 201 });
 });
+
+export const { PUT, PATCH, DELETE } = refuseOtherMethods({ GET, POST });

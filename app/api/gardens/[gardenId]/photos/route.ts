@@ -3,7 +3,7 @@ import { z } from "zod";
 import { createPhoto, eventBelongsToGarden } from "@/db/queries/photos";
 import { requireRole } from "@/lib/auth/require-role";
 import { AppError } from "@/lib/errors";
-import { parseParams, route } from "@/lib/http";
+import { parseParams, route, refuseOtherMethods } from "@/lib/http";
 import { getStorage, StorageUnavailableError } from "@/services/storage";
 import { MAX_PHOTO_BYTES, preparePhoto, tooLarge } from "@/services/storage/photo";
 
@@ -16,7 +16,7 @@ type Params = z.infer<typeof paramsSchema>;
  * the entry stays and this upload can simply be sent again.
  */
 export const POST = route<Params>(async (request, { params }) => {
-  const { gardenId } = await parseParams(params, paramsSchema);
+  const { gardenId } = await parseParams(request, params, paramsSchema);
   const member = await requireRole(request, gardenId, "helper");
   // Refuse an oversized body before reading it (multipart adds a little around the file).
   const declared = Number(request.headers.get("content-length") ?? 0);
@@ -76,3 +76,5 @@ export const POST = route<Params>(async (request, { params }) => {
     { status: 201 },
   );
 });
+
+export const { GET, PUT, PATCH, DELETE } = refuseOtherMethods({ POST });

@@ -3,7 +3,7 @@ import { getBinById, updateBin, type BinValues } from "@/db/queries/bins";
 import { getGardenById } from "@/db/queries/gardens";
 import { requireRole } from "@/lib/auth/require-role";
 import { AppError } from "@/lib/errors";
-import { parseJson, parseParams, route } from "@/lib/http";
+import { parseJson, parseParams, route, refuseOtherMethods } from "@/lib/http";
 import { updateBinSchema } from "@/lib/validation/bin";
 import { todayIn, trayBox, wormCount } from "@/lib/validation/bin-values";
 
@@ -11,7 +11,7 @@ const paramsSchema = z.object({ gardenId: z.uuid(), binId: z.uuid() });
 type Params = z.infer<typeof paramsSchema>;
 
 export const GET = route<Params>(async (request, { params }) => {
-  const { gardenId, binId } = await parseParams(params, paramsSchema);
+  const { gardenId, binId } = await parseParams(request, params, paramsSchema);
   await requireRole(request, gardenId, "viewer");
   const bin = await getBinById({ gardenId, binId });
   if (!bin) throw new AppError("not_found:bin");
@@ -19,7 +19,7 @@ export const GET = route<Params>(async (request, { params }) => {
 });
 
 export const PATCH = route<Params>(async (request, { params }) => {
-  const { gardenId, binId } = await parseParams(params, paramsSchema);
+  const { gardenId, binId } = await parseParams(request, params, paramsSchema);
   await requireRole(request, gardenId, "grower");
   const input = await parseJson(request, updateBinSchema);
   const [bin, garden] = await Promise.all([
@@ -49,7 +49,7 @@ export const PATCH = route<Params>(async (request, { params }) => {
 
 // Retiring keeps the bin and its log (its lots and calibration stay history); it only stops the forecast.
 export const DELETE = route<Params>(async (request, { params }) => {
-  const { gardenId, binId } = await parseParams(params, paramsSchema);
+  const { gardenId, binId } = await parseParams(request, params, paramsSchema);
   await requireRole(request, gardenId, "grower");
   const [bin, garden] = await Promise.all([
     getBinById({ gardenId, binId }),
@@ -61,3 +61,5 @@ export const DELETE = route<Params>(async (request, { params }) => {
   const retiredOn = today < bin.startedOn ? bin.startedOn : today;
   return Response.json({ bin: await updateBin({ gardenId, binId, values: { retiredOn } }) });
 });
+
+export const { POST, PUT } = refuseOtherMethods({ GET, PATCH, DELETE });

@@ -3,7 +3,7 @@ import { getStockSettings } from "@/db/queries/bins";
 import { recordStockAdjustment } from "@/db/queries/lots";
 import { requireRole } from "@/lib/auth/require-role";
 import { AppError } from "@/lib/errors";
-import { parseJson, parseParams, route } from "@/lib/http";
+import { parseJson, parseParams, route, refuseOtherMethods } from "@/lib/http";
 import { todayIn } from "@/lib/validation/bin-values";
 import { adjustLotSchema } from "@/lib/validation/lot";
 import { listStock } from "../list-stock";
@@ -12,7 +12,7 @@ const paramsSchema = z.object({ gardenId: z.uuid(), lotId: z.uuid() });
 type Params = z.infer<typeof paramsSchema>;
 
 export const GET = route<Params>(async (request, { params }) => {
-  const { gardenId, lotId } = await parseParams(params, paramsSchema);
+  const { gardenId, lotId } = await parseParams(request, params, paramsSchema);
   await requireRole(request, gardenId, "viewer");
   const lot = (await listStock(gardenId)).find((l) => l.id === lotId);
   if (!lot) throw new AppError("not_found:lot");
@@ -21,7 +21,7 @@ export const GET = route<Params>(async (request, { params }) => {
 
 /** Growers and owners take stock out with a reason; a lot never goes below zero. */
 export const PATCH = route<Params>(async (request, { params }) => {
-  const { gardenId, lotId } = await parseParams(params, paramsSchema);
+  const { gardenId, lotId } = await parseParams(request, params, paramsSchema);
   const member = await requireRole(request, gardenId, "grower");
   const input = await parseJson(request, adjustLotSchema);
   const { timeZone } = await getStockSettings({ gardenId });
@@ -47,3 +47,5 @@ export const PATCH = route<Params>(async (request, { params }) => {
   const lot = (await listStock(gardenId)).find((l) => l.id === lotId);
   return Response.json({ lot, reason: input.reason });
 });
+
+export const { POST, PUT, DELETE } = refuseOtherMethods({ GET, PATCH });

@@ -2,7 +2,7 @@ import { z } from "zod";
 import { getPhoto } from "@/db/queries/photos";
 import { requireRole } from "@/lib/auth/require-role";
 import { AppError } from "@/lib/errors";
-import { parseParams, route } from "@/lib/http";
+import { parseParams, route, refuseOtherMethods } from "@/lib/http";
 import { getStorage, StorageUnavailableError } from "@/services/storage";
 
 const paramsSchema = z.object({ gardenId: z.uuid(), photoId: z.uuid() });
@@ -10,7 +10,7 @@ type Params = z.infer<typeof paramsSchema>;
 
 /** Members of the garden only: the bytes pass through here, never a public link. */
 export const GET = route<Params>(async (request, { params }) => {
-  const { gardenId, photoId } = await parseParams(params, paramsSchema);
+  const { gardenId, photoId } = await parseParams(request, params, paramsSchema);
   await requireRole(request, gardenId, "viewer");
   const photo = await getPhoto({ gardenId, photoId });
   if (!photo) throw new AppError("not_found:photo");
@@ -33,3 +33,5 @@ export const GET = route<Params>(async (request, { params }) => {
     },
   });
 });
+
+export const { POST, PUT, PATCH, DELETE } = refuseOtherMethods({ GET });

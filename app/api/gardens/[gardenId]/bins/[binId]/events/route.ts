@@ -5,7 +5,7 @@ import { getBinById } from "@/db/queries/bins";
 import { getGardenById } from "@/db/queries/gardens";
 import { requireRole } from "@/lib/auth/require-role";
 import { AppError } from "@/lib/errors";
-import { parseJson, parseParams, parseWith, route } from "@/lib/http";
+import { parseJson, parseParams, parseWith, route, refuseOtherMethods } from "@/lib/http";
 import { binEventFilterSchema, binEventSchema } from "@/lib/validation/bin-event";
 import { todayIn } from "@/lib/validation/bin-values";
 import { checkWormTarget, writeBinEvent } from "./write-bin-event";
@@ -14,7 +14,7 @@ const paramsSchema = z.object({ gardenId: z.uuid(), binId: z.uuid() });
 type Params = z.infer<typeof paramsSchema>;
 
 export const GET = route<Params>(async (request, { params }) => {
-  const { gardenId, binId } = await parseParams(params, paramsSchema);
+  const { gardenId, binId } = await parseParams(request, params, paramsSchema);
   await requireRole(request, gardenId, "viewer");
   const search = Object.fromEntries(new URL(request.url).searchParams);
   const { kind, limit } = parseWith(binEventFilterSchema, search);
@@ -24,7 +24,7 @@ export const GET = route<Params>(async (request, { params }) => {
 
 /** Helpers and up log bin work; the date must lie between the bin's start (or retirement) and today. */
 export const POST = route<Params>(async (request, { params }) => {
-  const { gardenId, binId } = await parseParams(params, paramsSchema);
+  const { gardenId, binId } = await parseParams(request, params, paramsSchema);
   const member = await requireRole(request, gardenId, "helper");
   const input = await parseJson(request, binEventSchema);
   const [bin, garden] = await Promise.all([
@@ -57,3 +57,5 @@ export const POST = route<Params>(async (request, { params }) => {
   );
   return Response.json(result, { status: 201 });
 });
+
+export const { PUT, PATCH, DELETE } = refuseOtherMethods({ GET, POST });

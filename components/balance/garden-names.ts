@@ -1,0 +1,63 @@
+import type { FeederClass, GardenInputs } from "@/lib/engine";
+
+// What the Balance needs to put names on the engine's ids (the plan carries ids
+// only). Built on the server from the garden's inputs, passed to the client.
+export interface GardenNames {
+  bins: {
+    id: string;
+    name: string;
+    trays: number;
+    rotationIntervalDays: number | null;
+    startDate: string;
+  }[];
+  beds: { id: string; name: string }[];
+  plantings: {
+    id: string;
+    label: string;
+    bedId: string;
+    feederClass: FeederClass;
+    priority: number | null;
+    edible: boolean;
+    /** The planting's own rule (null: its feeder class default). SI in the rule's measure. */
+    rule: { material: string; measure: string; basis: string; amount: number } | null;
+  }[];
+}
+
+export function gardenNamesFrom(inputs: GardenInputs): GardenNames {
+  const bedName = new Map(inputs.beds.map((b) => [b.id, b.name]));
+  return {
+    bins: inputs.bins.map((b) => ({
+      id: b.id,
+      name: b.name,
+      trays: b.trays,
+      rotationIntervalDays: b.rotationIntervalDays,
+      startDate: b.startDate,
+    })),
+    beds: inputs.beds.map((b) => ({ id: b.id, name: b.name })),
+    plantings: inputs.plantings.map((p) => ({
+      id: p.id,
+      label: `${p.crop ?? "Planting"} (${p.plantCount}) in ${bedName.get(p.bedId) ?? "a bed"}`,
+      bedId: p.bedId,
+      feederClass: p.feederClass,
+      priority: p.priority,
+      edible: p.edible,
+      rule: p.rule
+        ? {
+            material: p.rule.material,
+            measure: p.rule.measure,
+            basis: p.rule.basis,
+            amount: p.rule.amount,
+          }
+        : null,
+    })),
+  };
+}
+
+/** A lookup for lib/explain-sentences: the name of a bin, bed, planting or lot. */
+export function nameLookup(names: GardenNames) {
+  const map = new Map<string, string>();
+  for (const b of names.bins) map.set(`bin:${b.id}`, b.name);
+  for (const b of names.beds) map.set(`bed:${b.id}`, b.name);
+  for (const p of names.plantings) map.set(`planting:${p.id}`, p.label);
+  return (ref: string, id: string) => map.get(`${ref}:${id}`);
+}

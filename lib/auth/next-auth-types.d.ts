@@ -1,7 +1,0 @@
-import "next-auth";
-
-declare module "next-auth" {
-  interface User {
-    sessionVersion?: number;
-  }
-}

@@ -1,0 +1,153 @@
+import type { WhatIfChange, WhatIfMonthDiff } from "@/lib/balance/types";
+import type { FeedingRuleInput, GardenInputs, GardenPlan, PlantingInput } from "@/lib/engine";
+import { defaultRuleFor } from "@/lib/engine";
+import { AppError, type FieldErrors } from "@/lib/errors";
+
+// Applies what-if changes to a COPY of a garden's inputs (the caller's object is
+// never touched, so a cached plan's inputs stay as they were) and diffs two plans.
+
+/**
+ * Largest amount a planting's rule may be set to, by basis and measure (SI). Sanity
+ * bounds, not advice: each is several times the largest common-practice dose —
+ * heavy feeders get ¾–1 cup of castings per plant monthly (PRODUCT.md), 1 cup =
+ * 0.2366 L ≈ 0.17 kg at 0.7 kg/L; top-dressing ¼–½ in (Cumberland County SWCD),
+ * ½ in = 12.7 mm = 12.7 L/m² ≈ 8.9 kg/m²; potting mix above 20 % castings is
+ * warned about (Atiyeh et al. 2000).
+ */
+const MAX_AMOUNT: Record<string, { max: number; unit: string }> = {
+  "per-plant:mass": { max: 2, unit: "kg per plant" },
+  "per-plant:volume:castings": { max: 3, unit: "L per plant" },
+  "per-plant:volume": { max: 20, unit: "L per plant" },
+  "per-area:mass": { max: 20, unit: "kg per m²" },
+  "per-area:volume": { max: 30, unit: "L per m²" },
+  "per-container-volume:volume": { max: 0.5, unit: "L per L of container" },
+  "percent-of-mix:percent-of-mix": { max: 50, unit: "% of the mix" },
+};
+
+function amountLimit(rule: FeedingRuleInput) {
+  const key = `${rule.basis}:${rule.measure}`;
+  return (
+    (rule.material === "castings" ? MAX_AMOUNT[`${key}:castings`] : undefined) ?? MAX_AMOUNT[key]
+  );
+}
+
+/** The rule a planting is fed by, its feeder-class default when it has none of its own. */
+function ruleOf(p: PlantingInput): FeedingRuleInput {
+  if (p.rule) return p.rule;
+  const d = defaultRuleFor(p.feederClass);
+  return {
+    material: d.material,
+    method: d.method,
+    basis: d.basis,
+    measure: "volume",
+    amount: d.amount,
+    recurrence: d.recurrence,
+    dilutionWaterParts: null,
+    teaCastingsPerWater: null,
+  };
+}
+
+/**
+ * inputs with the changes applied; unknown ids and amounts beyond reason → 400 naming each field.
+ * `perHarvestKg` (from today's plan) sizes extra trays like their bin's own harvests.
+ */
+export function applyWhatIf(
+  inputs: GardenInputs,
+  changes: WhatIfChange[],
+  perHarvestKg: ReadonlyMap<string, number> = new Map(),
+): GardenInputs {
+  const next: GardenInputs = structuredClone(inputs);
+  const fields: FieldErrors = {};
+  changes.forEach((change, i) => {
+    const at = `changes.${i}`;
+    if (change.kind === "planting-amount") {
+      const planting = next.plantings.find((p) => p.id === change.plantingId);
+      if (!planting) {
+        fields[`${at}.plantingId`] = "no such planting in this garden";
+        return;
+      }
+      const rule = ruleOf(planting);
+      const limit = amountLimit(rule);
+      if (limit && change.amount > limit.max) {
+        fields[`${at}.amount`] = `must be at most ${limit.max} ${limit.unit} for this planting`;
+        return;
+      }
+      planting.rule = { ...rule, amount: change.amount };
+      return;
+    }
+    const binId = change.kind === "add-bin" ? change.likeBinId : change.binId;
+    const bin = next.bins.find((b) => b.id === binId);
+    if (!bin) {
+      fields[`${at}.${change.kind === "add-bin" ? "likeBinId" : "binId"}`] =
+        "no such bin in this garden";
+      return;
+    }
+    switch (change.kind) {
+      case "bin-trays":
+        bin.trays = change.trays;
+        break;
+      case "bin-rotation":
+        bin.rotationIntervalDays = change.rotationIntervalDays;
+        break;
+      case "bin-start":
+        bin.startDate = change.startDate;
+        break;
+      case "extra-trays": {
+        const amount = perHarvestKg.get(bin.id);
+        if (!amount) {
+          fields[`${at}.binId`] = "this bin has no forecast harvest to copy";
+          return;
+        }
+        // Each extra tray is stock on its harvest day, like a logged harvest would be.
+        change.harvestDates.forEach((madeOn, j) =>
+          next.stockLots.push({
+            id: `what-if-tray-${i + 1}-${j + 1}`,
+            binId: bin.id,
+            material: "castings",
+            madeOn,
+            amount,
+            manureFeedstock: null,
+          }),
+        );
+        break;
+      }
+      case "add-bin":
+        next.bins.push({
+          ...structuredClone(bin),
+          id: `what-if-bin-${i + 1}`,
+          name: change.name ?? `${bin.name} (what-if)`,
+          startDate: change.startDate,
+          trays: change.trays ?? bin.trays,
+          startingWorms: change.startingWorms ?? bin.startingWorms,
+          retiredOn: null,
+        });
+        break;
+    }
+  });
+  if (Object.keys(fields).length)
+    throw new AppError(
+      "validation:what_if",
+      `Please check: ${Object.keys(fields).join(", ")}.`,
+      fields,
+    );
+  return next;
+}
+
+/** changed − current per month and pool, for the months both plans cover. */
+export function diffPlans(current: GardenPlan, changed: GardenPlan): WhatIfMonthDiff[] {
+  const before = new Map(current.rows.map((r) => [`${r.month}:${r.pool}`, r]));
+  return changed.rows.flatMap((r) => {
+    const c = before.get(`${r.month}:${r.pool}`);
+    if (!c) return [];
+    return [
+      {
+        month: r.month,
+        pool: r.pool,
+        supplied: r.supplied - c.supplied,
+        allocated: r.allocated - c.allocated,
+        closing: r.closing - c.closing,
+        shortfall: r.shortfall - c.shortfall,
+      },
+    ];
+  });
+}
