@@ -12,7 +12,8 @@ export type AmountKind =
   | "area" // a bed, a tray surface (m²)
   | "length" // a bed or tray side (m)
   | "depth" // a top-dressing depth (m)
-  | "tray-volume"; // a tray's inside volume (L)
+  | "tray-volume" // a tray's inside volume (L)
+  | "tray-side"; // a tray's inside length, width or depth (m), read off a tape in in or cm
 
 export interface DisplayAmount {
   value: number;
@@ -107,6 +108,14 @@ export function toDisplayAmount(si: number, kind: AmountKind, system: UnitSystem
     }
     case "tray-volume":
       return amount(roundForDisplay(fromSi(si, units.trayVolume)), units.trayVolume);
+    case "tray-side": {
+      // Boards are measured to the quarter inch (PS 20 sizes are in quarters: 5½, 7¼).
+      if (system === "us") {
+        const { value, text } = cupText(fromSi(si, "in"));
+        return amount(value, "in", text);
+      }
+      return amount(roundForDisplay(fromSi(si, "cm")), "cm");
+    }
   }
 }
 
@@ -238,6 +247,8 @@ export function columnUnit(kind: AmountKind, system: UnitSystem): UnitName {
       return units.depth;
     case "tray-volume":
       return units.trayVolume;
+    case "tray-side":
+      return system === "us" ? "in" : "cm";
   }
 }
 

@@ -4,6 +4,10 @@ export const queryKeys = {
   garden: (gardenId: string) => ["gardens", gardenId] as const,
   members: (gardenId: string) => ["gardens", gardenId, "members"] as const,
   invitations: (gardenId: string) => ["gardens", gardenId, "invitations"] as const,
+  bins: (gardenId: string) => ["gardens", gardenId, "bins"] as const,
+  binLog: (gardenId: string, binId: string, kind?: string) =>
+    ["gardens", gardenId, "bins", binId, "log", kind ?? "all"] as const,
+  lots: (gardenId: string) => ["gardens", gardenId, "lots"] as const,
   /** Everything computed from the plan; a write that changes supply or demand invalidates this prefix. */
   plan: (gardenId: string) => ["gardens", gardenId, "balance"] as const,
   balance: (gardenId: string, from: string, months: number) =>

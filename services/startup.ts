@@ -7,6 +7,7 @@ import { beginDraining } from "@/lib/draining";
 import { getEnv } from "@/lib/env";
 import { logError } from "@/lib/log";
 import { startLocalMailIfNeeded } from "@/services/mailer";
+import { getStorage } from "@/services/storage";
 
 // Runs once when the Next server process starts (instrumentation.ts): opens the
 // database (which takes the data-directory lock and applies migrations), loads
@@ -28,6 +29,8 @@ export async function startServer(): Promise<void> {
       );
     }
     await startLocalMailIfNeeded();
+    // Opens photo storage now: the local fake S3 starts with the app, and a bad S3_* setting stops the start.
+    await getStorage();
     installShutdownHandlers();
   } catch (error) {
     // If register() throws, `next start` keeps serving 500s; a refused start must really stop.

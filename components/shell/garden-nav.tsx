@@ -10,6 +10,8 @@ const sections: { path: string; label: string; minimum: Role }[] = [
   { path: "", label: "Overview", minimum: "viewer" },
   { path: "/balance", label: "Balance", minimum: "viewer" },
   { path: "/beds", label: "Beds", minimum: "viewer" },
+  { path: "/bins", label: "Bins", minimum: "viewer" },
+  { path: "/stock", label: "Stock", minimum: "viewer" },
   { path: "/members", label: "Members", minimum: "viewer" },
   { path: "/settings", label: "Settings", minimum: "owner" },
 ];

@@ -335,3 +335,36 @@ export async function listLotStock({ gardenId }: { gardenId: string }): Promise<
   );
   return lots.map((l) => ({ ...l, remainingSi: l.initialSi - (taken.get(l.id) ?? 0) }));
 }
+
+// ── Added by the bins branch (issue 11): stock entered by hand. Data helper: move or
+// reshape freely; POST /api/gardens/[gardenId]/lots calls it.
+
+export interface EnteredLotInput {
+  gardenId: string;
+  material: "castings" | "leachate";
+  producedOn: string;
+  amountSi: number;
+  manureFeedstock: boolean;
+  pricePerKg?: number | null;
+  note?: string | null;
+}
+
+/** A bought bag or stock on hand before Castline: a lot with no bin and no source event. */
+export async function recordEnteredLot(input: EnteredLotInput): Promise<{ lotId: string }> {
+  const db = await getDb();
+  const [lot] = await db
+    .insert(stockLots)
+    .values({
+      gardenId: input.gardenId,
+      binId: null,
+      sourceEventId: null,
+      material: input.material,
+      producedOn: input.producedOn,
+      initialAmountSi: input.amountSi,
+      manureFeedstock: input.manureFeedstock,
+      pricePerKg: input.pricePerKg ?? null,
+      note: input.note ?? null,
+    })
+    .returning({ id: stockLots.id });
+  return { lotId: lot!.id };
+}

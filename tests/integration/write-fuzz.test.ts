@@ -34,6 +34,8 @@ const RUNS = Number(process.env.FUZZ_RUNS ?? 100);
 const nothingToFuzz: Record<string, string> = {
   "DELETE app/api/session/route.ts": "sign out: reads only the cookie",
   "POST app/api/session/everywhere/route.ts": "sign out everywhere: reads only the cookie",
+  "POST app/api/gardens/[gardenId]/photos/route.ts":
+    "a multipart file upload, not JSON; photos.test.ts sends it hostile files (a PDF named .jpg, an SVG with script, 50 MB)",
   "POST app/api/auth/[...nextauth]/route.ts":
     "Auth.js sign-out kept for old links: reads only the cookie; every other path is a 404 (role matrix)",
 };

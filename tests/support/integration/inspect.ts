@@ -85,6 +85,12 @@ const SNAPSHOT_TABLES = [
   "crops",
   "plantings",
   "feeding_rules",
+  "bins",
+  "bin_events",
+  "worm_moves",
+  "stock_lots",
+  "stock_adjustments",
+  "uploads",
 ];
 
 /** Everything a role-gated mutation could touch, as one comparable value. */
