@@ -13,11 +13,13 @@ import type {
   TrayInput,
 } from "@/lib/engine";
 import { dflt, trayInsideFromOuter } from "@/lib/engine";
-import type {
-  Scenario,
-  ScenarioBed,
-  ScenarioBin,
-  ScenarioPlanting,
+import {
+  scenarioDrainId,
+  scenarioHarvestId,
+  type Scenario,
+  type ScenarioBed,
+  type ScenarioBin,
+  type ScenarioPlanting,
 } from "@/lib/validation/scenario";
 import { si } from "@/lib/validation/scenario-quantity";
 import { quantityOf, toSi, type UnitName } from "@/lib/units";
@@ -30,9 +32,7 @@ function castingsKg(q: { value: number; unit: string }): number {
   return quantityOf(q.unit as UnitName) === "mass" ? v : v * dflt("castingsBulkDensityKgPerL");
 }
 
-/** Default ids of logged harvests and drains, so applications can name the lot they drew from. */
-export const scenarioHarvestId = (binId: string, date: string) => `${binId}:harvest:${date}`;
-export const scenarioDrainId = (binId: string, date: string) => `${binId}:drain:${date}`;
+export { scenarioDrainId, scenarioHarvestId };
 
 export function monthDay(value: string, field: string): MonthDay {
   const m = /^(?:\d{4}-)?(\d{2})-(\d{2})$/.exec(value);
@@ -176,6 +176,11 @@ export function scenarioToInputs(
     })),
   );
   const logs = s.logs ?? {};
+  // What each lot holds, so an adjustment typed by volume is weighed like its lot.
+  const leachateLots = new Set([
+    ...drains.map((d) => d.id),
+    ...(s.stock?.lots ?? []).filter((l) => l.material === "leachate").map((l) => l.id),
+  ]);
   return {
     garden: { id: opts.gardenId ?? s.garden.name, name: s.garden.name },
     settings: {
@@ -219,6 +224,16 @@ export function scenarioToInputs(
             lotId: d.lotId,
             amount: a.material === "leachate" ? si(d.amount) : castingsKg(d.amount),
           })),
+        }))
+        .filter((a) => a.date <= asOf),
+      adjustments: (logs.adjustments ?? [])
+        .map((a, i) => ({
+          id: a.id ?? `adjustment-${i + 1}`,
+          lotId: a.lotId,
+          date: a.date,
+          amount: leachateLots.has(a.lotId) ? si(a.amount) : castingsKg(a.amount),
+          reason: a.reason,
+          note: a.note ?? null,
         }))
         .filter((a) => a.date <= asOf),
       wormMoves: (logs.wormMoves ?? [])
