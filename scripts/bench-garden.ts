@@ -141,7 +141,7 @@ export function benchGarden(plantings: number, seed = 1): GardenInputs {
     beds,
     plantings: list,
     stockLots: [],
-    logs: { harvests, drains, applications, wormMoves: [], observations: [] },
+    logs: { harvests, drains, applications, adjustments: [], wormMoves: [], observations: [] },
     asOf: BENCH_AS_OF,
   };
 }

@@ -10,6 +10,7 @@ import {
   gardens,
   memberships,
   plantings,
+  stockAdjustments,
   stockLots,
   wormMoves,
 } from "@/db/schema";
@@ -302,6 +303,20 @@ export async function insertGardenInputs(
       plannedKey: remapPlannedKey(a.plannedFeedingId, a.plantingId, mapped(a.plantingId)),
       draws: a.draws.map((d) => ({ lotId: mapped(d.lotId), amountSi: d.amount })),
     });
+  }
+  if (logs.adjustments.length) {
+    await tx.insert(stockAdjustments).values(
+      logs.adjustments.map((a) => ({
+        id: idFor(a.id),
+        gardenId,
+        lotId: mapped(a.lotId),
+        adjustedOn: a.date,
+        amountSi: a.amount,
+        // The scenario schema admits only the column's values (lib/validation/scenario.ts).
+        reason: a.reason as (typeof stockAdjustments.$inferInsert)["reason"],
+        note: a.note,
+      })),
+    );
   }
   return { gardenId, ids };
 }

@@ -104,9 +104,14 @@ export async function readGardenInputs(
     .where(eq(applicationDraws.gardenId, gardenId))
     .orderBy(asc(applicationDraws.applicationId), asc(applicationDraws.lotId));
   const adjustmentRows = await tx
-    .select({ lotId: stockAdjustments.lotId, amountSi: stockAdjustments.amountSi })
+    .select()
     .from(stockAdjustments)
-    .where(and(eq(stockAdjustments.gardenId, gardenId), lte(stockAdjustments.adjustedOn, asOf)));
+    .where(and(eq(stockAdjustments.gardenId, gardenId), lte(stockAdjustments.adjustedOn, asOf)))
+    .orderBy(
+      asc(stockAdjustments.adjustedOn),
+      asc(stockAdjustments.createdAt),
+      asc(stockAdjustments.id),
+    );
   const moveRows = await tx
     .select()
     .from(wormMoves)
@@ -114,12 +119,6 @@ export async function readGardenInputs(
     .orderBy(asc(wormMoves.createdAt), asc(wormMoves.id));
 
   const cropById = byId(cropRows);
-  // Stop-gap until GardenInputs has an adjustments log: a lot's hand adjustments
-  // up to asOf are folded into its amount as made (so a spill counts from the
-  // lot's first day, and a harvest's calibration sees the adjusted weight).
-  const adjusted = new Map<string, number>();
-  for (const a of adjustmentRows) adjusted.set(a.lotId, (adjusted.get(a.lotId) ?? 0) + a.amountSi);
-  const withAdjustments = (lotId: string, amount: number) => amount + (adjusted.get(lotId) ?? 0);
   const ruleById = byId(ruleRows);
   const lotByEvent = new Map(
     lotRows.filter((l) => l.sourceEventId !== null).map((l) => [l.sourceEventId!, l]),
@@ -235,7 +234,7 @@ export async function readGardenInputs(
         binId: l.binId,
         material: l.material,
         madeOn: l.producedOn,
-        amount: withAdjustments(l.id, l.initialAmountSi),
+        amount: l.initialAmountSi,
         manureFeedstock: l.manureFeedstock,
       })),
     logs: {
@@ -243,14 +242,14 @@ export async function readGardenInputs(
         id: lotIdOf(e.id),
         binId: e.binId,
         date: e.occurredOn,
-        castingsKg: withAdjustments(lotIdOf(e.id), e.castingsKg ?? 0),
+        castingsKg: e.castingsKg ?? 0,
         predictedKg: e.predictedCastingsKg,
       })),
       drains: eventsOf("liquid-drained").map((e) => ({
         id: lotIdOf(e.id),
         binId: e.binId,
         date: e.occurredOn,
-        litres: withAdjustments(lotIdOf(e.id), e.liquidL ?? 0),
+        litres: e.liquidL ?? 0,
       })),
       applications: applicationRows.map((a) => ({
         id: a.id,
@@ -261,6 +260,15 @@ export async function readGardenInputs(
         amount: a.amountSi,
         plannedFeedingId: a.plannedKey,
         draws: drawsByApplication.get(a.id) ?? [],
+      })),
+      // Applied by the ledger on their own date (a spill does not shrink the lot's earlier days).
+      adjustments: adjustmentRows.map((a) => ({
+        id: a.id,
+        lotId: a.lotId,
+        date: a.adjustedOn,
+        amount: a.amountSi,
+        reason: a.reason,
+        note: a.note,
       })),
       wormMoves: moveRows.map((m) => ({
         id: m.id,

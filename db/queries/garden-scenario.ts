@@ -157,6 +157,19 @@ export function inputsToScenario(
           amount: a.material === "leachate" ? litres(d.amount) : kg(d.amount),
         })),
       })),
+      adjustments: logs.adjustments.map((a) => {
+        const leachate =
+          inputs.logs.drains.some((d) => d.id === a.lotId) ||
+          inputs.stockLots.some((l) => l.id === a.lotId && l.material === "leachate");
+        return {
+          id: a.id,
+          lotId: a.lotId,
+          date: a.date,
+          amount: leachate ? litres(a.amount) : kg(a.amount),
+          reason: a.reason,
+          note: opt(a.note),
+        };
+      }),
       wormMoves: logs.wormMoves.map((w) => ({
         id: w.id,
         date: w.date,

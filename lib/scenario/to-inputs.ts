@@ -13,11 +13,13 @@ import type {
   TrayInput,
 } from "@/lib/engine";
 import { dflt, trayInsideFromOuter } from "@/lib/engine";
-import type {
-  Scenario,
-  ScenarioBed,
-  ScenarioBin,
-  ScenarioPlanting,
+import {
+  scenarioDrainId,
+  scenarioHarvestId,
+  type Scenario,
+  type ScenarioBed,
+  type ScenarioBin,
+  type ScenarioPlanting,
 } from "@/lib/validation/scenario";
 import { si } from "@/lib/validation/scenario-quantity";
 import { quantityOf, toSi, type UnitName } from "@/lib/units";
@@ -30,9 +32,7 @@ function castingsKg(q: { value: number; unit: string }): number {
   return quantityOf(q.unit as UnitName) === "mass" ? v : v * dflt("castingsBulkDensityKgPerL");
 }
 
-/** Default ids of logged harvests and drains, so applications can name the lot they drew from. */
-export const scenarioHarvestId = (binId: string, date: string) => `${binId}:harvest:${date}`;
-export const scenarioDrainId = (binId: string, date: string) => `${binId}:drain:${date}`;
+export { scenarioDrainId, scenarioHarvestId };
 
 export function monthDay(value: string, field: string): MonthDay {
   const m = /^(?:\d{4}-)?(\d{2})-(\d{2})$/.exec(value);
@@ -144,7 +144,11 @@ function plantingInput(p: ScenarioPlanting): PlantingInput {
   };
 }
 
-/** The scenario as the engine takes it. `asOf` defaults to the scenario's settings.asOf. */
+/**
+ * The scenario as the engine takes it. `asOf` defaults to the scenario's settings.asOf.
+ * Logs dated after `asOf` (and stock made after it) are left out, as the database
+ * adapter does: the plan replays history up to and including asOf and forecasts after it.
+ */
 export function scenarioToInputs(
   s: Scenario,
   opts: { asOf?: string; gardenId?: string } = {},
@@ -152,8 +156,10 @@ export function scenarioToInputs(
   const asOf = opts.asOf ?? s.settings.asOf;
   if (asOf === undefined)
     throw new EngineInputError("settings.asOf", "is needed: the last day of logged history");
+  const upToAsOf = <T extends { date: string }>(rows: readonly T[] | undefined): T[] =>
+    (rows ?? []).filter((r) => r.date <= asOf);
   const harvests = s.bins.flatMap((b) =>
-    (b.logs?.harvests ?? []).map((h) => ({
+    upToAsOf(b.logs?.harvests).map((h) => ({
       id: h.id ?? scenarioHarvestId(b.id, h.date),
       binId: b.id,
       date: h.date,
@@ -162,7 +168,7 @@ export function scenarioToInputs(
     })),
   );
   const drains = s.bins.flatMap((b) =>
-    (b.logs?.leachate ?? []).map((d) => ({
+    upToAsOf(b.logs?.leachate).map((d) => ({
       id: d.id ?? scenarioDrainId(b.id, d.date),
       binId: b.id,
       date: d.date,
@@ -170,6 +176,11 @@ export function scenarioToInputs(
     })),
   );
   const logs = s.logs ?? {};
+  // What each lot holds, so an adjustment typed by volume is weighed like its lot.
+  const leachateLots = new Set([
+    ...drains.map((d) => d.id),
+    ...(s.stock?.lots ?? []).filter((l) => l.material === "leachate").map((l) => l.id),
+  ]);
   return {
     garden: { id: opts.gardenId ?? s.garden.name, name: s.garden.name },
     settings: {
@@ -186,46 +197,65 @@ export function scenarioToInputs(
     bins: s.bins.map((b, i) => binInput(b, `bins[${i}]`)),
     beds: s.beds.map(bedInput),
     plantings: s.plantings.map(plantingInput),
-    stockLots: (s.stock?.lots ?? []).map((l) => ({
-      id: l.id,
-      binId: l.binId ?? null,
-      material: l.material ?? "castings",
-      madeOn: l.madeOn,
-      amount: si(l.amount),
-      manureFeedstock: l.manureFeedstock ?? null,
-    })),
+    stockLots: (s.stock?.lots ?? [])
+      .filter((l) => l.madeOn <= asOf)
+      .map((l) => ({
+        id: l.id,
+        binId: l.binId ?? null,
+        material: l.material ?? "castings",
+        madeOn: l.madeOn,
+        amount: si(l.amount),
+        manureFeedstock: l.manureFeedstock ?? null,
+      })),
     logs: {
       harvests,
       drains,
-      applications: (logs.applications ?? []).map((a, i) => ({
-        id: a.id ?? `application-${i + 1}`,
-        plantingId: a.plantingId,
-        date: a.date,
-        material: a.material,
-        method: a.method,
-        amount: a.material === "castings" ? castingsKg(a.amount) : si(a.amount),
-        plannedFeedingId: a.plannedFeedingId ?? null,
-        draws: (a.draws ?? []).map((d) => ({
-          lotId: d.lotId,
-          amount: a.material === "leachate" ? si(d.amount) : castingsKg(d.amount),
-        })),
-      })),
-      wormMoves: (logs.wormMoves ?? []).map((m, i) => ({
-        id: m.id ?? `worm-move-${i + 1}`,
-        date: m.date,
-        fromBinId: m.fromBinId ?? null,
-        toBinId: m.toBinId ?? null,
-        worms: m.worms,
-      })),
-      observations: (logs.observations ?? []).map((o, i) => ({
-        id: o.id ?? `observation-${i + 1}`,
-        binId: o.binId,
-        date: o.date,
-        wormCount: o.wormCount ?? null,
-        temperatureC: o.temperatureC ?? null,
-        moisturePercent: o.moisturePercent ?? null,
-        note: o.note ?? null,
-      })),
+      // Ids by position in the whole file, so a later asOf keeps the earlier ids.
+      applications: (logs.applications ?? [])
+        .map((a, i) => ({
+          id: a.id ?? `application-${i + 1}`,
+          plantingId: a.plantingId,
+          date: a.date,
+          material: a.material,
+          method: a.method,
+          amount: a.material === "castings" ? castingsKg(a.amount) : si(a.amount),
+          plannedFeedingId: a.plannedFeedingId ?? null,
+          draws: (a.draws ?? []).map((d) => ({
+            lotId: d.lotId,
+            amount: a.material === "leachate" ? si(d.amount) : castingsKg(d.amount),
+          })),
+        }))
+        .filter((a) => a.date <= asOf),
+      adjustments: (logs.adjustments ?? [])
+        .map((a, i) => ({
+          id: a.id ?? `adjustment-${i + 1}`,
+          lotId: a.lotId,
+          date: a.date,
+          amount: leachateLots.has(a.lotId) ? si(a.amount) : castingsKg(a.amount),
+          reason: a.reason,
+          note: a.note ?? null,
+        }))
+        .filter((a) => a.date <= asOf),
+      wormMoves: (logs.wormMoves ?? [])
+        .map((m, i) => ({
+          id: m.id ?? `worm-move-${i + 1}`,
+          date: m.date,
+          fromBinId: m.fromBinId ?? null,
+          toBinId: m.toBinId ?? null,
+          worms: m.worms,
+        }))
+        .filter((m) => m.date <= asOf),
+      observations: (logs.observations ?? [])
+        .map((o, i) => ({
+          id: o.id ?? `observation-${i + 1}`,
+          binId: o.binId,
+          date: o.date,
+          wormCount: o.wormCount ?? null,
+          temperatureC: o.temperatureC ?? null,
+          moisturePercent: o.moisturePercent ?? null,
+          note: o.note ?? null,
+        }))
+        .filter((o) => o.date <= asOf),
     },
     asOf,
   };

@@ -15,11 +15,26 @@ export interface QuantityValue {
   unit: UnitName;
 }
 
-export function quantitySchema(kinds: Quantity | Quantity[], maxSi?: number, allowZero = false) {
+/** `sign`: "positive" (default), "nonnegative", or "nonzero" (a change either way; the bound is on its size). */
+export function quantitySchema(
+  kinds: Quantity | Quantity[],
+  maxSi?: number,
+  allowZero = false,
+  sign: "unsigned" | "nonzero" = "unsigned",
+) {
   const allowed = Array.isArray(kinds) ? kinds : [kinds];
+  const value =
+    sign === "nonzero"
+      ? z
+          .number()
+          .finite()
+          .refine((v) => v !== 0, "must not be zero")
+      : allowZero
+        ? z.number().finite().nonnegative()
+        : z.number().finite().positive();
   return z
     .object({
-      value: allowZero ? z.number().finite().nonnegative() : z.number().finite().positive(),
+      value,
       unit: unitSchema,
     })
     .strict()
@@ -33,7 +48,7 @@ export function quantitySchema(kinds: Quantity | Quantity[], maxSi?: number, all
         });
         return;
       }
-      if (maxSi !== undefined && toSi(q.value, q.unit) > maxSi) {
+      if (maxSi !== undefined && Math.abs(toSi(q.value, q.unit)) > maxSi) {
         ctx.addIssue({
           code: "custom",
           path: ["value"],

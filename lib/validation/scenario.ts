@@ -11,6 +11,10 @@ import {
 import { quantitySchema } from "@/lib/validation/scenario-quantity";
 import { ruleSchema } from "@/lib/validation/scenario-rule";
 
+/** Default ids of logged harvests and drains, so applications and adjustments can name the lot. */
+export const scenarioHarvestId = (binId: string, date: string) => `${binId}:harvest:${date}`;
+export const scenarioDrainId = (binId: string, date: string) => `${binId}:drain:${date}`;
+
 // A whole garden in one JSON file: what `npm run plan` reads and what the app
 // exports and imports. Sizes carry their unit ({ value, unit }); the engine
 // gets SI through lib/scenario/to-inputs.ts. Every error names its JSON path.
@@ -201,9 +205,23 @@ const applicationSchema = z
   })
   .strict();
 
+/** A lot changed by hand on a date: negative takes away (spilled, given away), positive adds. */
+const adjustmentSchema = z
+  .object({
+    id: id.optional(),
+    lotId: id,
+    date: isoDateSchema,
+    amount: quantitySchema(["mass", "volume"], 100_000, false, "nonzero"),
+    // The database's stock_adjustment_reason values (db/schema/enums.ts).
+    reason: z.enum(["spilled", "given-away", "spoiled", "correction"]),
+    note: z.string().max(2000).optional(),
+  })
+  .strict();
+
 const logsSchema = z
   .object({
     applications: z.array(applicationSchema).max(100_000).optional(),
+    adjustments: z.array(adjustmentSchema).max(10_000).optional(),
     wormMoves: z
       .array(
         z
@@ -313,6 +331,21 @@ function crossCheck(s: z.infer<typeof scenarioSchema>, ctx: z.RefinementCtx): vo
           message: `no bin with id "${v}"`,
         });
     }
+  });
+  const lotIds = new Set([
+    ...(s.stock?.lots ?? []).map((l) => l.id),
+    ...s.bins.flatMap((b) => [
+      ...(b.logs?.harvests ?? []).map((h) => h.id ?? scenarioHarvestId(b.id, h.date)),
+      ...(b.logs?.leachate ?? []).map((d) => d.id ?? scenarioDrainId(b.id, d.date)),
+    ]),
+  ]);
+  (s.logs?.adjustments ?? []).forEach((a, i) => {
+    if (!lotIds.has(a.lotId))
+      ctx.addIssue({
+        code: "custom",
+        path: ["logs", "adjustments", i, "lotId"],
+        message: `no stock lot, logged harvest or drain with id "${a.lotId}"`,
+      });
   });
   (s.stock?.lots ?? []).forEach((lot, i) => {
     if (lot.binId !== undefined && !bins.has(lot.binId)) {

@@ -202,6 +202,16 @@ const inputs: GardenInputs = {
         draws: [],
       },
     ],
+    adjustments: [
+      {
+        id: "adj-spill",
+        lotId: "d-0726",
+        date: "2026-07-27",
+        amount: -0.1,
+        reason: "spilled",
+        note: "jar knocked over",
+      },
+    ],
     wormMoves: [
       { id: "split", date: "2026-06-14", fromBinId: "stack", toBinId: "tote", worms: 600 },
     ],
@@ -274,6 +284,7 @@ describe("database → GardenInputs", () => {
     expect(loaded.logs.harvests.map((h) => h.date)).toEqual(["2026-06-01"]);
     expect(loaded.logs.applications).toEqual([]);
     expect(loaded.logs.observations).toEqual([]);
+    expect(loaded.logs.adjustments).toEqual([]);
     expect(loaded.logs.wormMoves).toHaveLength(1);
     expect(loaded.stockLots).toHaveLength(1);
   });
@@ -427,9 +438,13 @@ describe("stock adjustments (spilled, given away) go through the same check", ()
         reason: "spilled",
       }),
     ).rejects.toMatchObject({ code: "conflict:stock" });
-    // Stop-gap: the adjustment is folded into the harvest's amount (44 lb = 19.95806428 kg, less 2 kg).
+    // The adjustment is its own log on its own date; the harvest keeps its weight as made
+    // (44 lb = 19.95806428 kg, NIST HB 44), so the lot is whole before 10 July.
     const loaded = await loadGardenInputs({ gardenId, asOf: inputs.asOf });
-    expect(loaded.logs.harvests.find((h) => h.id === july)!.castingsKg).toBeCloseTo(44 * LB - 2, 9);
+    expect(loaded.logs.harvests.find((h) => h.id === july)!.castingsKg).toBe(44 * LB);
+    expect(loaded.logs.adjustments.filter((a) => a.lotId === july)).toEqual([
+      expect.objectContaining({ date: "2026-07-10", amount: -2, reason: "given-away", note: null }),
+    ]);
   });
 });
 

@@ -25,7 +25,8 @@ const fixture = JSON.parse(
     "utf8",
   ),
 ) as unknown;
-const AS_OF = "2026-07-31";
+// The fixture's own settings.asOf: its whole history, spills and gifts included.
+const AS_OF = "2026-12-01";
 const PLAN = { from: "2026-05", months: 12 } as const;
 const UUID = /[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}/g;
 
@@ -63,6 +64,7 @@ function sortInputs(g: GardenInputs): GardenInputs {
       harvests: by(g.logs.harvests),
       drains: by(g.logs.drains),
       applications: by(g.logs.applications),
+      adjustments: by(g.logs.adjustments),
       wormMoves: by(g.logs.wormMoves),
       observations: by(g.logs.observations),
     },
@@ -88,8 +90,10 @@ describe("scenario file → database → GardenInputs", () => {
     if (!parsed.ok) throw new Error(JSON.stringify(parsed.issues));
     const fromFile = scenarioToInputs(parsed.scenario, { asOf: AS_OF });
     const fromDb = await loadGardenInputs({ gardenId: first.gardenId, asOf: AS_OF });
-    // The fixture's history is non-trivial: three harvests, 13 drains, 23 applications.
-    expect(fromDb.logs.harvests).toHaveLength(3);
+    // The fixture's history runs Feb–Nov 2026: the wood stack's 8 logged harvests (2 May to
+    // 29 Nov) and the plastic bin's 2 (12 Sep, 27 Oct), a spill and a gift, many applications.
+    expect(fromDb.logs.harvests).toHaveLength(10);
+    expect(fromDb.logs.adjustments.map((a) => a.reason).sort()).toEqual(["given-away", "spilled"]);
     expect(fromDb.logs.applications.length).toBeGreaterThan(20);
     expect(canonical(sortInputs(withIds(fromDb, invert(first.ids))))).toEqual(
       canonical(sortInputs(fromFile)),

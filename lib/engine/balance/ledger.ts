@@ -12,6 +12,8 @@
 //   interval, 7 CFR 205.203(c)(1)) never draws from a manure-fed lot; other
 //   claims draw manure-fed lots first, so clean stock is left for those that need it.
 // - A lot is usable from the day it is made until the day before madeDay + keepDays.
+// - Adjustments by hand (spilled, given away, found) change a lot on their own day,
+//   after that day's logged applications, and are reported per month as `adjusted`.
 import type { FeederClass, Material } from "@/lib/engine/core/types";
 
 /** Amounts below this are float dust from pro-rata splits, not stock. */
@@ -47,6 +49,13 @@ export interface LedgerLogged {
   draws: { lotId: string; amount: number }[];
 }
 
+/** A hand adjustment of one lot on one day (pool units; negative takes away). */
+export interface LedgerAdjustment {
+  lotId: string;
+  day: number;
+  amount: number;
+}
+
 export interface LedgerSpan {
   month: string;
   startDay: number;
@@ -59,6 +68,7 @@ export interface LedgerInput {
   logged: readonly LedgerLogged[];
   keepDays: Record<Pool, number>;
   spans: readonly LedgerSpan[];
+  adjustments?: readonly LedgerAdjustment[];
   /** Record which lot each claim on or after this day drew from (for explanations; off in the gap search). */
   recordDrawsFrom?: number;
   /** Return the lots as they stand at the start of this month index (to resume from there). */
@@ -70,6 +80,8 @@ export interface LedgerRow {
   pool: Pool;
   opening: number;
   supplied: number;
+  /** Hand adjustments this month (negative: taken away). opening + supplied + adjusted − allocated − agedOut = closing. */
+  adjusted: number;
   demand: number;
   allocated: number;
   agedOut: number;
@@ -291,6 +303,25 @@ export function runLedger(input: LedgerInput): LedgerResult {
     }
   }
 
+  // Adjustments bucketed like logged claims (those before the first span are already in the lots).
+  const adjustByMonth: LedgerAdjustment[][] = Array.from({ length: spans.length * 2 }, () => []);
+  for (const adj of input.adjustments ?? []) {
+    const at = byId.get(adj.lotId);
+    const m = monthIndex(adj.day);
+    if (at && m >= 0) adjustByMonth[slot(m, at.pool)]!.push(adj);
+  }
+  for (const list of adjustByMonth) list.sort((a, b) => a.day - b.day);
+  /** Applies one adjustment to a lot on the shelf that day; returns the change actually made. */
+  const adjustLot = (adj: LedgerAdjustment): number => {
+    const at = byId.get(adj.lotId)!;
+    const lot = at.shelf.lots[at.index]!;
+    if (adj.day < lot.made || adj.day >= lot.expires) return 0;
+    const change = Math.max(-lot.remaining, adj.amount);
+    lot.remaining += change;
+    if (lot.remaining < AMOUNT_EPSILON) lot.remaining = 0;
+    return change;
+  };
+
   const from = input.recordDrawsFrom;
   const record = from !== undefined;
   const result: LedgerResult = {
@@ -331,12 +362,23 @@ export function runLedger(input: LedgerInput): LedgerResult {
       const supplied = shelf.made_in(span.startDay, span.endDay);
       let demand = 0;
       let allocated = 0;
+      const adjustments = adjustByMonth[slot(m, pool)]!;
+      let adjusted = 0;
+      let nextAdjustment = 0;
+      const adjustBefore = (day: number) => {
+        for (; nextAdjustment < adjustments.length; nextAdjustment++) {
+          const adj = adjustments[nextAdjustment]!;
+          if (adj.day >= day) break;
+          adjusted += adjustLot(adj);
+        }
+      };
 
       // 1. What was done: logged applications, in date order. Those that name no lot and fall
       //    on the same day draw together (oldest first) and share the result in proportion.
       const logged = loggedByMonth[slot(m, pool)]!;
       for (let t = 0; t < logged.length;) {
         const first = input.logged[logged[t]!]!;
+        adjustBefore(first.day);
         let end = t + 1;
         if (first.draws.length === 0)
           while (
@@ -385,6 +427,9 @@ export function runLedger(input: LedgerInput): LedgerResult {
         });
         t = end;
       }
+
+      // Adjustments are logs too (on or before asOf), so they all come before planned claims.
+      adjustBefore(Infinity);
 
       // 2. What is planned: tier by tier. Within a tier, clean-only claims draw first (clean lots),
       //    then the others (manure-fed lots first); each group draws once and shares pro rata.
@@ -453,6 +498,7 @@ export function runLedger(input: LedgerInput): LedgerResult {
         pool,
         opening,
         supplied,
+        adjusted,
         demand,
         allocated,
         agedOut,

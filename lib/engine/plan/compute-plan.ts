@@ -7,7 +7,7 @@ import {
   type LedgerInput,
   type Pool,
 } from "@/lib/engine/balance/ledger";
-import { fromDayNumber } from "@/lib/engine/core/dates";
+import { fromDayNumber, toDayNumber } from "@/lib/engine/core/dates";
 import { closePlanGap } from "@/lib/engine/gap/close";
 import { buildBins } from "@/lib/engine/plan/bins";
 import { planContext } from "@/lib/engine/plan/context";
@@ -36,6 +36,11 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
     logged: demand.logged,
     keepDays: { castings: ctx.shelfLifeDays, leachate: ctx.liquidMaxAgeDays },
     spans: ctx.spans,
+    adjustments: inputs.logs.adjustments.map((a) => ({
+      lotId: a.lotId,
+      day: toDayNumber(a.date, "logs.adjustments[].date"),
+      amount: a.amount,
+    })),
   };
   // The gap search re-runs only the months from asOf on, resuming from the lots as they stood then.
   const resumeMonth = Math.max(
@@ -92,6 +97,7 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
           pool: { text: r.pool },
           opening: { unit, value: r.opening },
           supplied: { unit, value: r.supplied },
+          adjusted: { unit, value: r.adjusted },
           allocated: { unit, value: r.allocated },
           agedOut: { unit, value: r.agedOut },
           closing: { unit, value: r.closing },

@@ -204,10 +204,27 @@ export interface ObservationLog {
   note: string | null;
 }
 
+/**
+ * A lot changed by hand (spilled, given away, found, reweighed): applied on its own date,
+ * after that day's applications, so the lot's earlier days keep their stock.
+ */
+export interface StockAdjustmentLog {
+  id: string;
+  /** A stock lot, harvest log or drain log id. */
+  lotId: string;
+  date: IsoDate;
+  /** Pool units (kg castings, L leachate); negative takes away. */
+  amount: number;
+  /** spilled | given-away | spoiled | correction (the engine only reports it). */
+  reason: string;
+  note: string | null;
+}
+
 export interface GardenLogs {
   harvests: HarvestLog[];
   drains: DrainLog[];
   applications: ApplicationLog[];
+  adjustments: StockAdjustmentLog[];
   wormMoves: WormMove[];
   observations: ObservationLog[];
 }

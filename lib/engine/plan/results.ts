@@ -101,6 +101,8 @@ export interface MonthRow {
   opening: number;
   /** Harvests (castings) or collected/drained leachate. */
   supplied: number;
+  /** Hand adjustments (spills, gifts; negative takes away): opening + supplied + adjusted − allocated − aged out = closing. */
+  adjusted: number;
   demand: number;
   allocated: number;
   agedOut: number;

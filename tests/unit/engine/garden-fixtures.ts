@@ -107,7 +107,14 @@ export function garden(over: Partial<GardenInputs> = {}): GardenInputs {
     ],
     plantings: [],
     stockLots: [],
-    logs: { harvests: [], drains: [], applications: [], wormMoves: [], observations: [] },
+    logs: {
+      harvests: [],
+      drains: [],
+      applications: [],
+      adjustments: [],
+      wormMoves: [],
+      observations: [],
+    },
     asOf: "2026-04-30",
     ...over,
   };

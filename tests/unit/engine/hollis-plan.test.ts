@@ -5,23 +5,26 @@ import { scenarioToInputs } from "@/lib/scenario/to-inputs";
 import { parseScenario } from "@/lib/validation/scenario";
 import { toSi } from "@/lib/units";
 
-// The demo garden (tests/fixtures/scenarios/hollis-street-garden.json, invented),
-// replayed to asOf 2026-07-31 and planned for the twelve months after.
+// The demo garden (tests/fixtures/scenarios/hollis-street-garden.json, invented).
+// Its history runs to 2026-12-01 (settings.asOf); the first block replays it only to
+// 2026-07-31 (later logs left out, as the database adapter does) and plans the twelve
+// months after, where the July → August hand computations below hold.
 const LB = toSi(1, "lb"); // 0.45359237 kg exactly, NIST Handbook 44 Appendix C
+const JULY = "2026-07-31";
 
-function hollis() {
+function hollis(asOf?: string) {
   const parsed = parseScenario(
     JSON.parse(readFileSync("tests/fixtures/scenarios/hollis-street-garden.json", "utf8")),
   );
   if (!parsed.ok) throw new Error(JSON.stringify(parsed.issues));
-  return { scenario: parsed.scenario, inputs: scenarioToInputs(parsed.scenario) };
+  return { scenario: parsed.scenario, inputs: scenarioToInputs(parsed.scenario, { asOf }) };
 }
 
 const row = (plan: GardenPlan, month: string, pool: "castings" | "leachate") =>
   plan.rows.find((r) => r.month === month && r.pool === pool)!;
 
-describe("Hollis Street Garden — history replayed to asOf", () => {
-  const { inputs } = hollis();
+describe("Hollis Street Garden — history replayed to 31 July 2026", () => {
+  const { inputs } = hollis(JULY);
   const plan = computePlan(inputs);
 
   it("plans the twelve months after asOf", () => {
@@ -110,10 +113,44 @@ describe("Hollis Street Garden — history replayed to asOf", () => {
   });
 
   it("keeps every planned feeding's id across a recompute", () => {
-    const again = computePlan(hollis().inputs);
+    const again = computePlan(hollis(JULY).inputs);
     expect(again.feedings.map((f) => f.id)).toEqual(plan.feedings.map((f) => f.id));
     expect(again.bins.flatMap((b) => b.tasks.map((t) => t.id))).toEqual(
       plan.bins.flatMap((b) => b.tasks.map((t) => t.id)),
     );
+  });
+});
+
+describe("Hollis Street Garden — the live demo, history replayed to 1 December 2026", () => {
+  const { scenario, inputs } = hollis();
+  const plan = computePlan(inputs, { from: "2026-08", months: 12 });
+
+  it("is planned as of the fixture's own asOf, 2026-12-01", () => {
+    expect(scenario.settings.asOf).toBe("2026-12-01");
+    expect(inputs.asOf).toBe("2026-12-01");
+  });
+
+  it("has no harvest due but not logged before November: every tray up to then is in the log", () => {
+    // Logged harvests: wood stack 1 Aug, 31 Aug, 30 Sep, 30 Oct, 29 Nov (30-day cadence);
+    // plastic bin 12 Sep, 27 Oct (45-day cadence). Next due: 29 Dec and 11 Dec, after asOf.
+    const early = plan.warnings.filter(
+      (w) => w.kind === "harvest-not-logged" && (w.date ?? "") < "2026-11-01",
+    );
+    expect(early).toEqual([]);
+  });
+
+  it("opens August 2026 with the July harvest's remainder: 44 − 2.2 − 1.5 = 40.3 lb", () => {
+    // Same hand computation as the July replay: the 1 July harvest (44 lb) less the two
+    // 10 July feedings logged against it (tomato-north 2.2 lb, pepper-north 1.5 lb); the
+    // unnamed July draws take the older 1 June lot first, and the 2 May and 1 June lots
+    // age out (60 days, Harit et al. 2014) on 1 July and 31 July. The August logs (harvest
+    // 1 Aug, feedings from 10 Aug) come after the opening and do not change it.
+    expect(row(plan, "2026-08", "castings").opening).toBeCloseTo(40.3 * LB, 9);
+  });
+
+  it("replays August as logged: castings in are the 1 and 31 August harvests, 43.5 + 45 lb", () => {
+    // Two castings lots are made in August, both logged wood-stack harvests: 1 Aug 43.5 lb
+    // and 31 Aug 45 lb = 88.5 lb. The plastic bin's first tray is logged on 12 Sep.
+    expect(row(plan, "2026-08", "castings").supplied).toBeCloseTo((43.5 + 45) * LB, 9);
   });
 });

@@ -106,12 +106,14 @@ const gardenArb: fc.Arbitrary<GardenInputs> = fc
 const plan = (g: GardenInputs): GardenPlan => computePlan(g, { months: 4, suggestions: false });
 
 describe("plan invariants", () => {
-  it("conserves stock every month: opening + in − allocated − aged out = closing, never negative", () => {
+  it("conserves stock every month: opening + in + adjusted − allocated − aged out = closing, never negative", () => {
     fc.assert(
       fc.property(gardenArb, (g) => {
         const p = plan(g);
         for (const r of p.rows) {
-          expect(r.opening + r.supplied - r.allocated - r.agedOut - r.closing).toBeCloseTo(0, 6);
+          expect(
+            r.opening + r.supplied + r.adjusted - r.allocated - r.agedOut - r.closing,
+          ).toBeCloseTo(0, 6);
           expect(r.closing).toBeGreaterThanOrEqual(-TOL);
           expect(r.allocated).toBeLessThanOrEqual(r.demand + TOL);
         }

@@ -57,6 +57,26 @@ describe("scenario → GardenInputs", () => {
     ]);
   });
 
+  it("leaves out logs dated after an explicit asOf, as the database adapter does", () => {
+    const july = scenarioToInputs(hollis(), { asOf: "2026-07-31" });
+    const logs = july.logs;
+    const dates = [
+      ...logs.harvests,
+      ...logs.drains,
+      ...logs.applications,
+      ...logs.wormMoves,
+      ...logs.observations,
+    ].map((l) => l.date);
+    expect(dates.every((d) => d <= "2026-07-31")).toBe(true);
+    // The fixture's history runs to 1 December: the 1 August harvest is in the full replay only.
+    expect(logs.harvests.map((h) => h.id)).not.toContain("wood-stack:harvest:2026-08-01");
+    expect(inputs.logs.harvests.map((h) => h.id)).toContain("wood-stack:harvest:2026-08-01");
+    // Application ids count over the whole file, so the July ones keep their ids at any asOf.
+    expect(logs.applications.map((a) => a.id)).toEqual(
+      inputs.logs.applications.slice(0, logs.applications.length).map((a) => a.id),
+    );
+  });
+
   it("says what a rule amount measures, in SI", () => {
     const base = { material: "castings", method: "top-dress", recurrence: "FREQ=MONTHLY" } as const;
     // 1 cup = 236.5882365 mL; 2 oz = 56.69904625 g; ¼ in over 1 m² = 6.35 L; 2 qt per gal = 0.5 L/L.
