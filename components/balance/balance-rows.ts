@@ -6,6 +6,7 @@ export type SortKey =
   | "month"
   | "opening"
   | "supplied"
+  | "adjusted"
   | "demand"
   | "allocated"
   | "agedOut"

@@ -19,6 +19,7 @@ const columns: { key: SortKey; label: string }[] = [
   { key: "month", label: "Month" },
   { key: "opening", label: "Opening" },
   { key: "supplied", label: "Harvested / drained" },
+  { key: "adjusted", label: "Taken out or added by hand" },
   { key: "demand", label: "Wanted" },
   { key: "allocated", label: "Fed" },
   { key: "agedOut", label: "Aged out" },
@@ -131,6 +132,9 @@ export function BalanceTable({
                 </Td>
                 <Td numeric data-col="supplied">
                   {fig(row.supplied)}
+                </Td>
+                <Td numeric data-col="adjusted">
+                  {fig(row.adjusted)}
                 </Td>
                 <Td numeric data-col="demand">
                   {fig(row.demand)}

@@ -16,6 +16,8 @@ const POOLS: { pool: PoolName; title: string; kind: AmountKind; supplied: string
 const FIGURES: { key: keyof MonthRow; title: string }[] = [
   { key: "opening", title: "opening" },
   { key: "supplied", title: "" }, // named per pool
+  // Spilled, given away, spoiled (negative) or a count corrected, by hand on the stock page.
+  { key: "adjusted", title: "adjusted by hand" },
   { key: "demand", title: "demand" },
   { key: "allocated", title: "allocated" },
   { key: "agedOut", title: "aged out" },

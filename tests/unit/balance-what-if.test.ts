@@ -66,7 +66,14 @@ const inputs: GardenInputs = {
     },
   ],
   stockLots: [],
-  logs: { harvests: [], drains: [], applications: [], wormMoves: [], observations: [] },
+  logs: {
+    harvests: [],
+    drains: [],
+    applications: [],
+    wormMoves: [],
+    observations: [],
+    adjustments: [],
+  },
   asOf: "2027-02-15",
 };
 

@@ -20,6 +20,7 @@ function row(
     supplied: lb.supplied * LB,
     demand: lb.demand * LB,
     allocated: allocated * LB,
+    adjusted: 0,
     agedOut: 0,
     closing: closing * LB,
     shortfall: lb.shortfall * LB,
