@@ -121,6 +121,8 @@ class Shelf {
   lots: Live[];
   made: Float64Array;
   head = 0;
+  /** Every lot in [head, drained) has nothing left (stock is only ever taken, never put back). */
+  drained = 0;
   constructor(lots: readonly LedgerLot[], keep: number) {
     this.lots = lots
       .map((l) => ({
@@ -148,9 +150,16 @@ class Shelf {
   range(day: number, keep: number): [number, number] {
     return [this.firstMadeAfter(day - keep), this.firstMadeAfter(day)];
   }
+  /** `lo` moved past the drained lots at its start: they add nothing to a sum or a draw. */
+  skipDrained(lo: number, hi: number): number {
+    let i = Math.max(this.drained, this.head);
+    while (i < hi && this.lots[i]!.remaining === 0) i++;
+    this.drained = i;
+    return Math.max(lo, i);
+  }
   available(lo: number, hi: number, cleanOnly: boolean): number {
     let s = 0;
-    for (let i = lo; i < hi; i++) {
+    for (let i = this.skipDrained(lo, hi); i < hi; i++) {
       const l = this.lots[i]!;
       if (!cleanOnly || !l.manure) s += l.remaining;
     }
@@ -166,8 +175,9 @@ class Shelf {
   ): number {
     let left = amount;
     const passes = mode === "clean-only" ? CLEAN_ONLY : MANURE_FIRST;
+    const start = this.skipDrained(lo, hi);
     for (const wantManure of passes) {
-      for (let i = lo; i < hi && left > AMOUNT_EPSILON; i++) {
+      for (let i = start; i < hi && left > AMOUNT_EPSILON; i++) {
         const l = this.lots[i]!;
         if (l.manure !== wantManure || l.remaining <= 0) continue;
         const take = Math.min(l.remaining, left);
@@ -239,12 +249,32 @@ function drawShared(
   return out;
 }
 
-function compareClaims(a: LedgerClaim, b: LedgerClaim): number {
-  return (
-    a.priority - b.priority ||
-    FEEDER_RANK[a.feederClass] - FEEDER_RANK[b.feederClass] ||
-    a.day - b.day
-  );
+/** An empty draw list for each claim on or after `from`, undefined before it. */
+function drawLists(
+  claims: readonly { day: number }[],
+  from: number,
+): ({ lotId: string; amount: number }[] | undefined)[] {
+  const lists = new Array<{ lotId: string; amount: number }[] | undefined>(claims.length);
+  for (let i = 0; i < claims.length; i++) lists[i] = claims[i]!.day >= from ? [] : undefined;
+  return lists;
+}
+
+/**
+ * Tier order of planned claims by index: priority, feeder class, day. The keys are copied into
+ * typed arrays once per run, so the per-month sorts compare numbers, not objects.
+ */
+function tierOrder(claims: readonly LedgerClaim[]): { compare(a: number, b: number): number } {
+  const priority = new Float64Array(claims.length);
+  const rank = new Float64Array(claims.length);
+  const day = new Float64Array(claims.length);
+  claims.forEach((c, i) => {
+    priority[i] = c.priority;
+    rank[i] = FEEDER_RANK[c.feederClass];
+    day[i] = c.day;
+  });
+  return {
+    compare: (a, b) => priority[a]! - priority[b]! || rank[a]! - rank[b]! || day[a]! - day[b]!,
+  };
 }
 
 export function runLedger(input: LedgerInput): LedgerResult {
@@ -259,9 +289,17 @@ export function runLedger(input: LedgerInput): LedgerResult {
       input.keepDays.leachate,
     ),
   };
-  const byId = new Map<string, { shelf: Shelf; index: number; pool: Pool }>();
-  for (const pool of pools)
-    shelves[pool].lots.forEach((l, index) => byId.set(l.id, { shelf: shelves[pool], index, pool }));
+  // Only logs that name their lots look lots up by id; most replays name none, so build it on demand.
+  let byIdMap: Map<string, { shelf: Shelf; index: number; pool: Pool }> | undefined;
+  const byId = () => {
+    if (byIdMap) return byIdMap;
+    byIdMap = new Map();
+    for (const pool of pools)
+      shelves[pool].lots.forEach((l, index) =>
+        byIdMap!.set(l.id, { shelf: shelves[pool], index, pool }),
+      );
+    return byIdMap;
+  };
 
   const spans = input.spans;
   const monthIndex = (day: number): number => {
@@ -275,6 +313,7 @@ export function runLedger(input: LedgerInput): LedgerResult {
     }
     return lo;
   };
+  const tiers = tierOrder(input.planned);
   const slot = (m: number, pool: Pool) => m * 2 + (pool === "castings" ? 0 : 1);
   const plannedByMonth: number[][] = Array.from({ length: spans.length * 2 }, () => []);
   input.planned.forEach((c, i) => {
@@ -329,8 +368,8 @@ export function runLedger(input: LedgerInput): LedgerResult {
     plannedGot: new Float64Array(input.planned.length),
     loggedGot: new Float64Array(input.logged.length),
     manureRefused: new Float64Array(input.planned.length),
-    plannedDraws: record ? input.planned.map((c) => (c.day >= from ? [] : undefined)) : undefined,
-    loggedDraws: record ? input.logged.map((c) => (c.day >= from ? [] : undefined)) : undefined,
+    plannedDraws: record ? drawLists(input.planned, from) : undefined,
+    loggedDraws: record ? drawLists(input.logged, from) : undefined,
     agedOut: [],
     overdrawn: [],
   };
@@ -395,7 +434,7 @@ export function runLedger(input: LedgerInput): LedgerResult {
           const out = result.loggedDraws?.[i];
           let got = 0;
           for (const d of c.draws) {
-            const at = byId.get(d.lotId);
+            const at = byId().get(d.lotId);
             const lot = at && at.pool === pool ? at.shelf.lots[at.index]! : undefined;
             const take = lot ? Math.min(lot.remaining, Math.max(0, d.amount)) : 0;
             if (lot && take > 0) {
@@ -434,12 +473,11 @@ export function runLedger(input: LedgerInput): LedgerResult {
       // 2. What is planned: tier by tier. Within a tier, clean-only claims draw first (clean lots),
       //    then the others (manure-fed lots first); each group draws once and shares pro rata.
       const planned = plannedByMonth[slot(m, pool)]!;
-      planned.sort((a, b) => compareClaims(input.planned[a]!, input.planned[b]!) || a - b);
+      planned.sort((a, b) => tiers.compare(a, b) || a - b);
       for (let t = 0; t < planned.length;) {
         const head = input.planned[planned[t]!]!;
         let end = t + 1;
-        while (end < planned.length && compareClaims(head, input.planned[planned[end]!]!) === 0)
-          end++;
+        while (end < planned.length && tiers.compare(planned[t]!, planned[end]!) === 0) end++;
         const [lo, hi] = shelf.range(head.day, keep);
         const cleanGroup: number[] = [];
         const otherGroup: number[] = [];
@@ -462,11 +500,13 @@ export function runLedger(input: LedgerInput): LedgerResult {
         // Clean-only claims can have at most the clean stock; everyone shares when short.
         const shareClean = needClean > 0 ? Math.min(1, clean / needClean, all / need) : 1;
         const shareAll = Math.min(1, all / need);
-        for (const [group, groupNeed, share, mode] of [
-          [cleanGroup, needClean, shareClean, "clean-only"],
-          [otherGroup, needOther, shareAll, "manure-first"],
-        ] as const) {
-          if (group.length === 0) continue;
+        const serve = (
+          group: number[],
+          groupNeed: number,
+          share: number,
+          mode: "clean-only" | "manure-first",
+        ) => {
+          if (group.length === 0) return;
           const needs = group.map((i) => input.planned[i]!.need);
           const got = drawShared(
             shelf,
@@ -486,7 +526,9 @@ export function runLedger(input: LedgerInput): LedgerResult {
             demand += c.need;
             allocated += got[k]!;
           });
-        }
+        };
+        serve(cleanGroup, needClean, shareClean, "clean-only");
+        serve(otherGroup, needOther, shareAll, "manure-first");
         t = end;
       }
 

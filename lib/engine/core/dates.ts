@@ -25,6 +25,11 @@ export function toDayNumber(date: unknown, field = "date"): number {
   return day;
 }
 
+/** The day number of a date already checked by toDayNumber, without building a field name for it. */
+export function checkedDayNumber(date: string): number | undefined {
+  return dayCache.get(date);
+}
+
 function parseDayNumber(date: unknown, field: string): number {
   if (typeof date !== "string") {
     throw new EngineInputError(field, `must be a date written YYYY-MM-DD (got ${String(date)})`);

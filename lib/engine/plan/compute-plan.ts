@@ -110,6 +110,7 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
 
   // Feedings in the plan's months, planned and logged, with their stable ids.
   const feedings: PlannedFeeding[] = [];
+  const feedingDays: number[] = []; // day number of each feeding, for the sort below
   const blockedByPlanting = new Map<string, { dates: string[]; kg: number }>();
   demand.planned.forEach((c, i) => {
     if (!inPlan(c.day)) return;
@@ -122,6 +123,7 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
       b.kg += refused;
       blockedByPlanting.set(c.plantingId, b);
     }
+    feedingDays.push(c.day);
     feedings.push({
       id: c.id,
       plantingId: c.plantingId,
@@ -154,6 +156,7 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
     if (!inPlan(c.day)) return;
     const a = inputs.logs.applications[c.index]!;
     const got = ledger.loggedGot[i]!;
+    feedingDays.push(c.day);
     feedings.push({
       id: a.plannedFeedingId ?? feedingId(a.plantingId, a.material, a.date),
       plantingId: a.plantingId,
@@ -178,7 +181,16 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
       },
     });
   });
-  feedings.sort((a, b) => (a.date < b.date ? -1 : a.date > b.date ? 1 : a.id < b.id ? -1 : 1));
+  // By date, then id. Day numbers order exactly as the (checked, YYYY-MM-DD) dates do and compare
+  // faster; sorting indices makes the same comparisons, so the order is the same.
+  const order = feedings.map((_, i) => i);
+  order.sort((a, b) => {
+    const da = feedingDays[a]!;
+    const db = feedingDays[b]!;
+    return da < db ? -1 : da > db ? 1 : feedings[a]!.id < feedings[b]!.id ? -1 : 1;
+  });
+  const sorted = order.map((i) => feedings[i]!);
+  sorted.forEach((f, k) => (feedings[k] = f));
 
   for (const [plantingId, b] of blockedByPlanting) {
     warnings.push({

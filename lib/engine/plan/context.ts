@@ -1,7 +1,13 @@
 // Settings with their defaults filled in, the plan's months and the replay's
 // months, computed once per plan.
 import { dflt } from "@/lib/engine/core/defaults";
-import { fromDayNumber, monthSpans, toDayNumber, type MonthSpan } from "@/lib/engine/core/dates";
+import {
+  checkedDayNumber,
+  fromDayNumber,
+  monthSpans,
+  toDayNumber,
+  type MonthSpan,
+} from "@/lib/engine/core/dates";
 import { EngineInputError } from "@/lib/engine/core/errors";
 import type { GardenInputs, PlanOptions } from "@/lib/engine/plan/inputs";
 import { toSi } from "@/lib/units";
@@ -34,12 +40,14 @@ export function planContext(inputs: GardenInputs, options: PlanOptions): PlanCon
   const planStartDay = plan[0]!.startDay;
   // History starts with the earliest bin, lot or log; the walk starts on that month's first day.
   let first = Math.min(planStartDay, asOfDay + 1);
-  const see = (date: string, field: string) => (first = Math.min(first, toDayNumber(date, field)));
-  inputs.bins.forEach((b, i) => see(b.startDate, `bins[${i}].startDate`));
-  inputs.stockLots.forEach((l, i) => see(l.madeOn, `stockLots[${i}].madeOn`));
-  inputs.logs.harvests.forEach((h, i) => see(h.date, `logs.harvests[${i}].date`));
-  inputs.logs.drains.forEach((d, i) => see(d.date, `logs.drains[${i}].date`));
-  inputs.logs.applications.forEach((a, i) => see(a.date, `logs.applications[${i}].date`));
+  // Thousands of logged dates: the field name is only built for a date not yet checked.
+  const see = (date: string, list: string, i: number, key: string) =>
+    (first = Math.min(first, checkedDayNumber(date) ?? toDayNumber(date, `${list}[${i}].${key}`)));
+  inputs.bins.forEach((b, i) => see(b.startDate, "bins", i, "startDate"));
+  inputs.stockLots.forEach((l, i) => see(l.madeOn, "stockLots", i, "madeOn"));
+  inputs.logs.harvests.forEach((h, i) => see(h.date, "logs.harvests", i, "date"));
+  inputs.logs.drains.forEach((d, i) => see(d.date, "logs.drains", i, "date"));
+  inputs.logs.applications.forEach((a, i) => see(a.date, "logs.applications", i, "date"));
   const firstMonth = fromDayNumber(first).slice(0, 7);
   const lead = monthSpans(firstMonth, 1, "history")[0]!;
   const before: MonthSpan[] = [];

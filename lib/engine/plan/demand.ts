@@ -200,7 +200,7 @@ export function buildDemand(
     logged.push({ index: i, pool: POOL_OF[a.material], day, need, draws: a.draws });
   });
   // A logged application replaces the planned occurrence it fulfils.
-  const planned = planted.filter((c) => !replaced.has(c.id));
+  const planned = replaced.size === 0 ? planted : planted.filter((c) => !replaced.has(c.id));
   return { planned, logged };
 }
 
