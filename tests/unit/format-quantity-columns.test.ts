@@ -35,6 +35,7 @@ describe("balance CSV", () => {
       supplied: 0,
       demand,
       allocated: 0,
+      adjusted: 0,
       agedOut: 0,
       closing: 0,
       shortfall: demand,

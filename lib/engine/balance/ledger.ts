@@ -345,14 +345,14 @@ export function runLedger(input: LedgerInput): LedgerResult {
   // Adjustments bucketed like logged claims (those before the first span are already in the lots).
   const adjustByMonth: LedgerAdjustment[][] = Array.from({ length: spans.length * 2 }, () => []);
   for (const adj of input.adjustments ?? []) {
-    const at = byId.get(adj.lotId);
+    const at = byId().get(adj.lotId);
     const m = monthIndex(adj.day);
     if (at && m >= 0) adjustByMonth[slot(m, at.pool)]!.push(adj);
   }
   for (const list of adjustByMonth) list.sort((a, b) => a.day - b.day);
   /** Applies one adjustment to a lot on the shelf that day; returns the change actually made. */
   const adjustLot = (adj: LedgerAdjustment): number => {
-    const at = byId.get(adj.lotId)!;
+    const at = byId().get(adj.lotId)!;
     const lot = at.shelf.lots[at.index]!;
     if (adj.day < lot.made || adj.day >= lot.expires) return 0;
     const change = Math.max(-lot.remaining, adj.amount);
