@@ -43,9 +43,9 @@ export default async function BedPage({
   const views = plantings.map((p) => ({
     id: p.id,
     title: `${p.plantCount} ${p.cropName}`,
-    dates: `Planted ${formatDay(p.plantedOn, { month: "short", day: "numeric", year: "numeric" })}${
+    dates: `${p.plantedOn > today ? "To plant" : "Planted"} ${formatDay(p.plantedOn, { month: "short", day: "numeric", year: "numeric" })}${
       p.endedOn
-        ? ` · ended ${formatDay(p.endedOn)}`
+        ? ` · ${p.endedOn < today ? "ended" : "ends"} ${formatDay(p.endedOn)}`
         : p.expectedHarvestOn
           ? ` · harvest expected ${formatDay(p.expectedHarvestOn)}`
           : ""
