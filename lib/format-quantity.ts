@@ -1,3 +1,4 @@
+import type { ExplainValue } from "@/lib/engine";
 import { displayUnits, fromSi, toSi, unitLabel, type UnitName, type UnitSystem } from "@/lib/units";
 
 // The one place an SI quantity becomes words on a screen, in a CSV or in an
@@ -151,24 +152,8 @@ export function formatPoolAmount(si: number, pool: PoolKind, system: UnitSystem)
   return formatAmount(si, pool === "castings" ? "castings-mass" : "liquid", system);
 }
 
-/** Units an engine figure is tagged with (lib/engine ExplainValue). */
-export type SiTag =
-  | "kg"
-  | "L"
-  | "m"
-  | "m2"
-  | "kg/m2"
-  | "L/m2"
-  | "kg/day"
-  | "kg/week"
-  | "L/day"
-  | "L/week"
-  | "money"
-  | "money/kg"
-  | "percent"
-  | "ratio"
-  | "days"
-  | "count";
+/** Units an engine figure is tagged with: named once, in the engine's ExplainValue. */
+export type SiTag = Extract<ExplainValue, { unit: unknown }>["unit"];
 
 const countFormat = new Intl.NumberFormat("en-US", { maximumFractionDigits: 0 });
 
