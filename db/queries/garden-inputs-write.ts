@@ -16,17 +16,13 @@ import {
 } from "@/db/schema";
 import { insertApplicationWithDraws, insertDrain, insertHarvest } from "@/db/queries/lots";
 import type { FeedingRuleInput, GardenInputs, MonthDay } from "@/lib/engine";
+import type { BedSize } from "@/lib/scenario/to-scenario";
 
 // GardenInputs → a new garden's rows: the write half of the database adapter
 // (garden-inputs.ts reads them back). Ids are new uuids made here, so rows can
 // be inserted in batches without reading ids back; `ids` maps every id of the
 // inputs to its new one. Runs in the caller's transaction: on any failure the
 // caller's rollback leaves nothing behind.
-
-export interface BedSize {
-  lengthM: number;
-  widthM: number;
-}
 
 export interface InsertGardenOptions {
   inputs: GardenInputs;

@@ -1,7 +1,8 @@
 // Scenario file (units as typed) → GardenInputs (SI). Lives outside lib/engine
 // because it reads the scenario's zod types (lib/validation) and feeds the
 // engine: engine ← scenario → validation, with no cycle. The database adapter
-// (db/queries) builds the same GardenInputs from rows.
+// (db/queries) builds the same GardenInputs from rows; ./to-scenario.ts is the
+// way back, so this folder owns the format both ways.
 import { EngineInputError } from "@/lib/engine";
 import type {
   BedInput,
@@ -21,7 +22,7 @@ import {
   type ScenarioBin,
   type ScenarioPlanting,
 } from "@/lib/validation/scenario";
-import { si } from "@/lib/validation/scenario-quantity";
+import { si, siRatio } from "@/lib/validation/scenario-quantity";
 import { quantityOf, toSi, type UnitName } from "@/lib/units";
 
 type Rule = NonNullable<ScenarioPlanting["rule"]>;
@@ -74,9 +75,9 @@ function binInput(bin: ScenarioBin, field: string): BinInput {
     manureFeedstock: bin.manureFeedstock ?? false,
     startingWorms: bin.worms ?? 0,
     leachateEstimateLPerWeek: bin.leachateEstimatePerWeek ? si(bin.leachateEstimatePerWeek) : null,
-    intakeFractionPerDay: null,
-    densityCeilingKgPerM2: null,
-    retiredOn: null,
+    intakeFractionPerDay: bin.intakeFractionPerDay ?? null,
+    densityCeilingKgPerM2: bin.densityCeiling ? siRatio(bin.densityCeiling) : null,
+    retiredOn: bin.retiredOn ?? null,
   };
 }
 
@@ -107,7 +108,7 @@ export function ruleInput(rule: Rule): FeedingRuleInput {
     basis: rule.basis,
     recurrence: rule.recurrence,
     dilutionWaterParts: rule.dilutionWaterParts ?? null,
-    teaCastingsPerWater: null,
+    teaCastingsPerWater: rule.teaCastingsPerWater ?? null,
   };
   const a = rule.amount;
   if (rule.basis === "percent-of-mix")

@@ -62,3 +62,42 @@ export function quantitySchema(
 export function si(q: QuantityValue): number {
   return toSi(q.value, q.unit);
 }
+
+/**
+ * A quantity per another, as a grower types it: { "value": 2, "unit": "lb", "per": "ft2" }.
+ * The bound is on the SI ratio (e.g. kg per m²).
+ */
+export function ratioSchema(kind: Quantity, perKind: Quantity, maxSi: number) {
+  return z
+    .object({ value: z.number().finite().positive(), unit: unitSchema, per: unitSchema })
+    .strict()
+    .superRefine((q, ctx) => {
+      for (const [key, want] of [
+        ["unit", kind],
+        ["per", perKind],
+      ] as const) {
+        const got = quantityOf(q[key]);
+        if (got !== want)
+          ctx.addIssue({
+            code: "custom",
+            path: [key],
+            message: `"${q[key]}" is a ${got} unit; expected a ${want} unit`,
+          });
+      }
+    })
+    .refine(
+      (q) =>
+        quantityOf(q.unit) !== kind ||
+        quantityOf(q.per) !== perKind ||
+        toSi(q.value, q.unit) / toSi(1, q.per) <= maxSi,
+      {
+        path: ["value"],
+        message: `is larger than we accept (at most ${maxSi} ${siUnit[kind]} per ${siUnit[perKind]})`,
+      },
+    );
+}
+
+/** SI value of a checked ratio (kg per m², …). */
+export function siRatio(q: { value: number; unit: UnitName; per: UnitName }): number {
+  return toSi(q.value, q.unit) / toSi(1, q.per);
+}

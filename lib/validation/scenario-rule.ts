@@ -13,7 +13,7 @@ import { isUnitName, quantityOf, unitNames } from "@/lib/units";
 // amount given in the grower's units and the RRULE checked by the same parser
 // the engine expands it with.
 
-/** Rule amount: per plant a volume (or castings mass); per area a depth or volume `per` area; per container volume `per` volume; percent of mix a plain number. */
+/** Rule amount: per plant a volume (or castings mass); per area a depth, or a volume (castings: or mass) `per` area; per container volume a volume (castings: or mass) `per` volume; percent of mix a plain number. */
 const ruleAmountSchema = z.union([
   z.number().finite().nonnegative().max(100),
   z
@@ -33,6 +33,8 @@ export const ruleSchema = z
     amount: ruleAmountSchema,
     recurrence: recurrenceSchema,
     dilutionWaterParts: z.number().finite().nonnegative().max(1000).optional(),
+    /** Tea: this rule's recipe, volume of castings per volume of water; absent = the garden's. */
+    teaCastingsPerWater: z.number().finite().positive().max(2).optional(),
   })
   .strict()
   .superRefine((rule, ctx) => {
@@ -56,10 +58,11 @@ function checkRuleAmount(rule: z.infer<typeof ruleSchema>, ctx: z.RefinementCtx)
     return;
   }
   if (typeof a === "number") return; // SI as the engine takes it (L per plant, L per m², L per L)
+  const castings = rule.material === "castings";
   const kinds: Record<string, string[]> = {
-    "per-plant": rule.material === "castings" ? ["volume", "mass"] : ["volume"],
-    "per-area": ["length", "volume"],
-    "per-container-volume": ["volume"],
+    "per-plant": castings ? ["volume", "mass"] : ["volume"],
+    "per-area": castings ? ["length", "volume", "mass"] : ["length", "volume"],
+    "per-container-volume": castings ? ["volume", "mass"] : ["volume"],
   };
   if (!isUnitName(a.unit)) {
     return issue(`unknown unit ${JSON.stringify(a.unit)}; use one of ${unitNames.join(", ")}`, [
@@ -71,8 +74,9 @@ function checkRuleAmount(rule: z.infer<typeof ruleSchema>, ctx: z.RefinementCtx)
   if (!kinds[rule.basis]?.includes(kind)) {
     return issue(`a ${kind} unit does not fit basis ${rule.basis}`, ["amount", "unit"]);
   }
+  // A depth (per-area) and anything per plant stand alone; the rest are "per" an area or volume.
   const needsPer =
-    rule.basis === "per-container-volume" || (rule.basis === "per-area" && kind === "volume");
+    rule.basis === "per-container-volume" || (rule.basis === "per-area" && kind !== "length");
   if (needsPer) {
     const want = rule.basis === "per-area" ? "area" : "volume";
     if (!isUnitName(a.per) || quantityOf(a.per) !== want) {

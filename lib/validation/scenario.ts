@@ -8,7 +8,7 @@ import {
   nominalBoardSchema,
   unitSystemSchema,
 } from "@/lib/validation/engine-inputs";
-import { quantitySchema } from "@/lib/validation/scenario-quantity";
+import { quantitySchema, ratioSchema } from "@/lib/validation/scenario-quantity";
 import { ruleSchema } from "@/lib/validation/scenario-rule";
 
 /** Default ids of logged harvests and drains, so applications and adjustments can name the lot. */
@@ -97,6 +97,12 @@ const binSchema = z
     manureFeedstock: z.boolean().optional(),
     worms: z.number().int().nonnegative().max(10_000_000).optional(),
     leachateEstimatePerWeek: quantitySchema("volume", 1000, true).optional(),
+    /** Food eaten per day as a fraction of the worms' own mass. */
+    intakeFractionPerDay: z.number().finite().positive().max(5).optional(),
+    /** Most worm mass per area of occupied tray surface, e.g. { value: 2, unit: "lb", per: "ft2" }. */
+    densityCeiling: ratioSchema("mass", "area", 100).optional(),
+    /** Last day the bin is in use. */
+    retiredOn: isoDateSchema.optional(),
     logs: z
       .object({
         harvests: z
@@ -129,7 +135,15 @@ const binSchema = z
       .strict()
       .optional(),
   })
-  .strict();
+  .strict()
+  .superRefine((b, ctx) => {
+    if (b.retiredOn !== undefined && b.retiredOn < b.startDate)
+      ctx.addIssue({
+        code: "custom",
+        path: ["retiredOn"],
+        message: "must not be before startDate",
+      });
+  });
 
 const bedSchema = z.discriminatedUnion("kind", [
   z

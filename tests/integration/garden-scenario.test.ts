@@ -6,7 +6,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { getDb } from "@/db";
 import { loadGardenInputs } from "@/db/queries/garden-inputs";
 import { exportGardenScenario, importGardenScenario } from "@/db/queries/garden-scenario";
-import { gardens, users } from "@/db/schema";
+import { bins, feedingRules, gardens, plantings, users } from "@/db/schema";
 import { computePlan, type GardenInputs } from "@/lib/engine";
 import { scenarioToInputs } from "@/lib/scenario/to-inputs";
 import { parseScenario } from "@/lib/validation/scenario";
@@ -183,5 +183,278 @@ describe("database → export → import", () => {
     // The fixture has plantings, applications with draws, lots, bin events and a worm move.
     expect(without.every((n, i) => n < withIt[i]!)).toBe(true);
     expect(await loadGardenInputs({ gardenId: first.gardenId, asOf: AS_OF })).toBeTruthy();
+  });
+});
+
+// Every field of GardenInputs set away from its engine default, so an export
+// that drops one shows up as a difference. The values are invented; what is
+// checked is that they come back exactly, not what they mean. Fields the
+// scenario format could not carry before (a bin's intake, density ceiling and
+// retired day; a rule's own tea recipe; castings rules by mass per m² or per L
+// of container) are written straight into the rows after the import, so this
+// test builds the same garden whatever the format carries.
+const everyField = {
+  format: "castline-scenario",
+  version: 1,
+  garden: { name: "Every Field Garden" },
+  settings: {
+    unitSystem: "metric",
+    timeZone: "Europe/Berlin",
+    lastSpringFrost: "05-02",
+    firstFallFrost: "10-05",
+    asOf: "2026-06-30",
+    pricePerLb: 2.5,
+    shelfLifeDays: 45,
+    liquidMaxAgeDays: 5,
+    teaCastingsPerWater: 0.15,
+  },
+  bins: [
+    {
+      id: "north",
+      name: "North stack",
+      startDate: "2026-01-10",
+      trays: 3,
+      tray: {
+        inside: {
+          length: { value: 50, unit: "cm" },
+          width: { value: 40, unit: "cm" },
+          depth: { value: 12, unit: "cm" },
+        },
+      },
+      rotationIntervalDays: 21,
+      processingDays: 75,
+      fillFraction: 0.8,
+      bulkDensityKgPerL: 0.6,
+      dormantMonths: [1, 2],
+      manureFeedstock: true,
+      worms: 2500,
+      leachateEstimatePerWeek: { value: 0.8, unit: "L" },
+      logs: {
+        harvests: [{ date: "2026-05-20", amount: { value: 6, unit: "kg" } }],
+        leachate: [{ date: "2026-06-01", volume: { value: 0.6, unit: "L" } }],
+      },
+    },
+    {
+      id: "south",
+      startDate: "2026-02-01",
+      trays: 2,
+      tray: {
+        inside: {
+          length: { value: 45, unit: "cm" },
+          width: { value: 35, unit: "cm" },
+          depth: { value: 15, unit: "cm" },
+        },
+      },
+      worms: 1000,
+    },
+  ],
+  beds: [
+    {
+      id: "plot",
+      kind: "bed",
+      length: { value: 3, unit: "m" },
+      width: { value: 1.2, unit: "m" },
+    },
+    { id: "pot", kind: "container", indoor: true, volume: { value: 20, unit: "L" } },
+  ],
+  plantings: [
+    {
+      id: "squash",
+      bedId: "plot",
+      crop: "squash",
+      feederClass: "heavy",
+      plantCount: 4,
+      startDate: "2026-05-10",
+      harvestDate: "2026-09-01",
+      priority: 2,
+      edible: true,
+      edibleTouchesSoil: true,
+      // Turned into 0.4 kg per m² below.
+      rule: {
+        material: "castings",
+        method: "top-dress",
+        basis: "per-area",
+        amount: { value: 5, unit: "mm" },
+        recurrence: "FREQ=MONTHLY",
+      },
+    },
+    {
+      id: "herbs",
+      bedId: "pot",
+      crop: "basil",
+      feederClass: "light",
+      plantCount: 3,
+      startDate: "2026-03-01",
+      endDate: "2026-11-30",
+      priority: 1,
+      // Turned into 0.05 kg per L of container below.
+      rule: {
+        material: "castings",
+        method: "side-dress",
+        basis: "per-container-volume",
+        amount: { value: 0.05, unit: "L", per: "L" },
+        recurrence: "FREQ=WEEKLY;INTERVAL=3",
+      },
+    },
+    {
+      id: "kale",
+      bedId: "plot",
+      crop: "kale",
+      feederClass: "medium",
+      plantCount: 6,
+      startDate: "2026-04-20",
+      endDate: "2026-10-01",
+      rule: {
+        material: "tea",
+        method: "drench",
+        basis: "per-plant",
+        amount: { value: 0.3, unit: "L" },
+        recurrence: "FREQ=WEEKLY;INTERVAL=2",
+      },
+    },
+    {
+      id: "chard",
+      bedId: "plot",
+      crop: "chard",
+      feederClass: "medium",
+      plantCount: 5,
+      startDate: "2026-04-25",
+      endDate: "2026-09-15",
+      edible: false,
+      rule: {
+        material: "leachate",
+        method: "drench",
+        basis: "per-plant",
+        amount: { value: 0.2, unit: "L" },
+        recurrence: "FREQ=WEEKLY",
+        dilutionWaterParts: 4,
+      },
+    },
+  ],
+  stock: {
+    lots: [
+      {
+        id: "bought",
+        material: "castings",
+        madeOn: "2026-04-01",
+        amount: { value: 10, unit: "kg" },
+        manureFeedstock: false,
+      },
+      {
+        id: "old-tea-base",
+        binId: "north",
+        material: "castings",
+        madeOn: "2026-03-15",
+        amount: { value: 2, unit: "kg" },
+      },
+    ],
+  },
+  logs: {
+    applications: [
+      {
+        plantingId: "herbs",
+        date: "2026-06-10",
+        material: "castings",
+        method: "side-dress",
+        amount: { value: 1, unit: "kg" },
+        draws: [{ lotId: "bought", amount: { value: 1, unit: "kg" } }],
+      },
+    ],
+    adjustments: [
+      {
+        lotId: "bought",
+        date: "2026-06-12",
+        amount: { value: -0.5, unit: "kg" },
+        reason: "spilled",
+        note: "tipped over",
+      },
+    ],
+    wormMoves: [{ date: "2026-04-01", fromBinId: "north", toBinId: "south", worms: 300 }],
+    observations: [
+      {
+        binId: "south",
+        date: "2026-06-15",
+        wormCount: 1400,
+        temperatureC: 19,
+        moisturePercent: 70,
+        note: "busy",
+      },
+    ],
+  },
+};
+
+describe("database → export → import, with every field set", () => {
+  it("gives back the same GardenInputs field by field (ids aside) and the same plan", async () => {
+    const db = await getDb();
+    const asOf = everyField.settings.asOf;
+    const plan = { from: "2026-06", months: 8 } as const;
+    const first = await importGardenScenario({ scenario: everyField, ownerId });
+    const id = (old: string) => first.ids.get(old)!;
+    // Rows a screen can write that the file once could not describe.
+    await db
+      .update(bins)
+      .set({ intakeFractionPerDay: 0.3, densityCeilingKgPerM2: 12, retiredOn: "2026-10-31" })
+      .where(eq(bins.id, id("north")));
+    const ruleOf = async (planting: string) => {
+      const [row] = await db
+        .select({ ruleId: plantings.feedingRuleId })
+        .from(plantings)
+        .where(eq(plantings.id, id(planting)));
+      return row!.ruleId!;
+    };
+    await db
+      .update(feedingRules)
+      .set({ amountMeasure: "mass", amountSi: 0.4 })
+      .where(eq(feedingRules.id, await ruleOf("squash")));
+    await db
+      .update(feedingRules)
+      .set({ amountMeasure: "mass", amountSi: 0.05 })
+      .where(eq(feedingRules.id, await ruleOf("herbs")));
+    await db
+      .update(feedingRules)
+      .set({ teaCastingsPerWater: 0.2 })
+      .where(eq(feedingRules.id, await ruleOf("kale")));
+
+    const inputsA = await loadGardenInputs({ gardenId: first.gardenId, asOf });
+    // The garden really carries the values this test is about.
+    const north = inputsA.bins.find((b) => b.id === id("north"))!;
+    expect(north).toMatchObject({
+      intakeFractionPerDay: 0.3,
+      densityCeilingKgPerM2: 12,
+      retiredOn: "2026-10-31",
+      dormantMonths: [1, 2],
+      manureFeedstock: true,
+    });
+    const ruleFor = (g: GardenInputs, planting: string) =>
+      g.plantings.find((p) => p.id === planting)!.rule;
+    expect(ruleFor(inputsA, id("squash"))).toMatchObject({ measure: "mass", amount: 0.4 });
+    expect(ruleFor(inputsA, id("herbs"))).toMatchObject({ measure: "mass", amount: 0.05 });
+    expect(ruleFor(inputsA, id("kale"))).toMatchObject({ teaCastingsPerWater: 0.2 });
+    expect(ruleFor(inputsA, id("chard"))).toMatchObject({ dilutionWaterParts: 4 });
+    expect(inputsA.beds.find((b) => b.id === id("pot"))).toMatchObject({ indoor: true });
+
+    const exported = await exportGardenScenario({ gardenId: first.gardenId, asOf });
+    const parsed = parseScenario(exported);
+    expect(parsed.ok ? [] : parsed.issues).toEqual([]);
+    const second = await importGardenScenario({ scenario: exported, ownerId });
+    const inputsB = await loadGardenInputs({ gardenId: second.gardenId, asOf });
+    const back = withIds(inputsB, invert(second.ids));
+    const a = sortInputs(inputsA);
+    const b = sortInputs(back);
+    // Field by field first, so a failure names the part that changed.
+    expect(b.settings).toEqual(a.settings);
+    expect(b.bins).toEqual(a.bins);
+    expect(b.beds).toEqual(a.beds);
+    expect(b.plantings).toEqual(a.plantings);
+    expect(b.stockLots).toEqual(a.stockLots);
+    expect(canonical(b.logs)).toEqual(canonical(a.logs));
+    expect(canonical({ ...b, garden: { ...b.garden, name: "" } })).toEqual(
+      canonical({ ...a, garden: { ...a.garden, name: "" } }),
+    );
+
+    const planA = computePlan(inputsA, plan);
+    const planB = withIds(computePlan(inputsB, plan), invert(second.ids));
+    expect(planA.rows.length).toBeGreaterThan(0);
+    expect(canonical({ ...planB, garden: null })).toEqual(canonical({ ...planA, garden: null }));
   });
 });

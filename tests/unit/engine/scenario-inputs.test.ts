@@ -115,4 +115,67 @@ describe("scenario → GardenInputs", () => {
     if (!r.ok) expect(r.issues[0]!.path).toBe("plantings[0].plantCount");
     expect(inputs.plantings.every((p) => Number.isInteger(p.plantCount))).toBe(true);
   });
+
+  it("reads a bin's intake, density ceiling and retired day, and castings by mass per area or per volume", () => {
+    const s = hollis();
+    s.bins[0] = {
+      ...s.bins[0]!,
+      intakeFractionPerDay: 0.3,
+      densityCeiling: { value: 2, unit: "lb", per: "ft2" },
+      retiredOn: "2026-11-30",
+    };
+    const b = scenarioToInputs(s).bins[0]!;
+    expect(b.intakeFractionPerDay).toBe(0.3);
+    // 1 ft² = 0.09290304 m² (NIST HB 44 App. C): 2 lb/ft² = 0.90718474 / 0.09290304 kg/m².
+    expect(b.densityCeilingKgPerM2).toBeCloseTo(0.90718474 / 0.09290304, 12);
+    expect(b.retiredOn).toBe("2026-11-30");
+    const base = { material: "castings", method: "top-dress", recurrence: "FREQ=MONTHLY" } as const;
+    // 1 lb per 10 ft² = 0.45359237 / 0.9290304 kg/m²; 4 oz per gal = 0.11339809 / 3.785411784 kg/L.
+    const perArea = ruleInput({
+      ...base,
+      basis: "per-area",
+      amount: { value: 0.1, unit: "lb", per: "ft2" },
+    });
+    expect(perArea.measure).toBe("mass");
+    expect(perArea.amount).toBeCloseTo(0.45359237 / 0.9290304, 12);
+    const perVolume = ruleInput({
+      ...base,
+      basis: "per-container-volume",
+      amount: { value: 4, unit: "oz", per: "gal" },
+    });
+    expect(perVolume.measure).toBe("mass");
+    expect(perVolume.amount).toBeCloseTo(0.1133980925 / 3.785411784, 12);
+    const tea = ruleInput({
+      material: "tea",
+      method: "drench",
+      basis: "per-plant",
+      amount: { value: 1, unit: "L" },
+      recurrence: "FREQ=WEEKLY",
+      teaCastingsPerWater: 0.2,
+    });
+    expect(tea.teaCastingsPerWater).toBe(0.2);
+  });
+
+  it("refuses a mass per area without its area, and a bin retired before it started", () => {
+    const s = JSON.parse(
+      readFileSync("tests/fixtures/scenarios/hollis-street-garden.json", "utf8"),
+    );
+    s.bins[0].retiredOn = "2025-12-31";
+    s.bins[0].densityCeiling = { value: 2, unit: "lb", per: "ft" };
+    s.plantings[0].rule = {
+      material: "castings",
+      method: "top-dress",
+      basis: "per-area",
+      amount: { value: 1, unit: "lb" },
+      recurrence: "FREQ=MONTHLY",
+    };
+    const r = parseScenario(s);
+    expect(r.ok).toBe(false);
+    if (!r.ok)
+      expect(r.issues.map((i) => i.path).sort()).toEqual([
+        "bins[0].densityCeiling.per",
+        "bins[0].retiredOn",
+        "plantings[0].rule.amount.per",
+      ]);
+  });
 });
