@@ -182,14 +182,20 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
       },
     });
   });
-  // By date, then id. Day numbers order exactly as the (checked, YYYY-MM-DD) dates do and compare
-  // faster; sorting indices makes the same comparisons, so the order is the same.
-  const order = feedings.map((_, i) => i);
-  order.sort((a, b) => {
+  // By date, then id. Day numbers order exactly as the (checked, YYYY-MM-DD) dates do: the indices
+  // are bucketed by day (a counting sort), then each day's run is sorted by id. Ids are unique in
+  // practice, and then this is the one order of the comparison below; should two be equal, the
+  // whole list is sorted with that comparison instead, as before.
+  const byDateThenId = (a: number, b: number) => {
     const da = feedingDays[a]!;
     const db = feedingDays[b]!;
     return da < db ? -1 : da > db ? 1 : feedings[a]!.id < feedings[b]!.id ? -1 : 1;
-  });
+  };
+  let order = sortByDayThenId(feedingDays, feedings, ctx.planStartDay, ctx.planEndDay);
+  if (!order) {
+    order = feedings.map((_, i) => i);
+    order.sort(byDateThenId);
+  }
   const sorted = order.map((i) => feedings[i]!);
   sorted.forEach((f, k) => (feedings[k] = f));
   const sortedDays = order.map((i) => feedingDays[i]!);
@@ -410,4 +416,40 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
     });
   }
   return plan;
+}
+
+/** Indices of `feedings` by day then id, or null when two ids of one day are equal. */
+function sortByDayThenId(
+  days: readonly number[],
+  feedings: readonly { id: string }[],
+  firstDay: number,
+  lastDay: number,
+): number[] | null {
+  const width = lastDay - firstDay + 1;
+  if (!(width > 0)) return null;
+  const counts = new Int32Array(width + 1);
+  for (const d of days) {
+    if (d < firstDay || d > lastDay) return null;
+    counts[d - firstDay + 1]!++;
+  }
+  for (let d = 1; d <= width; d++) counts[d]! += counts[d - 1]!;
+  const order = new Array<number>(days.length);
+  const starts = counts.slice();
+  days.forEach((d, i) => (order[starts[d - firstDay]!++] = i));
+  let equal = false;
+  const byId = (a: number, b: number) => {
+    const ia = feedings[a]!.id;
+    const ib = feedings[b]!.id;
+    if (ia === ib) equal = true;
+    return ia < ib ? -1 : 1;
+  };
+  for (let d = 0; d < width; d++) {
+    const from = counts[d]!;
+    const to = counts[d + 1]!;
+    if (to - from < 2) continue;
+    const run = order.slice(from, to).sort(byId);
+    for (let k = 0; k < run.length; k++) order[from + k] = run[k]!;
+    if (equal) return null;
+  }
+  return order;
 }
