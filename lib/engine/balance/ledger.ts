@@ -218,8 +218,9 @@ class Shelf {
 }
 
 /**
- * One draw of `amount` for a group of claims on one day, shared in proportion to `weights`
- * (recorded per claim, split the same way, when the caller records draws).
+ * One draw of `amount` for a group of claims on one day (`group[from..from+n)`), shared in
+ * proportion to `weights[0..n)` into `out[0..n)` (recorded per claim, split the same way, when the
+ * caller records draws). Scratch arrays in and out: this runs once per feeding group.
  */
 function drawShared(
   shelf: Shelf,
@@ -228,25 +229,34 @@ function drawShared(
   amount: number,
   mode: "clean-only" | "manure-first",
   group: readonly number[],
-  weights: readonly number[],
+  from: number,
+  n: number,
+  weights: Float64Array,
+  out: Float64Array,
   records: LedgerResult["plannedDraws"],
-): number[] {
+): void {
   let total = 0;
-  for (const w of weights) total += w;
-  if (!(amount > AMOUNT_EPSILON) || !(total > 0)) return group.map(() => 0);
+  for (let k = 0; k < n; k++) total += weights[k]!;
+  if (!(amount > AMOUNT_EPSILON) || !(total > 0)) {
+    out.fill(0, 0, n);
+    return;
+  }
   const [lo, hi] = shelf.range(day, keep);
-  const wantsRecord = records !== undefined && group.some((i) => records[i] !== undefined);
-  const drawn: { lotId: string; amount: number }[] | undefined = wantsRecord ? [] : undefined;
+  let recorded = 0;
+  if (records !== undefined)
+    for (let k = 0; k < n; k++) if (records[group[from + k]!] !== undefined) recorded++;
+  // A group of one takes the whole draw (w / w is exactly 1): its list takes the records as drawn.
+  const drawn: { lotId: string; amount: number }[] | undefined =
+    recorded === 0 ? undefined : n === 1 ? records![group[from]!]! : [];
   const got = shelf.draw(lo, hi, amount, mode, drawn);
-  const out = weights.map((w) => (got * w) / total);
-  if (drawn)
-    group.forEach((i, k) => {
-      const list = records![i];
-      if (!list) return;
+  for (let k = 0; k < n; k++) out[k] = (got * weights[k]!) / total;
+  if (drawn && n > 1)
+    for (let k = 0; k < n; k++) {
+      const list = records![group[from + k]!];
+      if (!list) continue;
       const part = weights[k]! / total;
       for (const d of drawn) list.push({ lotId: d.lotId, amount: d.amount * part });
-    });
-  return out;
+    }
 }
 
 /** An empty draw list for each claim on or after `from`, undefined before it. */
@@ -374,6 +384,18 @@ export function runLedger(input: LedgerInput): LedgerResult {
     overdrawn: [],
   };
 
+  // Scratch for one feeding group at a time: amounts named, weights and shares.
+  let scratchSize = 16;
+  let named = new Float64Array(scratchSize);
+  let weights = new Float64Array(scratchSize);
+  let shares = new Float64Array(scratchSize);
+  const grow = (n: number) => {
+    scratchSize = Math.max(n, scratchSize * 2);
+    named = new Float64Array(scratchSize);
+    weights = new Float64Array(scratchSize);
+    shares = new Float64Array(scratchSize);
+  };
+
   spans.forEach((span, m) => {
     if (m === input.snapshotAtMonth) {
       result.snapshot = [];
@@ -426,10 +448,11 @@ export function runLedger(input: LedgerInput): LedgerResult {
             input.logged[logged[end]!]!.draws.length === 0
           )
             end++;
-        const group = logged.slice(t, end);
+        const n = end - t;
+        if (n > scratchSize) grow(n);
         let rest = 0;
-        const named = new Float64Array(group.length);
-        group.forEach((i, k) => {
+        for (let k = 0; k < n; k++) {
+          const i = logged[t + k]!;
           const c = input.logged[i]!;
           const out = result.loggedDraws?.[i];
           let got = 0;
@@ -448,22 +471,26 @@ export function runLedger(input: LedgerInput): LedgerResult {
           named[k] = got;
           rest += Math.max(0, c.need - got);
           demand += c.need;
-        });
-        const shared = group.map((i, k) => Math.max(0, input.logged[i]!.need - named[k]!));
-        const got = drawShared(
+        }
+        for (let k = 0; k < n; k++)
+          weights[k] = Math.max(0, input.logged[logged[t + k]!]!.need - named[k]!);
+        drawShared(
           shelf,
           keep,
           first.day,
           rest,
           "manure-first",
-          group,
-          shared,
+          logged,
+          t,
+          n,
+          weights,
+          shares,
           result.loggedDraws,
         );
-        group.forEach((i, k) => {
-          result.loggedGot[i] = named[k]! + got[k]!;
-          allocated += named[k]! + got[k]!;
-        });
+        for (let k = 0; k < n; k++) {
+          result.loggedGot[logged[t + k]!] = named[k]! + shares[k]!;
+          allocated += named[k]! + shares[k]!;
+        }
         t = end;
       }
 
@@ -506,26 +533,33 @@ export function runLedger(input: LedgerInput): LedgerResult {
           share: number,
           mode: "clean-only" | "manure-first",
         ) => {
-          if (group.length === 0) return;
-          const needs = group.map((i) => input.planned[i]!.need);
-          const got = drawShared(
+          const n = group.length;
+          if (n === 0) return;
+          if (n > scratchSize) grow(n);
+          for (let k = 0; k < n; k++) weights[k] = input.planned[group[k]!]!.need;
+          drawShared(
             shelf,
             keep,
             head.day,
             groupNeed * share,
             mode,
             group,
-            needs,
+            0,
+            n,
+            weights,
+            shares,
             result.plannedDraws,
           );
-          group.forEach((i, k) => {
+          for (let k = 0; k < n; k++) {
+            const i = group[k]!;
             const c = input.planned[i]!;
-            result.plannedGot[i] = got[k]!;
-            if (c.cleanOnly && got[k]! < c.need - AMOUNT_EPSILON)
-              result.manureRefused[i] = Math.min(c.need - got[k]!, all - clean);
+            const got = shares[k]!;
+            result.plannedGot[i] = got;
+            if (c.cleanOnly && got < c.need - AMOUNT_EPSILON)
+              result.manureRefused[i] = Math.min(c.need - got, all - clean);
             demand += c.need;
-            allocated += got[k]!;
-          });
+            allocated += got;
+          }
         };
         serve(cleanGroup, needClean, shareClean, "clean-only");
         serve(otherGroup, needOther, shareAll, "manure-first");

@@ -70,6 +70,22 @@ export function buildBins(
   warnings: PlanWarning[],
 ): BinSupply[] {
   const planSpans = ctx.spans.slice(ctx.firstPlanMonth);
+  // One pass over the lots: each bin's forecast lots in the plan, in their given order, and the
+  // plan month of every plan day looked up once.
+  const monthOfPlanDay = new Int32Array(Math.max(0, ctx.planEndDay - ctx.planStartDay + 1));
+  for (let d = ctx.planStartDay, m = 0; d <= ctx.planEndDay; d++) {
+    while (m < planSpans.length - 1 && d >= planSpans[m]!.endDay) m++;
+    monthOfPlanDay[d - ctx.planStartDay] = m;
+  }
+  const lotsOfBin = new Map<string, LotInfo[]>();
+  for (const l of lots) {
+    if (l.lot.binId === null || l.source === "stock") continue;
+    const d = l.lot.madeDay;
+    if (d < ctx.planStartDay || d > ctx.planEndDay) continue;
+    const list = lotsOfBin.get(l.lot.binId);
+    if (list) list.push(l);
+    else lotsOfBin.set(l.lot.binId, [l]);
+  }
   return infos.map((info) => {
     const bin = info.bin;
     const pop = binWorms(info, inputs, ctx.planEndDay);
@@ -80,11 +96,8 @@ export function buildBins(
       return { worms: pop.worms[i]!, kg: pop.kg[i]! };
     };
     const made = planSpans.map(() => ({ castingsKg: 0, leachateL: 0 }));
-    for (const l of lots) {
-      if (l.lot.binId !== bin.id || l.source === "stock") continue;
-      const d = l.lot.madeDay;
-      if (d < ctx.planStartDay || d > ctx.planEndDay) continue;
-      const m = planSpans.findIndex((s) => d < s.endDay);
+    for (const l of lotsOfBin.get(bin.id) ?? []) {
+      const m = monthOfPlanDay[l.lot.madeDay - ctx.planStartDay]!;
       if (l.lot.pool === "castings") made[m]!.castingsKg += l.lot.amount;
       else made[m]!.leachateL += l.lot.amount;
     }

@@ -12,6 +12,7 @@ import { closePlanGap } from "@/lib/engine/gap/close";
 import { buildBins } from "@/lib/engine/plan/bins";
 import { planContext } from "@/lib/engine/plan/context";
 import { buildDemand, feedingId } from "@/lib/engine/plan/demand";
+import type { Material } from "@/lib/engine/core/types";
 import type { GardenInputs, PlanOptions } from "@/lib/engine/plan/inputs";
 import type {
   BedDemand,
@@ -181,16 +182,23 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
       },
     });
   });
-  // By date, then id. Day numbers order exactly as the (checked, YYYY-MM-DD) dates do and compare
-  // faster; sorting indices makes the same comparisons, so the order is the same.
-  const order = feedings.map((_, i) => i);
-  order.sort((a, b) => {
+  // By date, then id. Day numbers order exactly as the (checked, YYYY-MM-DD) dates do: the indices
+  // are bucketed by day (a counting sort), then each day's run is sorted by id. Ids are unique in
+  // practice, and then this is the one order of the comparison below; should two be equal, the
+  // whole list is sorted with that comparison instead, as before.
+  const byDateThenId = (a: number, b: number) => {
     const da = feedingDays[a]!;
     const db = feedingDays[b]!;
     return da < db ? -1 : da > db ? 1 : feedings[a]!.id < feedings[b]!.id ? -1 : 1;
-  });
+  };
+  let order = sortByDayThenId(feedingDays, feedings, ctx.planStartDay, ctx.planEndDay);
+  if (!order) {
+    order = feedings.map((_, i) => i);
+    order.sort(byDateThenId);
+  }
   const sorted = order.map((i) => feedings[i]!);
   sorted.forEach((f, k) => (feedings[k] = f));
+  const sortedDays = order.map((i) => feedingDays[i]!);
 
   for (const [plantingId, b] of blockedByPlanting) {
     warnings.push({
@@ -257,46 +265,62 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
     });
   }
 
-  // Coverage per planting and month; demand per bed and month.
-  const cov = new Map<string, PlantingCoverage>();
-  const beds = new Map<
-    string,
-    Map<string, BedDemand["months"][number] & { need: number; got: number }>
-  >();
-  for (const f of feedings) {
-    const month = monthOf(f.date);
-    const key = `${f.plantingId}|${month}|${f.material}`;
-    const c = cov.get(key) ?? {
-      plantingId: f.plantingId,
-      month,
-      material: f.material,
-      need: 0,
-      allocated: 0,
-      coveragePct: 100,
-      explanation: { kind: "coverage", inputs: {} },
-    };
+  // Coverage per planting and month; demand per bed and month. The feedings are sorted by day, so a
+  // month index walks forward with them; slots are numbered (planting, month, material) and
+  // (bed, month) instead of string keys, and coverage keeps the order each slot was first seen.
+  const MATERIALS: Material[] = ["castings", "leachate", "tea"];
+  const monthCount = planSpans.length;
+  const plantingIndex = new Map(inputs.plantings.map((p, i) => [p.id, i]));
+  const covSlots = new Array<PlantingCoverage | undefined>(
+    inputs.plantings.length * monthCount * MATERIALS.length,
+  );
+  const covOrder: PlantingCoverage[] = [];
+  type BedRow = BedDemand["months"][number] & { need: number; got: number };
+  const bedIndex = new Map<string, number>();
+  const bedRows: (BedRow | undefined)[][] = [];
+  let mi = 0;
+  feedings.forEach((f, k) => {
+    const day = sortedDays[k]!;
+    while (day >= planSpans[mi]!.endDay) mi++;
+    const month = planSpans[mi]!.month;
+    const slotKey =
+      (plantingIndex.get(f.plantingId)! * monthCount + mi) * MATERIALS.length +
+      MATERIALS.indexOf(f.material);
+    let c = covSlots[slotKey];
+    if (!c) {
+      c = {
+        plantingId: f.plantingId,
+        month,
+        material: f.material,
+        need: 0,
+        allocated: 0,
+        coveragePct: 100,
+        explanation: { kind: "coverage", inputs: {} },
+      };
+      covSlots[slotKey] = c;
+      covOrder.push(c);
+    }
     c.need += f.need;
     c.allocated += f.allocated;
-    cov.set(key, c);
-    const bm = beds.get(f.bedId) ?? new Map();
-    const row = bm.get(month) ?? {
-      month,
-      castingsKg: 0,
-      leachateL: 0,
-      teaL: 0,
-      coveragePct: 100,
-      need: 0,
-      got: 0,
-    };
+    let b = bedIndex.get(f.bedId);
+    if (b === undefined) {
+      b = bedRows.length;
+      bedIndex.set(f.bedId, b);
+      bedRows.push(new Array<BedRow | undefined>(monthCount));
+    }
+    const bm = bedRows[b]!;
+    let row = bm[mi];
+    if (!row) {
+      row = { month, castingsKg: 0, leachateL: 0, teaL: 0, coveragePct: 100, need: 0, got: 0 };
+      bm[mi] = row;
+    }
     if (f.material === "castings") row.castingsKg += f.amount;
     else if (f.material === "leachate") row.leachateL += f.amount;
     else row.teaL += f.amount;
     row.need += f.need;
     row.got += f.allocated;
-    bm.set(month, row);
-    beds.set(f.bedId, bm);
-  }
-  const coverage = [...cov.values()].map((c) => {
+  });
+  const coverage = covOrder.map((c) => {
     const pct = c.need > 0 ? (100 * c.allocated) / c.need : 100;
     const unit = c.material === "leachate" ? "L" : "kg";
     return {
@@ -313,9 +337,10 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
       },
     };
   });
-  const bedDemand: BedDemand[] = [...beds.entries()].map(([bedId, bm]) => ({
+  // Months of a bed in the order first seen, which is month order (the feedings are sorted).
+  const bedDemand: BedDemand[] = [...bedIndex.entries()].map(([bedId, b]) => ({
     bedId,
-    months: [...bm.values()].map(({ need, got, ...m }) => ({
+    months: bedRows[b]!.filter((r) => r !== undefined).map(({ need, got, ...m }) => ({
       ...m,
       coveragePct: need > 0 ? (100 * got) / need : 100,
     })),
@@ -391,4 +416,40 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
     });
   }
   return plan;
+}
+
+/** Indices of `feedings` by day then id, or null when two ids of one day are equal. */
+function sortByDayThenId(
+  days: readonly number[],
+  feedings: readonly { id: string }[],
+  firstDay: number,
+  lastDay: number,
+): number[] | null {
+  const width = lastDay - firstDay + 1;
+  if (!(width > 0)) return null;
+  const counts = new Int32Array(width + 1);
+  for (const d of days) {
+    if (d < firstDay || d > lastDay) return null;
+    counts[d - firstDay + 1]!++;
+  }
+  for (let d = 1; d <= width; d++) counts[d]! += counts[d - 1]!;
+  const order = new Array<number>(days.length);
+  const starts = counts.slice();
+  days.forEach((d, i) => (order[starts[d - firstDay]!++] = i));
+  let equal = false;
+  const byId = (a: number, b: number) => {
+    const ia = feedings[a]!.id;
+    const ib = feedings[b]!.id;
+    if (ia === ib) equal = true;
+    return ia < ib ? -1 : 1;
+  };
+  for (let d = 0; d < width; d++) {
+    const from = counts[d]!;
+    const to = counts[d + 1]!;
+    if (to - from < 2) continue;
+    const run = order.slice(from, to).sort(byId);
+    for (let k = 0; k < run.length; k++) order[from + k] = run[k]!;
+    if (equal) return null;
+  }
+  return order;
 }
