@@ -14,8 +14,17 @@ import "server-only";
 // DATABASE_URL and several app instances each instance would only see its own
 // writes; the plan cache's time limit bounds how stale another instance can be.
 
-const versions = new Map<string, number>();
-const listeners = new Set<(gardenId: string) => void>();
+// On globalThis, like the database client (db/index.ts): Next bundles each route
+// handler and page separately, so a module-level Map would be one per bundle and a
+// bump made by a route handler would never reach a page's cached plan.
+const stateKey = Symbol.for("castline.gardenInputsVersions");
+type VersionState = {
+  versions: Map<string, number>;
+  listeners: Set<(gardenId: string) => void>;
+};
+const g = globalThis as typeof globalThis & { [stateKey]?: VersionState };
+const state = (g[stateKey] ??= { versions: new Map(), listeners: new Set() });
+const { versions, listeners } = state;
 
 export function gardenInputsVersion(gardenId: string): number {
   return versions.get(gardenId) ?? 0;

@@ -28,11 +28,19 @@ interface Entry<T> {
   value: Promise<T>;
 }
 
-const cache = new Map<string, Entry<unknown>>();
-
-onGardenInputsChanged((gardenId) => {
-  for (const [key, entry] of cache) if (entry.gardenId === gardenId) cache.delete(key);
-});
+// Shared by every bundle (see garden-inputs-version.ts): the Balance route, the
+// overview and the bed page read one cache, and the eviction listener is added once.
+const cacheKey = Symbol.for("castline.planCache");
+const holder = globalThis as typeof globalThis & { [cacheKey]?: Map<string, Entry<unknown>> };
+const cache: Map<string, Entry<unknown>> = holder[cacheKey] ??
+(() => {
+  const made = new Map<string, Entry<unknown>>();
+  holder[cacheKey] = made;
+  onGardenInputsChanged((gardenId) => {
+    for (const [key, entry] of made) if (entry.gardenId === gardenId) made.delete(key);
+  });
+  return made;
+})();
 
 function cached<T>(gardenId: string, key: string, make: () => Promise<T>): Promise<T> {
   const now = Date.now();

@@ -16,15 +16,19 @@ export class OutboxPage {
   }
 
   /**
-   * The invitation link written in the newest message to `email`. The page
-   * lists newest first, so `.first()` is the latest one sent.
+   * The invitation link in the newest message to `email` that carries one. The page
+   * lists newest first; a welcome mail sent at sign-up may be newer than the invitation.
    */
   async invitationLinkFor(email: string): Promise<string> {
-    const message = this.messageTo(email).first();
-    await message.waitFor();
-    const text = (await message.textContent()) ?? "";
-    const match = /https?:\/\/\S+\/invitations\/[A-Za-z0-9_-]+/.exec(text);
-    if (!match) throw new Error(`No invitation link in the outbox message to ${email}:\n${text}`);
-    return match[0];
+    const messages = this.messageTo(email);
+    await messages.first().waitFor();
+    const texts = await messages.allTextContents();
+    for (const text of texts) {
+      const match = /https?:\/\/\S+\/invitations\/[A-Za-z0-9_-]+/.exec(text);
+      if (match) return match[0];
+    }
+    throw new Error(
+      `No invitation link in the outbox messages to ${email}:\n${texts.join("\n--\n")}`,
+    );
   }
 }
