@@ -79,3 +79,15 @@ describe("dates are bounded to sensible years", () => {
     ).toBe(true);
   });
 });
+
+// Found by the write-route fuzz: a location of nothing but U+FEFF was trimmed to ""
+// (String.prototype.trim strips it, ECMA-262 WhiteSpace) and saved as "no location".
+describe("text fields refuse invisible formatting characters", () => {
+  it.each(["\ufeff".repeat(300), "a\u202egnp.exe", "x\u2066y"])("location %j", (bad) => {
+    expect(fieldsOf(updateGardenSchema.safeParse({ location: bad }))).toEqual(["location"]);
+  });
+
+  it("keeps zero-width joiners, which emoji and scripts need", () => {
+    expect(fieldsOf(updateGardenSchema.safeParse({ location: "Plot 👩\u200d🌾" }))).toEqual([]);
+  });
+});
