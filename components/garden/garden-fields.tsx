@@ -38,7 +38,7 @@ export function GardenFields({
       <div className="grid gap-4 sm:grid-cols-2">
         <Field
           label="Time zone"
-          hint="Reminders go out on this clock."
+          hint="“Today” and every date in the plan follow this clock."
           error={errors.timeZone?.message}
         >
           <Select {...register("timeZone")}>
