@@ -30,10 +30,12 @@ for (const width of [375, 1280]) {
       const { page, problems } = session;
       await page.waitForLoadState("networkidle");
       const audit = await auditPage(page);
-      expect.soft(audit.overflow, `${label}: sideways scroll (${audit.url})`).toBeLessThanOrEqual(0);
-      expect.soft(audit.smallTargets, `${label}: targets under 24 × 24 px (${audit.url})`).toEqual(
-        [],
-      );
+      expect
+        .soft(audit.overflow, `${label}: sideways scroll (${audit.url})`)
+        .toBeLessThanOrEqual(0);
+      expect
+        .soft(audit.smallTargets, `${label}: targets under 24 × 24 px (${audit.url})`)
+        .toEqual([]);
       expect.soft(problems, `${label}: console errors (${audit.url})`).toEqual([]);
       problems.length = 0;
     }
@@ -49,7 +51,20 @@ for (const width of [375, 1280]) {
       const { page } = session;
       await page.goto(`${baseUrl}/sign-in`);
       await expectTidy("sign-in");
-      await page.getByRole("link", { name: /make an account|sign up/i }).first().click();
+      // Issue 12 item 13: every page links the favicons, touch icon and manifest, and they load.
+      const links = await page
+        .locator(
+          'head link[rel="icon"], head link[rel="apple-touch-icon"], head link[rel="manifest"]',
+        )
+        .evaluateAll((els) => els.map((el) => (el as HTMLLinkElement).href));
+      expect(links.map((href) => new URL(href).pathname).sort()).toEqual(
+        ["/apple-touch-icon.png", "/favicon-32.png", "/icon.svg", "/manifest.webmanifest"].sort(),
+      );
+      for (const href of links) expect((await page.request.get(href)).status(), href).toBe(200);
+      await page
+        .getByRole("link", { name: /make an account|sign up/i })
+        .first()
+        .click();
       await page.waitForURL(/\/sign-up/);
       await expectTidy("sign-up");
       await new SignUpPage(page, baseUrl).signUp({
@@ -61,7 +76,7 @@ for (const width of [375, 1280]) {
       await expectTidy("gardens (empty)");
       const outbox = new OutboxPage(page, baseUrl);
       await outbox.open();
-      await outbox.messageTo(email).first().waitFor();
+      expect(await (await outbox.waitForMessageTo(email)).innerText()).toMatch(/account is ready/);
       await expectTidy("outbox");
     });
 

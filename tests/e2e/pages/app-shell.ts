@@ -17,11 +17,19 @@ export class AppShell {
     return this.page.getByRole("banner").getByRole("button", { name: "Menu" });
   }
 
+  /**
+   * The garden's sections as a person reaches them at this width: the tab bar on a wide
+   * screen, or the header's menu on a phone (opened here if it is closed).
+   */
+  async sectionsNav() {
+    const nav = this.page.getByRole("navigation", { name: "Garden sections" });
+    if (!(await nav.isVisible())) await this.menuButton().click();
+    await nav.waitFor();
+    return nav;
+  }
+
   /** Opens a garden section ("Beds", "Settings"…) the way a person would at this width. */
   async openSection(name: string) {
-    const nav = this.page.getByRole("navigation", { name: "Garden sections" });
-    const link = nav.getByRole("link", { name, exact: true });
-    if (!(await link.isVisible())) await this.menuButton().click();
-    await link.click();
+    await (await this.sectionsNav()).getByRole("link", { name, exact: true }).click();
   }
 }
