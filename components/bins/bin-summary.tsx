@@ -22,6 +22,7 @@ export function BinSummary({
   today,
   system,
   volumeL,
+  loggedWorms,
 }: {
   bin: BinDto;
   supply: BinSupply | undefined;
@@ -29,6 +30,8 @@ export function BinSummary({
   today: string;
   system: UnitSystem;
   volumeL: number;
+  /** Start, moves in and out, and the latest count: what a move is checked against. */
+  loggedWorms: number;
 }) {
   const next = supply?.tasks.find((t) => t.kind === "harvest-tray" && t.date >= today && !t.logged);
   const nextTray = supply?.tasks.find((t) => t.kind === "add-tray" && t.date >= today && !t.logged);
@@ -68,6 +71,8 @@ export function BinSummary({
               ? `Scaled ×${cal.factor.toFixed(2)} from ${cal.harvestsUsed} logged harvest${cal.harvestsUsed === 1 ? "" : "s"}`
               : "Not yet: log a harvest with its weight and the forecast learns from it"}
           </dd>
+          <dt className="font-semibold">Worms by the log</dt>
+          <dd data-testid="logged-worms">{loggedWorms.toLocaleString("en-US")}</dd>
           <dt className="font-semibold">Worms now</dt>
           <dd>
             {wormsNow !== undefined

@@ -9,7 +9,7 @@ import { loadBinPlan } from "@/components/bins/load-bin-plan";
 import { TrayStack } from "@/components/bins/tray-stack";
 import { trayStack } from "@/components/bins/tray-states";
 import { buttonStyles, Card, CardBody, CardHeader, CardTitle } from "@/components/ui";
-import { getBinById, listMoveTargets } from "@/db/queries/bins";
+import { getBinById, getLoggedWorms, listMoveTargets } from "@/db/queries/bins";
 import { getGardenById } from "@/db/queries/gardens";
 import { requirePageMember } from "@/lib/auth/page-session";
 import { roleAtLeast } from "@/lib/auth/roles";
@@ -44,6 +44,7 @@ export default async function BinPage({
     loadBinPlan(gardenId, garden.timeZone),
     listMoveTargets({ userId: member.user.id }),
   ]);
+  const logged = await getLoggedWorms({ gardenId, binId: bin.id, on: today });
   const supply = plan.bins.find((b) => b.binId === bin.id);
   const trays = trayStack({
     startedOn: bin.startedOn,
@@ -99,6 +100,7 @@ export default async function BinPage({
           today={today}
           system={system}
           volumeL={volumeL}
+          loggedWorms={logged.worms}
         />
       </div>
       <Card>
