@@ -112,7 +112,7 @@ describe("a helper logs a tray harvest with a photo", () => {
     await bin().openByName(hollis, FOUR_TRAY);
     await bin().open(hollis, bin().binId(), "?edit=1&trays=6");
     await bin().heading(FOUR_TRAY).waitFor();
-    expect(await session.page.getByRole("form", { name: "Bin" }).count()).toBe(0);
+    expect(await session.page.getByRole("form", { name: "Bin", exact: true }).count()).toBe(0);
     expect(await bin().editLink().count()).toBe(0);
   });
 });
@@ -207,6 +207,7 @@ describe("a grower in two gardens moves 500 worms into the other garden", () => 
       await bin.open(hollis, binId, "?edit=1&trays=6");
       await session.page.waitForURL(/\/edit\?trays=6$/);
       const form = new BinFormPage(session.page, baseUrl);
+      await form.hydrated();
       expect((await form.values()).trays).toBe("6");
       await session.page.getByText("6 trays instead of 4").waitFor();
       await bin.open(hollis, binId);

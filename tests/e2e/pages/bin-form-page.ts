@@ -9,11 +9,19 @@ export class BinFormPage {
 
   async openNew(gardenId: string, query = "") {
     await this.page.goto(`${this.baseUrl}/g/${gardenId}/bins/new${query}`);
+    await this.hydrated();
+  }
+
+  /** react-hook-form fills the inputs when it mounts: the tray count is never blank after that. */
+  async hydrated() {
     await this.form().waitFor();
+    await this.page.waitForFunction(
+      () => document.querySelector<HTMLInputElement>('input[name="trayCount"]')?.value !== "",
+    );
   }
 
   form() {
-    return this.page.getByRole("form", { name: "Bin" });
+    return this.page.getByRole("form", { name: "Bin", exact: true });
   }
 
   field(label: string | RegExp) {

@@ -42,7 +42,7 @@ export class BinPage {
 
   /** The "On" date the log form starts with: today in the garden's time zone. */
   async today(): Promise<string> {
-    return this.logForm().getByLabel("On").inputValue();
+    return this.logForm().getByLabel("On", { exact: true }).inputValue();
   }
 
   async logHarvestLb(pounds: number) {
