@@ -71,8 +71,14 @@ export function BinSummary({
               ? `Scaled ×${cal.factor.toFixed(2)} from ${cal.harvestsUsed} logged harvest${cal.harvestsUsed === 1 ? "" : "s"}`
               : "Not yet: log a harvest with its weight and the forecast learns from it"}
           </dd>
-          <dt className="font-semibold">Worms by the log</dt>
-          <dd data-testid="logged-worms">{loggedWorms.toLocaleString("en-US")}</dd>
+          <dt className="font-semibold">Worms on record</dt>
+          <dd>
+            <span data-testid="logged-worms">{loggedWorms.toLocaleString("en-US")}</span>
+            <span className="block text-sm text-soil-700">
+              Start, moves and your last count: a move may take up to this many. Log a count when
+              they have multiplied.
+            </span>
+          </dd>
           <dt className="font-semibold">Worms now</dt>
           <dd>
             {wormsNow !== undefined

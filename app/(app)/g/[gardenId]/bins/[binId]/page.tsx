@@ -70,7 +70,7 @@ export default async function BinPage({
     <>
       <div className="flex flex-wrap items-center justify-between gap-3">
         <div>
-          <Link href={`/g/${gardenId}/bins`} className="underline">
+          <Link href={`/g/${gardenId}/bins`} className="inline-flex min-h-8 items-center underline">
             Bins
           </Link>
           <h1 className="text-3xl">{bin.name}</h1>
