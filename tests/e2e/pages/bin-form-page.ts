@@ -1,10 +1,21 @@
 import type { Page } from "playwright-core";
 
+export interface NewBin {
+  name: string;
+  trays: number;
+  /** yyyy-mm-dd */
+  startedOn: string;
+  /** Outside length and width in the garden's tray-side unit (US: inches). */
+  outsideLength: number;
+  outsideWidth: number;
+  worms: number;
+}
+
 /** /g/{gardenId}/bins/new and /bins/{binId}/edit: the bin form, in the garden's units. */
 export class BinFormPage {
   constructor(
     private readonly page: Page,
-    private readonly baseUrl: string,
+    private readonly baseUrl = "",
   ) {}
 
   async openNew(gardenId: string, query = "") {
@@ -37,6 +48,19 @@ export class BinFormPage {
       startedOn: await this.field("Started").inputValue(),
       worms: await this.field(/^Starting worms/).inputValue(),
     };
+  }
+
+  async addBin(bin: NewBin) {
+    const form = this.form();
+    await form.getByLabel("Name").fill(bin.name);
+    await form.getByLabel("Trays in the full stack").fill(String(bin.trays));
+    await form.getByLabel("Started").fill(bin.startedOn);
+    await form.getByLabel("Outside size + board").check();
+    await form.getByLabel("Outside length").fill(String(bin.outsideLength));
+    await form.getByLabel("Outside width").fill(String(bin.outsideWidth));
+    await form.getByLabel("Worms given as").selectOption("count");
+    await form.getByLabel(/Starting worms/).fill(String(bin.worms));
+    await this.submitNew();
   }
 
   /** Inside size in inches (the form's US units). */
