@@ -1,5 +1,5 @@
 import "@/tests/support/integration/env";
-import { and, count, eq } from "drizzle-orm";
+import { count, eq } from "drizzle-orm";
 import { parse } from "papaparse";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import * as bedsExport from "@/app/api/gardens/[gardenId]/beds/export/route";
