@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { feedingRuleSchema } from "@/lib/validation/feeding-rule";
+import { feedingRuleSchema, recurrenceWithoutDates } from "@/lib/validation/feeding-rule";
 import { quantitySchema } from "@/lib/validation/scenario-quantity";
 
 // A planting: crop × count in a bed or container, its dates and priority, and
@@ -60,6 +60,8 @@ function checkDates(p: PlantingFields, ctx: z.RefinementCtx): void {
       path: ["expectedHarvestOn"],
       message: "The harvest date must not be before the planting date.",
     });
+  const why = p.rule ? recurrenceWithoutDates(p.rule.recurrence, p.plantedOn) : null;
+  if (why) ctx.addIssue({ code: "custom", path: ["rule", "recurrence"], message: why });
 }
 
 export const createPlantingSchema = plantingFields.superRefine(checkDates);

@@ -334,6 +334,64 @@ describe("plantings", () => {
   });
 });
 
+describe("rules that give no dates", () => {
+  const rule = (recurrence: string) => ({
+    material: "castings",
+    method: "top-dress",
+    basis: "per-plant",
+    amount: { value: 1, unit: "cup" },
+    recurrence,
+  });
+
+  // RFC 5545 §3.3.10: BYMONTHDAY days a month does not have are ignored, so June (30 days) and the 31st give no dates.
+  it("refuses BYMONTHDAY=31 with BYMONTH=6 on a new planting, naming the field and saying why", async () => {
+    const b = await makeBed(world.gardenId);
+    const res = await call(plantings.POST, {
+      url: url("plantings"),
+      params: params(),
+      cookie: grower,
+      body: {
+        bedId: b.id,
+        cropId: await starterCropId("Tomato"),
+        plantCount: 1,
+        plantedOn: "2026-05-01",
+        rule: rule("FREQ=MONTHLY;BYMONTHDAY=31;BYMONTH=6"),
+      },
+    });
+    expect(res.status).toBe(400);
+    expect(res.json.error.fields["rule.recurrence"]).toMatch(/June never has a 31st day/);
+  });
+
+  it("refuses it on a crop's default rule too", async () => {
+    const res = await call(crops.POST, {
+      url: url("crops"),
+      params: params(),
+      cookie: grower,
+      body: {
+        name: "June-31 squash",
+        feederClass: "heavy",
+        rule: rule("freq=monthly;bymonthday=31;bymonth=6"),
+      },
+    });
+    expect(res.status).toBe(400);
+    expect(res.json.error.fields["rule.recurrence"]).toMatch(/June never has a 31st day/);
+  });
+
+  it("refuses, on a planting's PATCH, a rule whose UNTIL is before the planting day", async () => {
+    const p = await makePlanting(world.gardenId);
+    const res = await call(planting.PATCH, {
+      url: url(`plantings/${p.id}`),
+      params: params({ plantingId: p.id }),
+      cookie: grower,
+      body: { rule: rule("FREQ=MONTHLY;UNTIL=20260101") },
+    });
+    expect(res.status).toBe(400);
+    expect(res.json.error.fields["rule.recurrence"]).toMatch(
+      /UNTIL 1 Jan 2026 is before the first day 1 May 2026/,
+    );
+  });
+});
+
 describe("crops", () => {
   it("lists at least 40 crops, and a garden's change to a starter crop becomes its own copy", async () => {
     const list = await call(crops.GET, { url: url("crops"), params: params(), cookie: grower });
