@@ -15,7 +15,7 @@ import {
 } from "@/lib/plantings/beds-csv-read";
 import { queryKeys } from "@/lib/query-keys";
 import { BEDS_CSV_MAX_BYTES } from "@/lib/validation/beds-csv";
-import { CsvPreview } from "./csv-preview";
+import { countOf, CsvPreview } from "./csv-preview";
 
 type Stage =
   | { step: "idle" }
@@ -135,7 +135,7 @@ export function CsvImport({
           <span id={`${inputId}-progress`}>
             {stage.step === "reading"
               ? `Checking the file… ${stage.percent} %`
-              : `Importing ${stage.read.plantings.length.toLocaleString("en-US")} plantings…`}
+              : `Importing ${countOf(stage.read.plantings.length, "planting")}…`}
           </span>
           <progress
             aria-labelledby={`${inputId}-progress`}
@@ -156,8 +156,8 @@ export function CsvImport({
       {stage.step === "done" ? (
         <Alert tone="info" urgent title="Imported">
           <p>
-            Imported {stage.beds.toLocaleString("en-US")} new beds or containers and{" "}
-            {stage.plantings.toLocaleString("en-US")} plantings.{" "}
+            Imported {countOf(stage.beds, "new bed or container", "new beds or containers")} and{" "}
+            {countOf(stage.plantings, "planting")}.{" "}
             <a href={`/g/${gardenId}/beds`} className="text-leaf-800 underline">
               See the beds
             </a>

@@ -1,20 +1,25 @@
 import { Alert, Table, TBody, Td, Th, THead, Tr } from "@/components/ui";
 import type { BedsCsvRead } from "@/lib/plantings/beds-csv-read";
 
+/** "1 planting", "2,000 plantings". */
+export function countOf(n: number, one: string, many = `${one}s`): string {
+  return `${n.toLocaleString("en-US")} ${n === 1 ? one : many}`;
+}
+
 /** Problems shown in full up to this many; the rest are counted. */
 const SHOWN = 100;
 
 /** What the file will do, row by row: its problems by row and column, or a summary of what it adds. */
 export function CsvPreview({ read, fileName }: { read: BedsCsvRead; fileName: string }) {
-  const blank = read.blankRows ? `, ${read.blankRows} blank rows skipped` : "";
-  const summary = `${fileName}: ${read.dataRows.toLocaleString("en-US")} rows${blank}.`;
+  const blank = read.blankRows ? `, ${countOf(read.blankRows, "blank row")} skipped` : "";
+  const summary = `${fileName}: ${countOf(read.dataRows, "row")}${blank}.`;
   if (read.problems.length)
     return (
       <div className="flex flex-col gap-3">
         <Alert
           tone="danger"
           urgent
-          title={`${read.problems.length.toLocaleString("en-US")} problems: fix them and choose the file again`}
+          title={`${countOf(read.problems.length, "problem")}: fix the file and choose it again`}
         >
           <p>{summary} Nothing will be imported while any row has a problem.</p>
         </Alert>
@@ -45,11 +50,12 @@ export function CsvPreview({ read, fileName }: { read: BedsCsvRead; fileName: st
   return (
     <Alert tone="info" title="Every row checks out">
       <p>
-        {summary} Adds {read.newBeds.length.toLocaleString("en-US")} new beds or containers
+        {summary} Adds{" "}
+        {countOf(read.newBeds.length, "new bed or container", "new beds or containers")}
         {newBeds.length
           ? ` (${newBeds.join(", ")}${read.newBeds.length > 10 ? ", …" : ""})`
           : ""}{" "}
-        and {read.plantings.length.toLocaleString("en-US")} plantings.
+        and {countOf(read.plantings.length, "planting")}.
       </p>
     </Alert>
   );
