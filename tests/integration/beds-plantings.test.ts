@@ -334,6 +334,67 @@ describe("plantings", () => {
   });
 });
 
+describe("expected end from the season", () => {
+  // Tomato: 75 days to harvest on the crop list (common practice, from memory). The test
+  // garden's first fall frost is 20 October (tests/support/integration/harness.ts).
+  async function plantTomato(bedId: string, plantedOn: string) {
+    const res = await call(plantings.POST, {
+      url: url("plantings"),
+      params: params(),
+      cookie: grower,
+      body: { bedId, cropId: await starterCropId("Tomato"), plantCount: 1, plantedOn },
+    });
+    expect(res.status, res.text).toBe(201);
+    return res.json.plantings[0];
+  }
+
+  it("is planted day + days to harvest when that comes before the frost", async () => {
+    const b = await makeBed(world.gardenId);
+    // 1 May + 75 days = 15 July (31 + 30 + 14 days to 15 July).
+    expect((await plantTomato(b.id, "2026-05-01")).expectedHarvestOn).toBe("2026-07-15");
+  });
+
+  it("stops at the first fall frost outdoors, not after it", async () => {
+    const b = await makeBed(world.gardenId);
+    // 15 Aug + 75 days = 29 Oct, past the 20 Oct frost.
+    expect((await plantTomato(b.id, "2026-08-15")).expectedHarvestOn).toBe("2026-10-20");
+  });
+
+  it("runs the full days to harvest indoors (no frost there)", async () => {
+    const created = await call(beds.POST, {
+      url: url("beds"),
+      params: params(),
+      cookie: grower,
+      body: {
+        name: "Sunroom pot",
+        kind: "container",
+        indoors: true,
+        volume: { value: 5, unit: "gal" },
+      },
+    });
+    expect((await plantTomato(created.json.bed.id, "2026-08-15")).expectedHarvestOn).toBe(
+      "2026-10-29",
+    );
+  });
+
+  it("stays editable: a given expected end is kept", async () => {
+    const b = await makeBed(world.gardenId);
+    const res = await call(plantings.POST, {
+      url: url("plantings"),
+      params: params(),
+      cookie: grower,
+      body: {
+        bedId: b.id,
+        cropId: await starterCropId("Tomato"),
+        plantCount: 1,
+        plantedOn: "2026-08-15",
+        expectedHarvestOn: "2026-11-05",
+      },
+    });
+    expect(res.json.plantings[0].expectedHarvestOn).toBe("2026-11-05");
+  });
+});
+
 describe("rules that give no dates", () => {
   const rule = (recurrence: string) => ({
     material: "castings",
