@@ -112,6 +112,35 @@ describe("beds CSV import in a browser", () => {
     expect(session.problems).toEqual([]);
   });
 
+  it("the Balance's rate-cut link opens the planting's rule with the amount cut, not saved", async () => {
+    await session.page
+      .getByRole("link", { name: /Imported bed 17\b/ })
+      .first()
+      .click();
+    await session.page.waitForURL(/\/beds\/[0-9a-f-]{36}$/);
+    const bedUrl = session.page.url();
+    const [, , gardenId, , bedId] = new URL(bedUrl).pathname.split("/");
+    const res = await session.page.request.get(
+      `${baseUrl}/api/gardens/${gardenId}/plantings?bedId=${bedId}&limit=1`,
+    );
+    const [planting] = (await res.json()).plantings as { id: string; cropName: string }[];
+    await session.page.goto(`${bedUrl}?planting=${planting!.id}&cut=25`);
+    const form = session.page.getByRole("form", { name: "Change feeding rule" });
+    await form.waitFor();
+    // Tomato and pepper: heavy feeders, 1 cup castings per plant monthly (PRODUCT.md, common
+    // practice); cut by 25 % → 0.75 cup.
+    expect(await form.getByRole("spinbutton", { name: "Amount" }).inputValue()).toBe("0.75");
+    expect(await form.getByRole("combobox", { name: "Amount: unit" }).inputValue()).toBe("cup");
+    await form.getByText("Amount cut by 25 %").waitFor();
+    await session.page.screenshot({ path: `${SHOTS}/rate-cut-1280.png`, fullPage: true });
+    await session.page.goto(bedUrl);
+    expect(await session.page.getByRole("form", { name: "Change feeding rule" }).count()).toBe(0);
+    await session.page
+      .getByText(/1 cup castings per plant/)
+      .first()
+      .waitFor();
+  });
+
   it("fits a 375 px phone, and a viewer gets no import control", async () => {
     await session.page.setViewportSize({ width: 375, height: 800 });
     await session.page.goto(`${gardenUrl}/beds/import`);

@@ -14,6 +14,7 @@ import { listPlantings } from "@/db/queries/plantings";
 import { requirePageMember } from "@/lib/auth/page-session";
 import { roleAtLeast } from "@/lib/auth/roles";
 import { formatDay } from "@/lib/format";
+import { rateCutFromSearch, ruleFormValues } from "@/lib/plantings/rule-form-values";
 import { describeRule } from "@/lib/plantings/rule-words";
 import { bedIdParamsSchema } from "@/lib/validation/bed";
 
@@ -21,8 +22,10 @@ export const metadata: Metadata = { title: "Bed" };
 
 export default async function BedPage({
   params,
+  searchParams,
 }: {
   params: Promise<{ gardenId: string; bedId: string }>;
+  searchParams: Promise<Record<string, string | string[] | undefined>>;
 }) {
   const parsed = bedIdParamsSchema.safeParse(await params);
   if (!parsed.success) notFound();
@@ -40,6 +43,13 @@ export default async function BedPage({
     getBedDemand({ gardenId, bedId }),
   ]);
   const canEdit = roleAtLeast(member.role, "grower");
+  // The Balance's rate cut (RULES.md URL contract): ?planting={id}&cut={percent}.
+  const cut = canEdit
+    ? rateCutFromSearch(
+        await searchParams,
+        plantings.map((p) => p.id),
+      )
+    : null;
   const views = plantings.map((p) => ({
     id: p.id,
     title: `${p.plantCount} ${p.cropName}`,
@@ -54,6 +64,14 @@ export default async function BedPage({
     plantedOn: p.plantedOn,
     ruleWords: describeRule(p.effectiveRule, system),
     ruleSource: p.ruleSource,
+    ruleValues: ruleFormValues(p.effectiveRule, system),
+    rateCut:
+      cut?.plantingId === p.id
+        ? {
+            percent: cut.cutPercent,
+            values: ruleFormValues(p.effectiveRule, system, cut.cutPercent),
+          }
+        : undefined,
   }));
 
   return (
@@ -85,6 +103,7 @@ export default async function BedPage({
                 key={v.id}
                 gardenId={gardenId}
                 planting={v}
+                rateCut={v.rateCut}
                 canEdit={canEdit}
                 today={today}
                 unitSystem={system}
