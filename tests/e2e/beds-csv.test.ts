@@ -86,7 +86,9 @@ describe("beds CSV import in a browser", () => {
     await problems.waitFor();
     const cells = await problems.getByRole("row").nth(1).getByRole("cell").allTextContents();
     expect(cells.slice(0, 2)).toEqual(["1501", "Crop"]);
-    expect(await session.page.getByRole("button", { name: /^Import/ }).count()).toBe(0);
+    expect(
+      await session.page.getByRole("button", { name: /^Import [\d,]+ beds? and/ }).count(),
+    ).toBe(0);
     await session.page.screenshot({ path: `${SHOTS}/import-bad-row-1280.png`, fullPage: true });
   });
 
@@ -157,6 +159,26 @@ describe("beds CSV import in a browser", () => {
     await session.page.screenshot({ path: `${SHOTS}/import-problems-375.png`, fullPage: true });
     await session.page.goto(`${gardenUrl}/beds`);
     await session.page.screenshot({ path: `${SHOTS}/beds-owner-375.png`, fullPage: false });
+    // Edit a bed's size and notes on its page: 8 × 4 ft becomes 10 × 4 ft = 40 ft².
+    await session.page
+      .getByRole("link", { name: /Imported bed 18\b/ })
+      .first()
+      .click();
+    await session.page.waitForURL(/\/beds\/[0-9a-f-]{36}$/);
+    const bedUrl = session.page.url();
+    await session.page.getByRole("button", { name: "Edit bed" }).click();
+    const edit = session.page.getByRole("form", { name: "Edit Imported bed 18" });
+    expect(await edit.locator('input[name="length.value"]').inputValue()).toBe("8");
+    await edit.locator('input[name="length.value"]').fill("10");
+    await edit.locator('textarea[name="notes"]').fill("Moved the north board out");
+    await session.page.screenshot({ path: `${SHOTS}/bed-edit-375.png`, fullPage: false });
+    await edit.getByRole("button", { name: "Save changes" }).click();
+    await session.page.getByText(/10 × 4 ft · 40 ft²/).waitFor();
+    await session.page.getByText("Moved the north board out").waitFor();
+    await session.page.getByRole("button", { name: "Remove bed…" }).click();
+    await session.page.getByRole("dialog", { name: "Remove Imported bed 18?" }).waitFor();
+    await session.page.screenshot({ path: `${SHOTS}/bed-remove-confirm-375.png`, fullPage: false });
+    await session.page.getByRole("button", { name: "Cancel" }).click();
     const viewerSession = await openBrowser({ width: 375, height: 800 });
     try {
       await signInTo(viewerSession, viewer);
@@ -174,6 +196,12 @@ describe("beds CSV import in a browser", () => {
         path: `${SHOTS}/beds-viewer-375.png`,
         fullPage: false,
       });
+      await viewerSession.page.goto(bedUrl);
+      await viewerSession.page.getByRole("heading", { name: "Imported bed 18" }).waitFor();
+      expect(await viewerSession.page.getByRole("button", { name: "Edit bed" }).count()).toBe(0);
+      expect(
+        await viewerSession.page.getByRole("button", { name: /Remove bed|Archive bed/ }).count(),
+      ).toBe(0);
       await viewerSession.page.goto(`${gardenUrl}/beds/import`);
       // requirePageMember: below the needed role → back to the garden's overview.
       await viewerSession.page.waitForURL(/\/g\/[0-9a-f-]{36}$/);

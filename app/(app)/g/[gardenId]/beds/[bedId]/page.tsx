@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { BedActions } from "@/components/beds/bed-actions";
 import { BedDemandTable } from "@/components/beds/bed-demand-table";
 import { bedSize } from "@/components/beds/bed-list";
 import { PlantingItem } from "@/components/plantings/planting-item";
@@ -8,7 +9,7 @@ import { QuickPlantForm } from "@/components/plantings/quick-plant-form";
 import { Card, CardBody, CardHeader, CardTitle, EmptyState } from "@/components/ui";
 import { getBedDemand } from "@/db/queries/bed-demand";
 import { todayIn } from "@/lib/garden-today";
-import { getBedById } from "@/db/queries/beds";
+import { bedHasLoggedFeedings, getBedById } from "@/db/queries/beds";
 import { getGardenById } from "@/db/queries/gardens";
 import { listPlantings } from "@/db/queries/plantings";
 import { requirePageMember } from "@/lib/auth/page-session";
@@ -38,9 +39,10 @@ export default async function BedPage({
   if (!garden || !bed) notFound();
   const system = garden.unitSystem;
   const today = todayIn(garden.timeZone);
-  const [{ plantings }, demand] = await Promise.all([
+  const [{ plantings }, demand, hasLog] = await Promise.all([
     listPlantings({ gardenId, query: { bedId, limit: 200, offset: 0 } }),
     getBedDemand({ gardenId, bedId }),
+    bedHasLoggedFeedings({ gardenId, bedId }),
   ]);
   const canEdit = roleAtLeast(member.role, "grower");
   // The Balance's rate cut (RULES.md URL contract): ?planting={id}&cut={percent}.
@@ -92,6 +94,9 @@ export default async function BedPage({
         </p>
         {bed.notes ? <p>{bed.notes}</p> : null}
       </header>
+      {canEdit && !bed.archivedOn ? (
+        <BedActions gardenId={gardenId} bed={bed} unitSystem={system} hasLog={hasLog} />
+      ) : null}
       <section aria-labelledby="plantings-title" className="flex flex-col gap-3">
         <h2 id="plantings-title" className="text-2xl">
           Plantings
