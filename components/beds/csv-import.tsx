@@ -167,18 +167,17 @@ export function CsvImport({
       {stage.step === "read" || stage.step === "importing" ? (
         <>
           <CsvPreview read={stage.read} fileName={stage.fileName} />
-          <Button
-            onClick={onImport}
-            pending={stage.step === "importing"}
-            disabled={
-              stage.read.problems.length > 0 ||
-              (!stage.read.plantings.length && !stage.read.newBeds.length)
-            }
-            className="self-start"
-          >
-            Import {stage.read.newBeds.length.toLocaleString("en-US")} beds and{" "}
-            {stage.read.plantings.length.toLocaleString("en-US")} plantings
-          </Button>
+          {stage.read.problems.length ? null : (
+            <Button
+              onClick={onImport}
+              pending={stage.step === "importing"}
+              disabled={!stage.read.plantings.length && !stage.read.newBeds.length}
+              className="self-start"
+            >
+              Import {countOf(stage.read.newBeds.length, "bed")} and{" "}
+              {countOf(stage.read.plantings.length, "planting")}
+            </Button>
+          )}
         </>
       ) : null}
       <p className="text-sm">

@@ -124,7 +124,7 @@ export function PlantingItem({
       {editing ? (
         <RuleEditor
           gardenId={gardenId}
-          plantingId={planting.id}
+          saveUrl={url}
           plantedOn={planting.plantedOn}
           today={today}
           unitSystem={unitSystem}

@@ -31,7 +31,7 @@ const AMOUNT_UNITS: Record<
  */
 export function RuleEditor({
   gardenId,
-  plantingId,
+  saveUrl,
   plantedOn,
   today,
   unitSystem,
@@ -40,7 +40,9 @@ export function RuleEditor({
   onDone,
 }: {
   gardenId: string;
-  plantingId: string;
+  /** The planting or crop the rule belongs to: PATCHed with { rule }. */
+  saveUrl: string;
+  /** First day the preview's next dates count from. */
   plantedOn: string;
   today: string;
   unitSystem: UnitSystem;
@@ -86,7 +88,7 @@ export function RuleEditor({
     const v = values as { amount: { per?: string } };
     if (units.per) v.amount.per = us ? units.per.us : units.per.metric;
     else delete v.amount.per;
-    await apiFetch(`/api/gardens/${gardenId}/plantings/${plantingId}`, {
+    await apiFetch(saveUrl, {
       method: "PATCH",
       body: { rule: values },
     });

@@ -129,12 +129,12 @@ describe("beds CSV import in a browser", () => {
     await session.page.goto(`${bedUrl}?planting=${planting!.id}&cut=25`);
     const form = session.page.getByRole("form", { name: "Change feeding rule" });
     await form.waitFor();
+    await session.page.screenshot({ path: `${SHOTS}/rate-cut-1280.png`, fullPage: true });
     // Tomato and pepper: heavy feeders, 1 cup castings per plant monthly (PRODUCT.md, common
     // practice); cut by 25 % → 0.75 cup.
     expect(await form.getByRole("spinbutton", { name: "Amount" }).inputValue()).toBe("0.75");
     expect(await form.getByRole("combobox", { name: "Amount: unit" }).inputValue()).toBe("cup");
     await form.getByText("Amount cut by 25 %").waitFor();
-    await session.page.screenshot({ path: `${SHOTS}/rate-cut-1280.png`, fullPage: true });
     await session.page.goto(bedUrl);
     expect(await session.page.getByRole("form", { name: "Change feeding rule" }).count()).toBe(0);
     await session.page
@@ -160,6 +160,7 @@ describe("beds CSV import in a browser", () => {
     await session.page.goto(`${gardenUrl}/beds`);
     await session.page.screenshot({ path: `${SHOTS}/beds-owner-375.png`, fullPage: false });
     // Edit a bed's size and notes on its page: 8 × 4 ft becomes 10 × 4 ft = 40 ft².
+    await session.page.goto(`${gardenUrl}/beds?q=Imported+bed+18`);
     await session.page
       .getByRole("link", { name: /Imported bed 18\b/ })
       .first()
@@ -179,6 +180,17 @@ describe("beds CSV import in a browser", () => {
     await session.page.getByRole("dialog", { name: "Remove Imported bed 18?" }).waitFor();
     await session.page.screenshot({ path: `${SHOTS}/bed-remove-confirm-375.png`, fullPage: false });
     await session.page.getByRole("button", { name: "Cancel" }).click();
+    // A grower's own crop, then a change to its default rule for this garden.
+    await session.page.goto(`${gardenUrl}/crops`);
+    const add = session.page.getByRole("form", { name: "Add a crop" });
+    await add.getByLabel("Name").fill("Ground cherry");
+    await add.getByRole("button", { name: "Add crop" }).click();
+    const item = session.page.getByRole("listitem").filter({ hasText: "Ground cherry" });
+    await item.getByRole("button", { name: "Change default feeding" }).click();
+    await item.getByRole("spinbutton", { name: "Amount" }).fill("0.25");
+    await session.page.screenshot({ path: `${SHOTS}/crops-owner-375.png` });
+    await item.getByRole("button", { name: "Save rule" }).click();
+    await item.getByText(/this garden's rule/).waitFor();
     const viewerSession = await openBrowser({ width: 375, height: 800 });
     try {
       await signInTo(viewerSession, viewer);
@@ -202,6 +214,13 @@ describe("beds CSV import in a browser", () => {
       expect(
         await viewerSession.page.getByRole("button", { name: /Remove bed|Archive bed/ }).count(),
       ).toBe(0);
+      await viewerSession.page.goto(`${gardenUrl}/crops`);
+      await viewerSession.page.getByRole("heading", { name: "Crops", exact: true }).waitFor();
+      expect(await viewerSession.page.getByRole("form", { name: "Add a crop" }).count()).toBe(0);
+      expect(
+        await viewerSession.page.getByRole("button", { name: "Change default feeding" }).count(),
+      ).toBe(0);
+      await viewerSession.page.screenshot({ path: `${SHOTS}/crops-viewer-375.png` });
       await viewerSession.page.goto(`${gardenUrl}/beds/import`);
       // requirePageMember: below the needed role → back to the garden's overview.
       await viewerSession.page.waitForURL(/\/g\/[0-9a-f-]{36}$/);

@@ -72,6 +72,12 @@ export default async function BedsPage({
               Import from CSV
             </Link>
           ) : null}
+          <Link
+            href={`/g/${gardenId}/crops`}
+            className={buttonStyles({ variant: "ghost", size: "sm" })}
+          >
+            Crops
+          </Link>
           {total > 0 ? (
             <a
               href={`/api/gardens/${gardenId}/beds/export`}
