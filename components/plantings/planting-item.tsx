@@ -18,8 +18,10 @@ export interface PlantingView {
   plantedOn: string;
   ruleWords: string;
   ruleSource: "planting" | "crop" | "default";
-  /** The rule in use, as the rule editor's fields. */
+  /** The first rule in use, as the rule editor's fields. */
   ruleValues: RuleFormValues;
+  /** How many rules feed it (the editor edits one and replaces them all with it). */
+  ruleCount: number;
 }
 
 const SOURCE_WORDS = {
@@ -129,11 +131,16 @@ export function PlantingItem({
           today={today}
           unitSystem={unitSystem}
           initial={rateCut?.values ?? planting.ruleValues}
-          note={
+          note={[
             rateCut
               ? `Amount cut by ${rateCut.percent} %, as the Balance suggests. Not saved until you press Save rule.`
-              : undefined
-          }
+              : "",
+            planting.ruleCount > 1
+              ? `It is fed by ${planting.ruleCount} rules; this form shows the first, and saving replaces all of them with it.`
+              : "",
+          ]
+            .filter(Boolean)
+            .join(" ")}
           onDone={() => setEditing(false)}
         />
       ) : null}

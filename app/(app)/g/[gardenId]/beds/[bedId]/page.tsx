@@ -64,9 +64,10 @@ export default async function BedPage({
     } · ${p.feederClass} feeder`,
     priority: p.priority,
     plantedOn: p.plantedOn,
-    ruleWords: describeRule(p.effectiveRule, system),
+    ruleWords: p.effectiveRules.map((r) => describeRule(r, system)).join("; "),
     ruleSource: p.ruleSource,
     ruleValues: ruleFormValues(p.effectiveRule, system),
+    ruleCount: p.effectiveRules.length,
     rateCut:
       cut?.plantingId === p.id
         ? {
