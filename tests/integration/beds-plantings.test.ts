@@ -423,6 +423,26 @@ describe("rules that give no dates", () => {
     expect(res.json.error.fields["rule.recurrence"]).toMatch(/June never has a 31st day/);
   });
 
+  it("names which of several rules gives no dates (rules[1]: an UNTIL before the planting day)", async () => {
+    const b = await makeBed(world.gardenId);
+    const res = await call(plantings.POST, {
+      url: url("plantings"),
+      params: params(),
+      cookie: grower,
+      body: {
+        bedId: b.id,
+        cropId: await starterCropId("Tomato"),
+        plantCount: 1,
+        plantedOn: "2026-05-01",
+        rules: [rule("FREQ=MONTHLY"), rule("FREQ=WEEKLY;INTERVAL=2;UNTIL=20260401")],
+      },
+    });
+    expect(res.status).toBe(400);
+    expect(res.json.error.fields["rules.1.recurrence"]).toMatch(
+      /UNTIL 1 Apr 2026 is before the first day/,
+    );
+  });
+
   it("refuses it on a crop's default rule too", async () => {
     const res = await call(crops.POST, {
       url: url("crops"),
