@@ -191,6 +191,12 @@ describe("beds CSV import in a browser", () => {
     await session.page.screenshot({ path: `${SHOTS}/crops-owner-375.png` });
     await item.getByRole("button", { name: "Save rule" }).click();
     await item.getByText(/this garden's rule/).waitFor();
+    await session.page.setViewportSize({ width: 1280, height: 900 });
+    await session.page.goto(`${gardenUrl}/crops`);
+    await session.page.screenshot({ path: `${SHOTS}/crops-owner-1280.png` });
+    await session.page.goto(`${gardenUrl}/beds`);
+    await session.page.screenshot({ path: `${SHOTS}/beds-owner-1280.png` });
+    await session.page.setViewportSize({ width: 375, height: 800 });
     const viewerSession = await openBrowser({ width: 375, height: 800 });
     try {
       await signInTo(viewerSession, viewer);
@@ -221,6 +227,14 @@ describe("beds CSV import in a browser", () => {
         await viewerSession.page.getByRole("button", { name: "Change default feeding" }).count(),
       ).toBe(0);
       await viewerSession.page.screenshot({ path: `${SHOTS}/crops-viewer-375.png` });
+      await viewerSession.page.setViewportSize({ width: 1280, height: 900 });
+      await viewerSession.page.screenshot({ path: `${SHOTS}/crops-viewer-1280.png` });
+      await viewerSession.page.goto(bedUrl);
+      await viewerSession.page.getByRole("heading", { name: "Imported bed 18" }).waitFor();
+      await viewerSession.page.screenshot({ path: `${SHOTS}/bed-viewer-1280.png` });
+      await viewerSession.page.goto(`${gardenUrl}/beds`);
+      await viewerSession.page.screenshot({ path: `${SHOTS}/beds-viewer-1280.png` });
+      await viewerSession.page.setViewportSize({ width: 375, height: 800 });
       await viewerSession.page.goto(`${gardenUrl}/beds/import`);
       // requirePageMember: below the needed role → back to the garden's overview.
       await viewerSession.page.waitForURL(/\/g\/[0-9a-f-]{36}$/);
