@@ -32,7 +32,7 @@ export function InviteForm({ gardenId }: { gardenId: string }) {
     } catch (error) {
       if (error instanceof ApiError && error.code === "conflict:already_invited") {
         form.setError("email", { message: error.fields?.email ?? error.message });
-        setAlreadyInvited(values.email);
+        setAlreadyInvited(values.email.trim().toLowerCase());
         return;
       }
       throw error;

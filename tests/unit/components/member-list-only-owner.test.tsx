@@ -8,7 +8,12 @@ vi.mock("next/navigation", () => ({ useRouter: () => ({ replace: vi.fn(), refres
 
 // Issue 12 item 5: the server refuses to leave a garden without an owner (409
 // conflict:last_owner); the list must not offer what will be refused.
-const me = { userId: "u-owner", name: "Ada Owner", email: "ada@example.test", role: "owner" as const };
+const me = {
+  userId: "u-owner",
+  name: "Ada Owner",
+  email: "ada@example.test",
+  role: "owner" as const,
+};
 const grower = {
   userId: "u-grower",
   name: "Ben Grower",

@@ -145,7 +145,9 @@ describe("ConfirmDialog typed confirmation (issue 12 item 7)", () => {
     await user.type(input, "Bos");
     expect(button).toBeDisabled();
     // The hint is tied to the field (aria-describedby) and names the difference.
-    expect(input).toHaveAccessibleDescription("Character 3 differs: the name has “'”, you typed “s”.");
+    expect(input).toHaveAccessibleDescription(
+      "Character 3 differs: the name has “'”, you typed “s”.",
+    );
     await user.clear(input);
     // U+2019, what a phone keyboard types for an apostrophe.
     await user.type(input, "Bo\u2019s Plot");
