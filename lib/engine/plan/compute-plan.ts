@@ -51,7 +51,8 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
   const ledger = runLedger({
     ...ledgerInput,
     recordDrawsFrom: ctx.planStartDay,
-    snapshotAtMonth: resumeMonth,
+    // Only the gap search resumes from the snapshot.
+    snapshotAtMonth: options.suggestions !== false ? resumeMonth : undefined,
   });
   const planSpans = ctx.spans.slice(ctx.firstPlanMonth);
   const inPlan = (day: number) => day >= ctx.planStartDay && day <= ctx.planEndDay;
