@@ -172,26 +172,42 @@ class Shelf {
     }
     return s;
   }
-  /** Draws oldest first; `manureFirst` takes manure-fed lots before clean ones; cleanOnly skips them. */
+  /**
+   * Draws oldest first; `manure-first` takes manure-fed lots before clean ones, `clean-only` skips
+   * them. With `wanted`, lots no feeding still waiting could use go first (each in that order), so
+   * a feeding served early leaves the waiting ones the lots only they can use.
+   */
   draw(
     lo: number,
     hi: number,
     amount: number,
     mode: "clean-only" | "manure-first",
     out?: { lotId: string; amount: number }[],
+    wanted?: (lot: Live) => boolean,
   ): number {
     let left = amount;
     const passes = mode === "clean-only" ? CLEAN_ONLY : MANURE_FIRST;
     const start = this.skipDrained(lo, hi);
-    for (const wantManure of passes) {
-      for (let i = start; i < hi && left > AMOUNT_EPSILON; i++) {
+    let flags: Uint8Array | undefined;
+    if (wanted) {
+      flags = new Uint8Array(hi - start);
+      for (let i = start; i < hi; i++) {
         const l = this.lots[i]!;
-        if (l.manure !== wantManure || l.remaining <= 0) continue;
-        const take = Math.min(l.remaining, left);
-        l.remaining -= take;
-        if (l.remaining < AMOUNT_EPSILON) l.remaining = 0;
-        left -= take;
-        out?.push({ lotId: l.id, amount: take });
+        flags[i - start] = l.remaining > 0 && wanted(l) ? 1 : 0;
+      }
+    }
+    for (let round = flags ? 0 : 1; round <= 1; round++) {
+      for (const wantManure of passes) {
+        for (let i = start; i < hi && left > AMOUNT_EPSILON; i++) {
+          const l = this.lots[i]!;
+          if (l.manure !== wantManure || l.remaining <= 0) continue;
+          if (flags && flags[i - start] !== round) continue;
+          const take = Math.min(l.remaining, left);
+          l.remaining -= take;
+          if (l.remaining < AMOUNT_EPSILON) l.remaining = 0;
+          left -= take;
+          out?.push({ lotId: l.id, amount: take });
+        }
       }
     }
     return amount - Math.max(0, left);
@@ -241,6 +257,7 @@ function drawShared(
   weights: Float64Array,
   out: Float64Array,
   records: LedgerResult["plannedDraws"],
+  wanted?: (lot: Live) => boolean,
 ): void {
   let total = 0;
   for (let k = 0; k < n; k++) total += weights[k]!;
@@ -255,7 +272,7 @@ function drawShared(
   // A group of one takes the whole draw (w / w is exactly 1): its list takes the records as drawn.
   const drawn: { lotId: string; amount: number }[] | undefined =
     recorded === 0 ? undefined : n === 1 ? records![group[from]!]! : [];
-  const got = shelf.draw(lo, hi, amount, mode, drawn);
+  const got = shelf.draw(lo, hi, amount, mode, drawn, wanted);
   for (let k = 0; k < n; k++) out[k] = (got * weights[k]!) / total;
   if (drawn && n > 1)
     for (let k = 0; k < n; k++) {
@@ -264,6 +281,42 @@ function drawShared(
       const part = weights[k]! / total;
       for (const d of drawn) list.push({ lotId: d.lotId, amount: d.amount * part });
     }
+}
+
+/**
+ * The planned feedings of one month and pool not served yet, counted per day (Fenwick trees), so
+ * a draw can ask whether any of them could use a lot: one usable on some day of the lot's window,
+ * and clean-only ones only from clean lots.
+ */
+class Waiting {
+  private readonly any: Int32Array;
+  private readonly cleanOnly: Int32Array;
+  count = 0;
+  constructor(
+    private readonly startDay: number,
+    private readonly endDay: number,
+  ) {
+    this.any = new Int32Array(endDay - startDay + 1);
+    this.cleanOnly = new Int32Array(endDay - startDay + 1);
+  }
+  add(day: number, cleanOnly: boolean, delta: 1 | -1): void {
+    const tree = cleanOnly ? this.cleanOnly : this.any;
+    for (let i = day - this.startDay + 1; i < tree.length; i += i & -i) tree[i]! += delta;
+    this.count += delta;
+  }
+  private before(tree: Int32Array, day: number): number {
+    let s = 0;
+    for (let i = Math.min(day, this.endDay) - this.startDay; i > 0; i -= i & -i) s += tree[i]!;
+    return s;
+  }
+  /** Could a waiting feeding use `lot` (usable from its made day to the day before it expires)? */
+  wants = (lot: Live): boolean => {
+    const from = Math.max(lot.made, this.startDay);
+    const to = Math.min(lot.expires, this.endDay);
+    if (to <= from) return false;
+    if (this.before(this.any, to) - this.before(this.any, from) > 0) return true;
+    return !lot.manure && this.before(this.cleanOnly, to) - this.before(this.cleanOnly, from) > 0;
+  };
 }
 
 /** An empty draw list for each claim on or after `from`, undefined before it (no lists when none is). */
@@ -554,11 +607,17 @@ export function runLedger(input: LedgerInput): LedgerResult {
 
       // 2. What is planned: tier by tier. Within a tier, clean-only claims draw first (clean lots),
       //    then the others (manure-fed lots first); each group draws once and shares pro rata.
+      //    A group served before others of the month draws first from the lots those cannot use.
       const planned = plannedByMonth[slot(m, pool)]!;
+      const waiting = new Waiting(span.startDay, span.endDay);
+      for (const i of planned) waiting.add(input.planned[i]!.day, input.planned[i]!.cleanOnly, 1);
       for (let t = 0; t < planned.length;) {
         const head = input.planned[planned[t]!]!;
         let end = t + 1;
         while (end < planned.length && tiers(planned[t]!, planned[end]!) === 0) end++;
+        for (let k = t; k < end; k++)
+          waiting.add(input.planned[planned[k]!]!.day, input.planned[planned[k]!]!.cleanOnly, -1);
+        const wanted = waiting.count > 0 ? waiting.wants : undefined;
         const [lo, hi] = shelf.range(head.day, keep);
         const cleanGroup: number[] = [];
         const otherGroup: number[] = [];
@@ -603,6 +662,7 @@ export function runLedger(input: LedgerInput): LedgerResult {
             weights,
             shares,
             result.plannedDraws,
+            wanted,
           );
           for (let k = 0; k < n; k++) {
             const i = group[k]!;
