@@ -31,8 +31,10 @@ const digitAt = (s: string, i: number): number => {
 };
 
 function quickDayNumber(date: string): number | undefined {
-  if (date.length !== 10 || date.charCodeAt(4) !== 45 || date.charCodeAt(7) !== 45) return undefined;
-  const y = digitAt(date, 0) * 1000 + digitAt(date, 1) * 100 + digitAt(date, 2) * 10 + digitAt(date, 3);
+  if (date.length !== 10 || date.charCodeAt(4) !== 45 || date.charCodeAt(7) !== 45)
+    return undefined;
+  const y =
+    digitAt(date, 0) * 1000 + digitAt(date, 1) * 100 + digitAt(date, 2) * 10 + digitAt(date, 3);
   const m = digitAt(date, 5) * 10 + digitAt(date, 6);
   const d = digitAt(date, 8) * 10 + digitAt(date, 9);
   // NaN (a non-digit) fails every comparison below.
@@ -85,7 +87,9 @@ function parseDayNumber(date: unknown, field: string): number {
 // Day numbers of years 1900–2200 come back as the same string each time (built once, on demand).
 const ISO_FIRST_DAY = -25567; // 1900-01-01
 const ISO_LAST_DAY = 84005; // 2199-12-31
-const isoOfDay: (string | undefined)[] = new Array(ISO_LAST_DAY - ISO_FIRST_DAY + 1).fill(undefined);
+const isoOfDay: (string | undefined)[] = new Array(ISO_LAST_DAY - ISO_FIRST_DAY + 1).fill(
+  undefined,
+);
 
 export function fromDayNumber(day: number): IsoDate {
   const k = day - ISO_FIRST_DAY;

@@ -124,7 +124,11 @@ export function ruleAmount(
       warnings,
     };
   }
-  return { amount: base, explanation: lazyText(() => `${how()} = ${fmt(base, 3)} L tea`), warnings };
+  return {
+    amount: base,
+    explanation: lazyText(() => `${how()} = ${fmt(base, 3)} L tea`),
+    warnings,
+  };
 }
 
 /** An explanation whose `text` is built on first read (an enumerable getter, so JSON keeps it). */

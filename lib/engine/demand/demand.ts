@@ -34,7 +34,11 @@ interface Season {
 /** Checks frost dates; the last spring frost must come before the first fall frost. */
 export function parseSeason(season: GardenSeason, field = "season"): Season {
   // A plan passes the same season for every planting: check it once.
-  if (lastSeason && lastSeason.from === season?.lastSpringFrost && lastSeason.to === season?.firstFallFrost)
+  if (
+    lastSeason &&
+    lastSeason.from === season?.lastSpringFrost &&
+    lastSeason.to === season?.firstFallFrost
+  )
     return lastSeason.parsed;
   const parsed = checkSeason(season, field);
   lastSeason = { from: season.lastSpringFrost, to: season.firstFallFrost, parsed };
