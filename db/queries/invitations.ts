@@ -4,6 +4,7 @@ import { getDb } from "@/db";
 import { gardens, invitations, memberships } from "@/db/schema";
 import type { Role } from "@/lib/auth/roles";
 import { roleAtLeast } from "@/lib/auth/roles";
+import { forgetCheckedSessionsAndRoles } from "@/lib/auth/gate-cache";
 
 export const INVITATION_TTL_MS = 7 * 24 * 60 * 60 * 1000;
 
@@ -175,7 +176,7 @@ export async function acceptInvitation(input: {
 }): Promise<AcceptOutcome> {
   const db = await getDb();
   const now = input.now ?? new Date();
-  return db.transaction(async (tx) => {
+  const outcome = await db.transaction(async (tx): Promise<AcceptOutcome> => {
     const [inv] = await tx
       .select(invitationColumns)
       .from(invitations)
@@ -211,4 +212,6 @@ export async function acceptInvitation(input: {
       .where(eq(invitations.id, inv.id));
     return { ok: true, gardenId: inv.gardenId, role };
   });
+  forgetCheckedSessionsAndRoles(); // a role may have changed
+  return outcome;
 }
