@@ -79,21 +79,20 @@ function TaskLine({
 }) {
   if (tasks.length === 0) return null;
   return (
-    <p className="text-sm">
-      {label}:{" "}
-      {tasks.map((t, i) => (
-        <span key={t.id}>
-          {i > 0 ? ", " : ""}
-          {formatDay(t.date)}{" "}
-          {t.amount !== null ? (
-            <Figure title={`${name}, ${formatDay(t.date)}`} explanation={t.explanation}>
-              {t.kind === "drain"
-                ? formatPoolAmount(t.amount, "leachate", system)
-                : formatPoolAmount(t.amount, "castings", system)}
-            </Figure>
-          ) : null}
-        </span>
-      ))}
-    </p>
+    <div className="flex flex-wrap items-baseline gap-x-3 text-sm">
+      <span>{label}:</span>
+      <ul className="flex flex-wrap gap-x-3">
+        {tasks.map((t) => (
+          <li key={t.id} className="whitespace-nowrap">
+            {formatDay(t.date)}{" "}
+            {t.amount !== null ? (
+              <Figure title={`${name}, ${formatDay(t.date)}`} explanation={t.explanation}>
+                {formatPoolAmount(t.amount, t.kind === "drain" ? "leachate" : "castings", system)}
+              </Figure>
+            ) : null}
+          </li>
+        ))}
+      </ul>
+    </div>
   );
 }

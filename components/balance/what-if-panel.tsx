@@ -7,7 +7,7 @@ import type { GardenNames } from "@/components/balance/garden-names";
 import { monthLabel } from "@/components/balance/month-label";
 import { currentRule, describeChange, type TryChange } from "@/components/balance/what-if-changes";
 import { apiFetch, ApiError } from "@/lib/api-client";
-import { amountEntryFor } from "@/lib/balance/rule-amount-units";
+import { amountEntryFor, amountLimit } from "@/lib/balance/rule-amount-units";
 import type { WhatIfBody } from "@/lib/balance/types";
 import { formatPoolAmount, roundForDisplay } from "@/lib/format-quantity";
 import { queryKeys } from "@/lib/query-keys";
@@ -43,6 +43,7 @@ export function WhatIfPanel({
   const [kind, setKind] = useState<Kind>("bin-trays");
   const [target, setTarget] = useState("");
   const [value, setValue] = useState("");
+  const [valueError, setValueError] = useState<string | undefined>();
   const result = useQuery({
     queryKey: queryKeys.whatIf(gardenId, range.from, range.months, changes),
     queryFn: () =>
@@ -68,10 +69,18 @@ export function WhatIfPanel({
     if (kind === "bin-trays") change = { kind, binId: targetId, trays: n };
     else if (kind === "bin-rotation") change = { kind, binId: targetId, rotationIntervalDays: n };
     else if (kind === "bin-start") change = { kind, binId: targetId, startDate: value };
-    else if (entry && Number.isFinite(n))
+    else if (entry && rule && Number.isFinite(n)) {
+      // The API refuses the same bound (400 naming the field); say it here in the garden's units.
+      const limit = amountLimit(rule);
+      if (limit && entry.toSi(n) > limit.max) {
+        setValueError(`At most ${roundForDisplay(entry.fromSi(limit.max))} ${entry.label}.`);
+        return;
+      }
       change = { kind, plantingId: targetId, amount: entry.toSi(n) };
+    }
     if (change && targetId && value) onChangesChange([...changes, change]);
     setValue("");
+    setValueError(undefined);
   }
 
   return (
@@ -119,6 +128,7 @@ export function WhatIfPanel({
               ? `Today ${roundForDisplay(entry.fromSi(rule.amount))} ${entry.label}`
               : undefined
           }
+          error={valueError}
         >
           <Input
             type={kind === "bin-start" ? "date" : "number"}
@@ -225,8 +235,14 @@ function Comparison({ body, system }: { body: WhatIfBody; system: UnitSystem }) 
   );
 }
 
-/** The API's message and, for a 400, what it said about each field. */
+/** The API's message, or for a 400 what it said about each field, naming the change. */
 function errorText(error: ApiError): string {
-  const fields = Object.values(error.fields ?? {});
-  return fields.length > 0 ? `${error.message} ${fields.join("; ")}.` : error.message;
+  const fields = Object.entries(error.fields ?? {});
+  if (fields.length === 0) return error.message;
+  return fields
+    .map(([path, message]) => {
+      const at = /^changes\.(\d+)\./.exec(path);
+      return `${at ? `Change ${Number(at[1]) + 1}` : path}: ${message}.`;
+    })
+    .join(" ");
 }
