@@ -38,7 +38,7 @@ export function GardenFields({
       <div className="grid gap-4 sm:grid-cols-2">
         <Field
           label="Time zone"
-          hint="Reminders go out on this clock."
+          hint="“Today” and every date in the plan follow this clock."
           error={errors.timeZone?.message}
         >
           <Select {...register("timeZone")}>
@@ -51,8 +51,9 @@ export function GardenFields({
         </Field>
         <Field label="Units" error={errors.unitSystem?.message}>
           <Select {...register("unitSystem")}>
-            <option value="us">US customary (lb, cups, gallons, ft²)</option>
-            <option value="metric">Metric (kg, litres, m²)</option>
+            {/* Short enough to show whole in a 375 px wide phone's closed select. */}
+            <option value="us">US customary (lb, gal, ft²)</option>
+            <option value="metric">Metric (kg, L, m²)</option>
           </Select>
         </Field>
         <Field

@@ -5,10 +5,17 @@ import { BinCautions } from "@/components/bins/bin-cautions";
 import { BinForecastChart } from "@/components/bins/bin-forecast-chart";
 import { BinSummary } from "@/components/bins/bin-summary";
 import { BinWork } from "@/components/bins/bin-work";
-import { loadBinPlan } from "@/components/bins/load-bin-plan";
+import { loadBinPlan } from "@/db/queries/bin-plan";
 import { TrayStack } from "@/components/bins/tray-stack";
 import { trayStack } from "@/components/bins/tray-states";
-import { buttonStyles, Card, CardBody, CardHeader, CardTitle } from "@/components/ui";
+import {
+  buttonStyles,
+  Card,
+  CardBody,
+  CardHeader,
+  CardTitle,
+  textLinkStyles,
+} from "@/components/ui";
 import { getBinById, listMoveTargets } from "@/db/queries/bins";
 import { getGardenById } from "@/db/queries/gardens";
 import { requirePageMember } from "@/lib/auth/page-session";
@@ -60,8 +67,8 @@ export default async function BinPage({
     <>
       <div className="flex flex-wrap items-center justify-between gap-3">
         <div>
-          <Link href={`/g/${gardenId}/bins`} className="underline">
-            Bins
+          <Link href={`/g/${gardenId}/bins`} className={textLinkStyles}>
+            ← All bins
           </Link>
           <h1 className="text-3xl">{bin.name}</h1>
         </div>
