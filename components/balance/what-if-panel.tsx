@@ -7,7 +7,7 @@ import type { GardenNames } from "@/components/balance/garden-names";
 import { monthLabel } from "@/components/balance/month-label";
 import { currentRule, describeChange, type TryChange } from "@/components/balance/what-if-changes";
 import { apiFetch, ApiError } from "@/lib/api-client";
-import { amountEntryFor, amountLimit } from "@/lib/balance/rule-amount-units";
+import { amountEntryFor, largestEntry } from "@/lib/balance/rule-amount-units";
 import type { WhatIfBody } from "@/lib/balance/types";
 import { formatPoolAmount, roundForDisplay } from "@/lib/format-quantity";
 import { queryKeys } from "@/lib/query-keys";
@@ -71,9 +71,9 @@ export function WhatIfPanel({
     else if (kind === "bin-start") change = { kind, binId: targetId, startDate: value };
     else if (entry && rule && Number.isFinite(n)) {
       // The API refuses the same bound (400 naming the field); say it here in the garden's units.
-      const limit = amountLimit(rule);
-      if (limit && entry.toSi(n) > limit.max) {
-        setValueError(`At most ${roundForDisplay(entry.fromSi(limit.max))} ${entry.label}.`);
+      const most = largestEntry(rule, entry);
+      if (most !== null && entry.toSi(n) > entry.toSi(most)) {
+        setValueError(`At most ${most} ${entry.label}.`);
         return;
       }
       change = { kind, plantingId: targetId, amount: entry.toSi(n) };

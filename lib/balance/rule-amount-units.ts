@@ -92,3 +92,15 @@ export function amountLimit(rule: RuleShape): { max: number; unit: string } | un
     (rule.material === "castings" ? MAX_AMOUNT[`${key}:castings`] : undefined) ?? MAX_AMOUNT[key]
   );
 }
+
+/**
+ * The largest amount the what-if accepts for this rule, in the entry's units, to two
+ * significant digits rounded down (a bound shown rounded up would itself be refused).
+ */
+export function largestEntry(rule: RuleShape, entry: AmountEntry): number | null {
+  const limit = amountLimit(rule);
+  if (!limit) return null;
+  const most = entry.fromSi(limit.max);
+  const step = 10 ** (Math.floor(Math.log10(most)) - 1);
+  return Number((Math.floor(most / step + 1e-9) * step).toPrecision(2));
+}

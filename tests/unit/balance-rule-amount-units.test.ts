@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { amountEntryFor } from "@/lib/balance/rule-amount-units";
+import { amountEntryFor, largestEntry } from "@/lib/balance/rule-amount-units";
 
 // The what-if panel's planting amount, entered in the garden's units and stored in SI in
 // the rule's own measure. Every factor is from NIST Handbook 44, Appendix C (exact
@@ -67,5 +67,18 @@ describe("a planting's amount in the garden's units", () => {
     const e = amountEntryFor(castings("percent-of-mix", "percent-of-mix"), "us");
     expect(e.label).toBe("% of the mix");
     expect(e.toSi(20)).toBe(20);
+  });
+});
+
+describe("the largest amount the what-if accepts, in the garden's units", () => {
+  it("is the API's bound converted and rounded down, never up", () => {
+    // Bounds from lib/balance/rule-amount-units.ts: 3 L castings per plant, 2 kg per plant.
+    // 3 L / 0.2365882365 L per cup = 12.68 cups → 12 (13 cups would be 3.08 L, refused).
+    const cups = castings("per-plant", "volume");
+    expect(largestEntry(cups, amountEntryFor(cups, "us"))).toBe(12);
+    // 2 kg / 0.45359237 kg per lb = 4.409 lb → 4.4.
+    const mass = castings("per-plant", "mass");
+    expect(largestEntry(mass, amountEntryFor(mass, "us"))).toBe(4.4);
+    expect(largestEntry(mass, amountEntryFor(mass, "metric"))).toBe(2);
   });
 });
