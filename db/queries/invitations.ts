@@ -4,6 +4,7 @@ import { getDb } from "@/db";
 import { gardens, invitations, memberships, users } from "@/db/schema";
 import type { Role } from "@/lib/auth/roles";
 import { roleAtLeast } from "@/lib/auth/roles";
+import { forgetCheckedSessionsAndRoles } from "@/lib/auth/gate-cache";
 
 export const INVITATION_TTL_MS = 7 * 24 * 60 * 60 * 1000;
 
@@ -212,7 +213,7 @@ export async function acceptInvitation(input: {
 }): Promise<AcceptOutcome> {
   const db = await getDb();
   const now = input.now ?? new Date();
-  return db.transaction(async (tx) => {
+  const outcome = await db.transaction(async (tx): Promise<AcceptOutcome> => {
     const [inv] = await tx
       .select(invitationColumns)
       .from(invitations)
@@ -248,4 +249,6 @@ export async function acceptInvitation(input: {
       .where(eq(invitations.id, inv.id));
     return { ok: true, gardenId: inv.gardenId, role };
   });
+  forgetCheckedSessionsAndRoles(); // a role may have changed
+  return outcome;
 }
