@@ -1,5 +1,5 @@
 import "server-only";
-import { and, desc, eq, inArray, or } from "drizzle-orm";
+import { and, desc, eq, inArray, lte, or } from "drizzle-orm";
 import { getDb, type DbOrTx } from "@/db";
 import { binEvents, bins, gardens, stockLots, uploads, users, wormMoves } from "@/db/schema";
 import { PHOTO_OWNER_TYPE } from "@/db/queries/photos";
@@ -287,4 +287,33 @@ export async function insertWormMove(
     ids.push(second[0]!.id);
   }
   return { moveIds: ids };
+}
+
+/**
+ * Harvests and added trays logged up to `until`, oldest first, for the bin page's tray
+ * picture: in a stack, a harvested tray is emptied and goes back on top to fill.
+ */
+export async function listTrayEvents({
+  gardenId,
+  binId,
+  until,
+}: {
+  gardenId: string;
+  binId: string;
+  until: string;
+}): Promise<{ on: string; kind: "harvest" | "tray-added" }[]> {
+  const db = await getDb();
+  const rows = await db
+    .select({ on: binEvents.occurredOn, kind: binEvents.kind })
+    .from(binEvents)
+    .where(
+      and(
+        eq(binEvents.gardenId, gardenId),
+        eq(binEvents.binId, binId),
+        inArray(binEvents.kind, ["harvest", "tray-added"]),
+        lte(binEvents.occurredOn, until),
+      ),
+    )
+    .orderBy(binEvents.occurredOn, binEvents.createdAt);
+  return rows.map((r) => ({ on: r.on, kind: r.kind === "harvest" ? "harvest" : "tray-added" }));
 }

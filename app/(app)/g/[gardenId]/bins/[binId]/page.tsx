@@ -16,6 +16,7 @@ import {
   CardTitle,
   textLinkStyles,
 } from "@/components/ui";
+import { listTrayEvents } from "@/db/queries/bin-events";
 import { getBinById, getLoggedWorms, listMoveTargets } from "@/db/queries/bins";
 import { getGardenById } from "@/db/queries/gardens";
 import { requirePageMember } from "@/lib/auth/page-session";
@@ -51,14 +52,17 @@ export default async function BinPage({
     loadBinPlan(gardenId, garden.timeZone),
     listMoveTargets({ userId: member.user.id }),
   ]);
-  const logged = await getLoggedWorms({ gardenId, binId: bin.id, on: today });
+  const [logged, trayEvents] = await Promise.all([
+    getLoggedWorms({ gardenId, binId: bin.id, on: today }),
+    listTrayEvents({ gardenId, binId: bin.id, until: today }),
+  ]);
   const supply = plan.bins.find((b) => b.binId === bin.id);
   const trays = trayStack({
     startedOn: bin.startedOn,
     trayCount: bin.trayCount,
     processingDays: bin.processingDays ?? dflt("processingDays"),
     rotationDays: bin.rotationDays ?? dflt("rotationIntervalDays"),
-    tasks: supply?.tasks ?? [],
+    logged: trayEvents,
     today,
   });
   const volumeL = trayInsideVolumeL({
