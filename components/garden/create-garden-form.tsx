@@ -5,6 +5,7 @@ import { FormMessage } from "@/components/forms/form-message";
 import { useApiForm } from "@/components/forms/use-api-form";
 import { Button } from "@/components/ui";
 import { apiFetch } from "@/lib/api-client";
+import { localTimeZone } from "@/lib/time-zones";
 import { createGardenSchema } from "@/lib/validation/garden";
 import { GardenFields } from "./garden-fields";
 
@@ -13,7 +14,7 @@ export function CreateGardenForm() {
   const year = new Date().getFullYear();
   const { form, formError, submit } = useApiForm(createGardenSchema, {
     name: "",
-    timeZone: Intl.DateTimeFormat().resolvedOptions().timeZone || "UTC",
+    timeZone: localTimeZone(),
     unitSystem: "us",
     lastSpringFrost: `${year}-04-15`,
     firstFallFrost: `${year}-10-15`,

@@ -3,24 +3,7 @@
 import type { FieldErrors, UseFormRegister } from "react-hook-form";
 import { Field, Input, Select } from "@/components/ui";
 import type { CreateGardenInput } from "@/lib/validation/garden";
-
-// A short list covers most growers; anything Intl knows is accepted by the API.
-const commonZones = [
-  "America/New_York",
-  "America/Chicago",
-  "America/Denver",
-  "America/Los_Angeles",
-  "America/Anchorage",
-  "Pacific/Honolulu",
-  "America/Toronto",
-  "America/Vancouver",
-  "Europe/London",
-  "Europe/Dublin",
-  "Europe/Berlin",
-  "Australia/Sydney",
-  "Pacific/Auckland",
-  "UTC",
-];
+import { TimeZoneField } from "./time-zone-field";
 
 /** The fields shared by "start a garden" and the garden's settings. */
 export function GardenFields({
@@ -36,19 +19,7 @@ export function GardenFields({
         <Input autoComplete="off" {...register("name")} />
       </Field>
       <div className="grid gap-4 sm:grid-cols-2">
-        <Field
-          label="Time zone"
-          hint="Reminders go out on this clock."
-          error={errors.timeZone?.message}
-        >
-          <Select {...register("timeZone")}>
-            {commonZones.map((z) => (
-              <option key={z} value={z}>
-                {z.replace(/_/g, " ")}
-              </option>
-            ))}
-          </Select>
-        </Field>
+        <TimeZoneField registration={register("timeZone")} error={errors.timeZone?.message} />
         <Field label="Units" error={errors.unitSystem?.message}>
           <Select {...register("unitSystem")}>
             <option value="us">US customary (lb, cups, gallons, ft²)</option>

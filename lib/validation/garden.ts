@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { roles } from "@/lib/auth/roles";
+import { listedTimeZone } from "@/lib/time-zones";
 import { plainText } from "./text";
 
 // Frost dates a garden could have: far enough back for old records, not the
@@ -22,20 +23,19 @@ const isoDay = (label: string) =>
       return year >= FIRST_YEAR && year <= LAST_YEAR;
     }, `The ${label} must be between ${FIRST_YEAR} and ${LAST_YEAR}.`);
 
-function isTimeZone(tz: string): boolean {
-  try {
-    new Intl.DateTimeFormat("en-US", { timeZone: tz });
-    return true;
-  } catch {
-    return false;
-  }
-}
-
 const gardenFields = z.object({
   name: plainText().min(1, "Give the garden a name.").max(80, "Use at most 80 characters."),
   timeZone: plainText()
     .min(1, "Choose a time zone.")
-    .refine(isTimeZone, "That is not a time zone we know."),
+    .transform((name, ctx) => {
+      const listed = listedTimeZone(name);
+      if (listed) return listed;
+      ctx.addIssue({
+        code: "custom",
+        message: "Choose a time zone from the list, e.g. America/Chicago.",
+      });
+      return z.NEVER;
+    }),
   unitSystem: z.enum(["us", "metric"], { error: "Choose US customary or metric." }),
   lastSpringFrost: isoDay("last spring frost date"),
   firstFallFrost: isoDay("first fall frost date"),
