@@ -2,7 +2,7 @@ import type { Page } from "playwright-core";
 
 export interface NewGarden {
   name: string;
-  /** An IANA zone offered in the form's list, e.g. "Europe/London". */
+  /** An IANA zone the form offers (typed, with suggestions), e.g. "Europe/London". */
   timeZone: string;
   units: "us" | "metric";
   /** yyyy-mm-dd, the value format of <input type="date">. */
@@ -33,7 +33,7 @@ export class GardensPage {
   async startGarden(garden: NewGarden) {
     const form = this.startForm();
     await form.getByLabel("Garden name").fill(garden.name);
-    await form.getByLabel("Time zone").selectOption(garden.timeZone);
+    await form.getByLabel("Time zone").fill(garden.timeZone);
     await form.getByLabel("Units").selectOption(garden.units);
     await form.getByLabel("Last spring frost").fill(garden.lastSpringFrost);
     await form.getByLabel("First fall frost").fill(garden.firstFallFrost);

@@ -1,6 +1,5 @@
 import type { Metadata } from "next";
 import { Badge, Card, CardBody } from "@/components/ui";
-import { SafetyCautions } from "@/components/garden/safety-cautions";
 import { gardenNamesFrom } from "@/components/balance/garden-names";
 import { gardenStatus } from "@/components/overview/garden-status";
 import {
@@ -94,7 +93,6 @@ export default async function GardenOverviewPage({
           ))}
         </section>
       ) : null}
-      <SafetyCautions />
     </>
   );
 }

@@ -54,6 +54,7 @@ export const POST = route<Params>(async (request, { params }) => {
       bin,
       input,
       confirm: new URL(request.url).searchParams.has("confirm"),
+      system: garden.unitSystem,
     }),
   );
   // After the commit: this garden's cached plan (and the receiving garden's) is stale.
