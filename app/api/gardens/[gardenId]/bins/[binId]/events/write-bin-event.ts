@@ -11,6 +11,7 @@ import { requireMembership, type Member } from "@/lib/auth/require-role";
 import { dflt, trayInsideVolumeL } from "@/lib/engine";
 import { WORM_BAND_C } from "@/lib/cautions";
 import { AppError } from "@/lib/errors";
+import { formatDayWithYear } from "@/lib/format";
 import { formatAmount } from "@/lib/format-quantity";
 import type { UnitSystem } from "@/lib/units";
 import { warningsForFoods, type BinEventInput } from "@/lib/validation/bin-event";
@@ -176,9 +177,13 @@ export async function checkWormTarget(
   if (target.retiredOn && target.retiredOn < input.on)
     throw new AppError("validation:to", "That bin is retired.", { "to.binId": "is retired" });
   if (target.startedOn > input.on)
-    throw new AppError("validation:to", `That bin starts on ${target.startedOn}.`, {
-      "to.binId": "had not started on that day",
-    });
+    throw new AppError(
+      "validation:to",
+      `That bin starts on ${formatDayWithYear(target.startedOn)}.`,
+      {
+        "to.binId": "had not started on that day",
+      },
+    );
 }
 
 function temperatureWarnings(c: number | null | undefined): string[] {
