@@ -78,18 +78,20 @@ export function benchGarden(plantings: number, seed = 1): GardenInputs {
       priority: 1 + Math.floor(r() * 5),
       edible: true,
       edibleTouchesSoil: r() < 0.3,
-      rule: liquid
-        ? {
-            material: roll < 0.1 ? "tea" : "leachate",
-            method: "drench",
-            basis: "per-plant",
-            measure: "volume",
-            amount: roll < 0.1 ? 0.1 : 0.2366,
-            recurrence: roll < 0.1 ? "FREQ=WEEKLY" : "FREQ=WEEKLY;BYDAY=SU",
-            dilutionWaterParts: null,
-            teaCastingsPerWater: null,
-          }
-        : null,
+      rules: liquid
+        ? [
+            {
+              material: roll < 0.1 ? "tea" : "leachate",
+              method: "drench",
+              basis: "per-plant",
+              measure: "volume",
+              amount: roll < 0.1 ? 0.1 : 0.2366,
+              recurrence: roll < 0.1 ? "FREQ=WEEKLY" : "FREQ=WEEKLY;BYDAY=SU",
+              dilutionWaterParts: null,
+              teaCastingsPerWater: null,
+            },
+          ]
+        : [],
     };
   });
   const days = daysBetween(HISTORY_FROM, BENCH_AS_OF);

@@ -41,12 +41,13 @@ export function gardenNamesFrom(inputs: GardenInputs): GardenNames {
       feederClass: p.feederClass,
       priority: p.priority,
       edible: p.edible,
-      rule: p.rule
+      // The first rule: a what-if amount is in its measure (lib/balance/what-if.ts).
+      rule: p.rules[0]
         ? {
-            material: p.rule.material,
-            measure: p.rule.measure,
-            basis: p.rule.basis,
-            amount: p.rule.amount,
+            material: p.rules[0].material,
+            measure: p.rules[0].measure,
+            basis: p.rules[0].basis,
+            amount: p.rules[0].amount,
           }
         : null,
     })),

@@ -1,7 +1,7 @@
 import "server-only";
 import { and, asc, count, eq, gt, ilike, inArray, isNotNull, isNull, or } from "drizzle-orm";
 import { getDb, type DbOrTx } from "@/db";
-import { applications, beds, feedingRules, plantings } from "@/db/schema";
+import { applications, beds, plantings } from "@/db/schema";
 import { AppError } from "@/lib/errors";
 import type { CreateBedInput, ListBedsQuery } from "@/lib/validation/bed";
 import { si } from "@/lib/validation/scenario-quantity";
@@ -195,7 +195,7 @@ export async function removeBed({
       const bed = await getBedById({ gardenId, bedId, tx });
       if (!bed) throw new AppError("not_found:bed");
       const inBed = await tx
-        .select({ id: plantings.id, ruleId: plantings.feedingRuleId })
+        .select({ id: plantings.id })
         .from(plantings)
         .where(and(eq(plantings.gardenId, gardenId), eq(plantings.bedId, bedId)));
       if (inBed.length) {
@@ -238,12 +238,8 @@ export async function removeBed({
           return { archivedOn: today };
         }
       }
+      // Its plantings go with it, and their rules with them (on delete cascade).
       await tx.delete(beds).where(and(eq(beds.gardenId, gardenId), eq(beds.id, bedId)));
-      const ruleIds = inBed.map((p) => p.ruleId).filter((id): id is string => id !== null);
-      if (ruleIds.length)
-        await tx
-          .delete(feedingRules)
-          .where(and(eq(feedingRules.gardenId, gardenId), inArray(feedingRules.id, ruleIds)));
       return { removed: true as const };
     }),
   );

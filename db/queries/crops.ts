@@ -1,13 +1,14 @@
 import "server-only";
-import { and, count, eq, inArray, isNull, or } from "drizzle-orm";
+import { and, count, eq, isNull, or } from "drizzle-orm";
 import { getDb, type DbOrTx } from "@/db";
-import { crops, feedingRules, plantings } from "@/db/schema";
+import { crops, plantings } from "@/db/schema";
 import type { FeederClass, FeedingRuleInput } from "@/lib/engine";
 import { AppError } from "@/lib/errors";
-import { cropFacts, effectiveRule, type RuleSource } from "@/lib/plantings/rules";
+import { cropFacts, effectiveRules, type RuleSource } from "@/lib/plantings/rules";
 import { ruleInput } from "@/lib/scenario/to-inputs";
 import type { CreateCropInput, UpdateCropInput } from "@/lib/validation/crop";
-import { dropRule, ruleFromRow, writeRule } from "./feeding-rules-write";
+import { ownRulesChange } from "@/lib/validation/feeding-rule";
+import { readRules, replaceRules } from "./feeding-rules-write";
 import { thenInvalidatePlan } from "./plan-invalidation";
 import { gardenToday } from "./plantings";
 import { si } from "@/lib/validation/scenario-quantity";
@@ -24,10 +25,13 @@ export interface CropDto {
   edibleTouchesSoil: boolean;
   /** true for the shared list (not yet this garden's own copy). */
   starter: boolean;
-  /** The crop's own rule; null = the feeder-class default. */
+  /** The crop's own rules, in order, which its plantings inherit; [] = the feeder-class default. */
+  rules: FeedingRuleInput[];
+  effectiveRules: FeedingRuleInput[];
+  ruleSource: Exclude<RuleSource, "planting">;
+  /** For the one-rule form until it edits `rules`: rules[0] ?? null, and effectiveRules[0]. */
   rule: FeedingRuleInput | null;
   effectiveRule: FeedingRuleInput;
-  ruleSource: Exclude<RuleSource, "planting">;
   spacingM: number | null;
   daysToHarvest: number | null;
   /** Kept for the plantings that use it; no longer offered for new ones. */
@@ -36,19 +40,15 @@ export interface CropDto {
 
 type CropRow = typeof crops.$inferSelect;
 
-async function rulesById(tx: DbOrTx, gardenId: string, ids: (string | null)[]) {
-  const wanted = ids.filter((id): id is string => id !== null);
-  if (!wanted.length) return new Map<string, FeedingRuleInput>();
-  const rows = await tx
-    .select()
-    .from(feedingRules)
-    .where(and(eq(feedingRules.gardenId, gardenId), inArray(feedingRules.id, wanted)));
-  return new Map(rows.map((r) => [r.id, ruleFromRow(r)]));
-}
+type RulesOf = (cropId: string) => FeedingRuleInput[] | undefined;
 
-function toDto(row: CropRow, rules: Map<string, FeedingRuleInput>): CropDto {
-  const own = row.feedingRuleId ? (rules.get(row.feedingRuleId) ?? null) : null;
-  const eff = effectiveRule(null, own, row.feederClass);
+/** Rules of these crops; starter crops (no garden) hold none. */
+const rulesOfCrops = (tx: DbOrTx, gardenId: string, rows: CropRow[]) =>
+  readRules(tx, gardenId, { cropIds: rows.filter((c) => c.gardenId !== null).map((c) => c.id) });
+
+function toDto(row: CropRow, rulesOf: RulesOf): CropDto {
+  const own = rulesOf(row.id) ?? [];
+  const eff = effectiveRules([], own, row.feederClass);
   return {
     id: row.id,
     name: row.name ?? "(unnamed crop)",
@@ -56,9 +56,11 @@ function toDto(row: CropRow, rules: Map<string, FeedingRuleInput>): CropDto {
     edible: row.edible,
     edibleTouchesSoil: row.edibleTouchesSoil,
     starter: row.gardenId === null,
-    rule: own,
-    effectiveRule: eff.rule,
+    rules: own,
+    effectiveRules: eff.rules,
     ruleSource: eff.source === "crop" ? "crop" : "default",
+    rule: own[0] ?? null,
+    effectiveRule: eff.rules[0]!,
     ...cropFacts(row),
     archivedOn: row.archivedOn,
   };
@@ -94,12 +96,8 @@ export async function listCrops({
       (!query.feederClass || c.feederClass === query.feederClass),
   );
   const page = all.slice(query.offset, query.offset + query.limit);
-  const rules = await rulesById(
-    db,
-    gardenId,
-    page.map((c) => c.feedingRuleId),
-  );
-  return { crops: page.map((c) => toDto(c, rules)), total: all.length };
+  const rulesOf = await rulesOfCrops(db, gardenId, page);
+  return { crops: page.map((c) => toDto(c, rulesOf)), total: all.length };
 }
 
 async function findVisibleCrop(tx: DbOrTx, gardenId: string, cropId: string) {
@@ -115,7 +113,7 @@ export async function getCropById({ gardenId, cropId }: { gardenId: string; crop
   const db = await getDb();
   const row = await findVisibleCrop(db, gardenId, cropId);
   if (!row) return null;
-  return toDto(row, await rulesById(db, gardenId, [row.feedingRuleId]));
+  return toDto(row, await rulesOfCrops(db, gardenId, [row]));
 }
 
 async function ownCropNamed(tx: DbOrTx, gardenId: string, name: string) {
@@ -169,7 +167,6 @@ export async function createCrop({
     gardenId,
     db.transaction(async (tx) => {
       if (await ownCropNamed(tx, gardenId, input.name)) throw nameTaken(input.name);
-      const ruleId = await writeRule(tx, gardenId, null, input.rule ? ruleInput(input.rule) : null);
       const [row] = await tx
         .insert(crops)
         .values({
@@ -180,10 +177,10 @@ export async function createCrop({
           edibleTouchesSoil: input.edible ? input.edibleTouchesSoil : false,
           daysToHarvest: input.daysToHarvest ?? null,
           spacingM: input.spacing ? si(input.spacing) : null,
-          feedingRuleId: ruleId,
         })
         .returning();
-      return toDto(row!, await rulesById(tx, gardenId, [ruleId]));
+      await replaceRules(tx, gardenId, { cropId: row!.id }, ownRulesChange(input)?.map(ruleInput));
+      return toDto(row!, await rulesOfCrops(tx, gardenId, [row!]));
     }),
   );
 }
@@ -207,9 +204,7 @@ export async function updateCrop({
       if (input.name && input.name.toLowerCase() !== row.name?.toLowerCase()) {
         if (await ownCropNamed(tx, gardenId, input.name)) throw nameTaken(input.name);
       }
-      const next =
-        input.rule === undefined ? undefined : input.rule === null ? null : ruleInput(input.rule);
-      const ruleId = await writeRule(tx, gardenId, row.feedingRuleId, next);
+      await replaceRules(tx, gardenId, { cropId: row.id }, ownRulesChange(input)?.map(ruleInput));
       const edible = input.edible ?? row.edible;
       const [updated] = await tx
         .update(crops)
@@ -222,12 +217,10 @@ export async function updateCrop({
             input.daysToHarvest === undefined ? row.daysToHarvest : input.daysToHarvest,
           spacingM:
             input.spacing === undefined ? row.spacingM : input.spacing ? si(input.spacing) : null,
-          feedingRuleId: ruleId,
         })
         .where(and(eq(crops.gardenId, gardenId), eq(crops.id, row.id)))
         .returning();
-      if (next === null) await dropRule(tx, gardenId, row.feedingRuleId);
-      return toDto(updated!, await rulesById(tx, gardenId, [ruleId]));
+      return toDto(updated!, await rulesOfCrops(tx, gardenId, [updated!]));
     }),
   );
 }
@@ -264,8 +257,7 @@ export async function removeCrop({
         return { archivedOn: today };
       }
       await tx.delete(crops).where(and(eq(crops.gardenId, gardenId), eq(crops.id, cropId)));
-      await dropRule(tx, gardenId, row.feedingRuleId);
-      return { removed: true as const };
+      return { removed: true as const }; // its rules go with it (on delete cascade)
     }),
   );
 }

@@ -16,7 +16,9 @@ import {
 } from "@/db/schema";
 import { insertApplicationWithDraws, insertDrain, insertHarvest } from "@/db/queries/lots";
 import type { FeedingRuleInput, GardenInputs, MonthDay } from "@/lib/engine";
-import type { BedSize } from "@/lib/scenario/to-scenario";
+import type { GardenRecords } from "@/lib/scenario/records";
+import { cropKey } from "@/lib/validation/scenario";
+import { ruleRows } from "./feeding-rules-write";
 
 // GardenInputs → a new garden's rows: the write half of the database adapter
 // (garden-inputs.ts reads them back). Ids are new uuids made here, so rows can
@@ -27,8 +29,13 @@ import type { BedSize } from "@/lib/scenario/to-scenario";
 export interface InsertGardenOptions {
   inputs: GardenInputs;
   ownerId: string;
-  /** Length and width of beds (by input id) when the source knows them; otherwise a square of the bed's area. */
-  bedSizes?: ReadonlyMap<string, BedSize>;
+  /**
+   * What the source says beyond GardenInputs (ids as in the inputs). Without it,
+   * beds are squares of their area, the crop list is made from the plantings'
+   * facts, and every planting holds the rules it is fed by as its own.
+   */
+  records?: GardenRecords;
+  /** Overrides records.location (the demo seed sets it). */
   location?: string | null;
 }
 
@@ -70,25 +77,11 @@ function frostDate(md: MonthDay, asOf: string): string {
   return `${year}-${String(md.month).padStart(2, "0")}-${String(md.day).padStart(2, "0")}`;
 }
 
-function ruleRow(gardenId: string, id: string, r: FeedingRuleInput) {
-  return {
-    id,
-    gardenId,
-    material: r.material,
-    method: r.method,
-    basis: r.basis,
-    amountMeasure: r.measure,
-    amountSi: r.amount,
-    dilutionWaterParts: r.dilutionWaterParts,
-    teaCastingsPerWater: r.teaCastingsPerWater,
-    rrule: r.recurrence,
-  };
-}
-
 /**
  * The planned feeding an application fulfils, renamed with its planting's new
- * id: the engine's ids are `${plantingId}:${material}:${date}` (feedingId), and
- * an application fulfils a feeding of its own planting.
+ * id: the engine's ids are `${plantingId}:${material}:${date}` (feedingId, with
+ * `:2`… when two rules of one material meet on a day), and an application
+ * fulfils a feeding of its own planting.
  */
 function remapPlannedKey(key: string | null, oldPlantingId: string, newPlantingId: string) {
   if (key === null || !key.startsWith(`${oldPlantingId}:`)) return key;
@@ -97,7 +90,7 @@ function remapPlannedKey(key: string | null, oldPlantingId: string, newPlantingI
 
 export async function insertGardenInputs(
   tx: DbOrTx,
-  { inputs, ownerId, bedSizes, location = null }: InsertGardenOptions,
+  { inputs, ownerId, records, location }: InsertGardenOptions,
 ): Promise<{ gardenId: string; ids: Map<string, string> }> {
   const gardenId = newId();
   const ids = new Map<string, string>();
@@ -120,7 +113,7 @@ export async function insertGardenInputs(
     unitSystem: settings.unitSystem,
     lastSpringFrost: frostDate(settings.lastSpringFrost, asOf),
     firstFallFrost: frostDate(settings.firstFallFrost, asOf),
-    location,
+    location: location ?? records?.location ?? null,
     castingsPricePerKg: settings.castingsPricePerKg,
     shelfLifeDays: settings.shelfLifeDays,
     liquidMaxAgeDays: settings.liquidMaxAgeDays,
@@ -150,6 +143,7 @@ export async function insertGardenInputs(
         manureFeedstock: b.manureFeedstock,
         startingWormCount: b.startingWorms,
         retiredOn: b.retiredOn,
+        drainIntervalDays: records?.binDrainIntervalDays.get(b.id) ?? null,
       })),
     );
   }
@@ -158,7 +152,7 @@ export async function insertGardenInputs(
     await tx.insert(beds).values(
       inputs.beds.map((b) => {
         const size =
-          bedSizes?.get(b.id) ??
+          records?.bedSizes.get(b.id) ??
           (b.areaM2 === null
             ? null
             : { lengthM: Math.sqrt(b.areaM2), widthM: Math.sqrt(b.areaM2) });
@@ -171,19 +165,36 @@ export async function insertGardenInputs(
           lengthM: b.kind === "bed" ? (size?.lengthM ?? null) : null,
           widthM: b.kind === "bed" ? (size?.widthM ?? null) : null,
           containerVolumeL: b.kind === "container" ? b.containerVolumeL : null,
+          notes: records?.bedNotes.get(b.id) ?? null,
         };
       }),
     );
   }
 
-  // A garden's own crop list: one crop per distinct name and facts among its plantings.
+  // A garden's own crop list: the source's crops (with their rules), then one
+  // crop per other distinct name and facts among its plantings (cropKey).
   const cropIds = new Map<string, string>();
   const cropRows: (typeof crops.$inferInsert)[] = [];
-  const ruleRows: (typeof feedingRules.$inferInsert)[] = [];
+  const rules: (typeof feedingRules.$inferInsert)[] = [];
   const plantingRows: (typeof plantings.$inferInsert)[] = [];
+  for (const c of records?.crops ?? []) {
+    const cropId = newId();
+    cropIds.set(cropKey(c), cropId);
+    cropRows.push({
+      id: cropId,
+      gardenId,
+      name: c.name,
+      feederClass: c.feederClass,
+      edible: c.edible,
+      edibleTouchesSoil: c.edibleTouchesSoil,
+      daysToHarvest: c.daysToHarvest,
+      spacingM: c.spacingM,
+    });
+    rules.push(...ruleRows(gardenId, { cropId }, c.rules));
+  }
+  const listed = new Set(cropIds.keys());
   for (const p of inputs.plantings) {
-    const name = p.crop;
-    const key = JSON.stringify([name, p.feederClass, p.edible, p.edibleTouchesSoil]);
+    const key = cropKey(p);
     let cropId = cropIds.get(key);
     if (!cropId) {
       cropId = newId();
@@ -191,19 +202,18 @@ export async function insertGardenInputs(
       cropRows.push({
         id: cropId,
         gardenId,
-        name,
+        name: p.crop,
         feederClass: p.feederClass,
         edible: p.edible,
         edibleTouchesSoil: p.edibleTouchesSoil,
       });
     }
-    let ruleId: string | null = null;
-    if (p.rule) {
-      ruleId = newId();
-      ruleRows.push(ruleRow(gardenId, ruleId, p.rule));
-    }
+    // Its own rules; one of a listed crop that has none inherits the crop's.
+    const own: FeedingRuleInput[] = records?.ownRules.get(p.id) ?? (listed.has(key) ? [] : p.rules);
+    const plantingId = idFor(p.id);
+    rules.push(...ruleRows(gardenId, { plantingId }, own));
     plantingRows.push({
-      id: idFor(p.id),
+      id: plantingId,
       gardenId,
       bedId: mapped(p.bedId),
       cropId,
@@ -212,12 +222,11 @@ export async function insertGardenInputs(
       endedOn: p.endDate,
       expectedHarvestOn: p.harvestDate,
       priority: p.priority,
-      feedingRuleId: ruleId,
     });
   }
-  if (ruleRows.length) await tx.insert(feedingRules).values(ruleRows);
   if (cropRows.length) await tx.insert(crops).values(cropRows);
   if (plantingRows.length) await tx.insert(plantings).values(plantingRows);
+  if (rules.length) await tx.insert(feedingRules).values(rules);
 
   if (inputs.stockLots.length) {
     await tx.insert(stockLots).values(
@@ -229,6 +238,8 @@ export async function insertGardenInputs(
         producedOn: l.madeOn,
         initialAmountSi: l.amount,
         manureFeedstock: l.manureFeedstock,
+        pricePerKg: records?.lotDetails.get(l.id)?.pricePerKg ?? null,
+        note: records?.lotDetails.get(l.id)?.note ?? null,
       })),
     );
   }

@@ -15,8 +15,9 @@ import {
   stockLots,
   wormMoves,
 } from "@/db/schema";
-import type { FeedingRuleInput, GardenInputs, LotDraw, MonthDay } from "@/lib/engine";
+import type { GardenInputs, LotDraw, MonthDay } from "@/lib/engine";
 import { AppError } from "@/lib/errors";
+import { rulesByOwner } from "./feeding-rules-write";
 
 // Database → GardenInputs. Rows are already SI, so they map straight across:
 // no conversion to the grower's units and back. A null engine parameter stays
@@ -76,7 +77,11 @@ export async function readGardenInputs(
     .where(eq(plantings.gardenId, gardenId))
     .orderBy(asc(plantings.createdAt), asc(plantings.id));
   const cropRows = await tx.select().from(crops).where(eq(crops.gardenId, gardenId));
-  const ruleRows = await tx.select().from(feedingRules).where(eq(feedingRules.gardenId, gardenId));
+  const ruleRows = await tx
+    .select()
+    .from(feedingRules)
+    .where(eq(feedingRules.gardenId, gardenId))
+    .orderBy(asc(feedingRules.position));
   const lotRows = await tx
     .select()
     .from(stockLots)
@@ -119,7 +124,7 @@ export async function readGardenInputs(
     .orderBy(asc(wormMoves.createdAt), asc(wormMoves.id));
 
   const cropById = byId(cropRows);
-  const ruleById = byId(ruleRows);
+  const rulesOf = rulesByOwner(ruleRows);
   const lotByEvent = new Map(
     lotRows.filter((l) => l.sourceEventId !== null).map((l) => [l.sourceEventId!, l]),
   );
@@ -145,20 +150,6 @@ export async function readGardenInputs(
     return end < p.plantedOn ? p.plantedOn : end;
   };
 
-  const rule = (ruleId: string | null): FeedingRuleInput | null => {
-    const r = ruleId === null ? undefined : ruleById.get(ruleId);
-    if (!r) return null;
-    return {
-      material: r.material,
-      method: r.method,
-      basis: r.basis,
-      measure: r.amountMeasure,
-      amount: r.amountSi,
-      recurrence: r.rrule,
-      dilutionWaterParts: r.dilutionWaterParts,
-      teaCastingsPerWater: r.teaCastingsPerWater,
-    };
-  };
   // A harvest or drain and the lot it made share one id: the lot's, which draws name.
   const lotIdOf = (eventId: string) => lotByEvent.get(eventId)?.id ?? eventId;
   const eventsOf = (kind: (typeof eventRows)[number]["kind"]) =>
@@ -224,7 +215,8 @@ export async function readGardenInputs(
         priority: p.priority,
         edible: crop.edible,
         edibleTouchesSoil: crop.edibleTouchesSoil,
-        rule: rule(p.feedingRuleId ?? crop.feedingRuleId),
+        // Its own rules replace its crop's; none of either = the feeder class default.
+        rules: rulesOf(p.id) ?? rulesOf(crop.id) ?? [],
       };
     }),
     stockLots: lotRows

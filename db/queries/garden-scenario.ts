@@ -1,15 +1,16 @@
 import "server-only";
-import { asc, eq } from "drizzle-orm";
+import { asc, eq, isNotNull, and } from "drizzle-orm";
 import { getDb, type DbOrTx } from "@/db";
 import { readGardenInputs } from "@/db/queries/garden-inputs";
 import { insertGardenInputs } from "@/db/queries/garden-inputs-write";
-import { beds } from "@/db/schema";
+import { beds, bins, crops, feedingRules, gardens, stockLots } from "@/db/schema";
 import { EngineInputError, type GardenInputs } from "@/lib/engine";
 import { AppError } from "@/lib/errors";
-import { scenarioToInputs } from "@/lib/scenario/to-inputs";
-import { inputsToScenario, type BedSize } from "@/lib/scenario/to-scenario";
+import { emptyRecords, type GardenRecords } from "@/lib/scenario/records";
+import { scenarioRecords, scenarioToInputs } from "@/lib/scenario/to-inputs";
+import { inputsToScenario } from "@/lib/scenario/to-scenario";
 import { parseScenario, type Scenario } from "@/lib/validation/scenario";
-import { si } from "@/lib/validation/scenario-quantity";
+import { rulesByOwner } from "./feeding-rules-write";
 
 // A garden's export and import format is the scenario file (lib/validation/scenario.ts).
 // Import: file → zod → lib/scenario's adapter (the one owner of unit conversion
@@ -29,23 +30,72 @@ export async function exportGardenScenario({
   return db.transaction(
     async (tx) => {
       const inputs = await readGardenInputs(tx, { gardenId, asOf });
-      const sizes = await tx
-        .select({ id: beds.id, lengthM: beds.lengthM, widthM: beds.widthM })
-        .from(beds)
-        .where(eq(beds.gardenId, gardenId))
-        .orderBy(asc(beds.id));
-      const bedSizes = new Map<string, BedSize>();
-      for (const b of sizes)
-        if (b.lengthM !== null && b.widthM !== null)
-          bedSizes.set(b.id, { lengthM: b.lengthM, widthM: b.widthM });
-      return inputsToScenario(inputs, bedSizes);
+      return inputsToScenario(inputs, await readGardenRecords(tx, gardenId));
     },
     { isolationLevel: "repeatable read", accessMode: "read only" },
   );
 }
 
+/**
+ * What the export carries beyond GardenInputs, from rows (one query per table,
+ * scoped by gardenId): location, bed sizes and notes, drain intervals, lot
+ * prices and notes, the garden's named crops with their rules, and which
+ * plantings hold rules of their own.
+ */
+async function readGardenRecords(tx: DbOrTx, gardenId: string): Promise<GardenRecords> {
+  const records = emptyRecords();
+  const [garden] = await tx
+    .select({ location: gardens.location })
+    .from(gardens)
+    .where(eq(gardens.id, gardenId));
+  records.location = garden?.location ?? null;
+  const bedRows = await tx
+    .select({ id: beds.id, lengthM: beds.lengthM, widthM: beds.widthM, notes: beds.notes })
+    .from(beds)
+    .where(eq(beds.gardenId, gardenId))
+    .orderBy(asc(beds.id));
+  for (const b of bedRows) {
+    if (b.lengthM !== null && b.widthM !== null)
+      records.bedSizes.set(b.id, { lengthM: b.lengthM, widthM: b.widthM });
+    if (b.notes !== null) records.bedNotes.set(b.id, b.notes);
+  }
+  const binRows = await tx
+    .select({ id: bins.id, drainIntervalDays: bins.drainIntervalDays })
+    .from(bins)
+    .where(and(eq(bins.gardenId, gardenId), isNotNull(bins.drainIntervalDays)));
+  for (const b of binRows) records.binDrainIntervalDays.set(b.id, b.drainIntervalDays!);
+  const lotRows = await tx
+    .select({ id: stockLots.id, pricePerKg: stockLots.pricePerKg, note: stockLots.note })
+    .from(stockLots)
+    .where(eq(stockLots.gardenId, gardenId));
+  for (const l of lotRows) records.lotDetails.set(l.id, { pricePerKg: l.pricePerKg, note: l.note });
+  const ruleRows = await tx
+    .select()
+    .from(feedingRules)
+    .where(eq(feedingRules.gardenId, gardenId))
+    .orderBy(asc(feedingRules.position));
+  const rulesOf = rulesByOwner(ruleRows);
+  const cropRows = await tx
+    .select()
+    .from(crops)
+    .where(and(eq(crops.gardenId, gardenId), isNotNull(crops.name)))
+    .orderBy(asc(crops.createdAt), asc(crops.id));
+  records.crops = cropRows.map((c) => ({
+    name: c.name!,
+    feederClass: c.feederClass,
+    edible: c.edible,
+    edibleTouchesSoil: c.edibleTouchesSoil,
+    daysToHarvest: c.daysToHarvest,
+    spacingM: c.spacingM,
+    rules: rulesOf(c.id) ?? [],
+  }));
+  for (const r of ruleRows)
+    if (r.plantingId !== null) records.ownRules.set(r.plantingId, rulesOf(r.plantingId)!);
+  return records;
+}
+
 /** Checks a scenario file and turns it into GardenInputs; bad input is a validation error naming the field. */
-function scenarioInputs(raw: unknown): { inputs: GardenInputs; bedSizes: Map<string, BedSize> } {
+function scenarioInputs(raw: unknown): { inputs: GardenInputs; records: GardenRecords } {
   const parsed = parseScenario(raw);
   if (!parsed.ok) {
     const fields = Object.fromEntries(parsed.issues.map((i) => [i.path, i.message]));
@@ -62,10 +112,7 @@ function scenarioInputs(raw: unknown): { inputs: GardenInputs; bedSizes: Map<str
       });
     throw error;
   }
-  const bedSizes = new Map<string, BedSize>();
-  for (const b of scenario.beds)
-    if (b.kind === "bed") bedSizes.set(b.id, { lengthM: si(b.length), widthM: si(b.width) });
-  return { inputs, bedSizes };
+  return { inputs, records: scenarioRecords(scenario) };
 }
 
 /** importGardenScenario inside the caller's transaction (the demo seed uses it). */
@@ -73,8 +120,8 @@ export async function insertGardenScenario(
   tx: DbOrTx,
   { scenario, ownerId, location }: { scenario: unknown; ownerId: string; location?: string | null },
 ): Promise<{ gardenId: string; ids: Map<string, string> }> {
-  const { inputs, bedSizes } = scenarioInputs(scenario);
-  return insertGardenInputs(tx, { inputs, ownerId, bedSizes, location });
+  const { inputs, records } = scenarioInputs(scenario);
+  return insertGardenInputs(tx, { inputs, ownerId, records, location: location ?? undefined });
 }
 
 /**
@@ -89,7 +136,7 @@ export async function importGardenScenario({
   ownerId: string;
 }): Promise<{ gardenId: string; ids: Map<string, string> }> {
   // Parse and convert before opening the transaction: it holds no locks while we check the file.
-  const { inputs, bedSizes } = scenarioInputs(scenario);
+  const { inputs, records } = scenarioInputs(scenario);
   const db = await getDb();
-  return db.transaction((tx) => insertGardenInputs(tx, { inputs, ownerId, bedSizes }));
+  return db.transaction((tx) => insertGardenInputs(tx, { inputs, ownerId, records }));
 }

@@ -1,14 +1,14 @@
 import "server-only";
 import { and, asc, count, eq, gte, inArray, isNotNull, isNull, or } from "drizzle-orm";
 import { getDb, type DbOrTx } from "@/db";
-import { applications, beds, crops, feedingRules, gardens, plantings } from "@/db/schema";
+import { applications, beds, crops, gardens, plantings } from "@/db/schema";
 import { addDays, type FeederClass, type FeedingRuleInput } from "@/lib/engine";
 import { AppError } from "@/lib/errors";
 import {
   CROWDED_REFUSE_RATIO,
   cropFacts,
   crowding,
-  effectiveRule,
+  effectiveRules,
   type RuleSource,
 } from "@/lib/plantings/rules";
 import { ruleInput } from "@/lib/scenario/to-inputs";
@@ -18,9 +18,10 @@ import {
   type CreatePlantingInput,
   type Priority,
 } from "@/lib/validation/planting";
+import { ownRulesChange } from "@/lib/validation/feeding-rule";
 import { si } from "@/lib/validation/scenario-quantity";
 import { adoptCrop } from "./crops";
-import { dropRule, ruleFromRow, writeRule } from "./feeding-rules-write";
+import { readRules, replaceRules } from "./feeding-rules-write";
 import { thenInvalidatePlan } from "./plan-invalidation";
 
 export interface PlantingDto {
@@ -36,10 +37,14 @@ export interface PlantingDto {
   expectedHarvestOn: string | null;
   endedOn: string | null;
   priority: Priority;
-  /** The planting's own override; null = inherits. */
+  /** The planting's own rules, in order; [] = inherits its crop's. */
+  rules: FeedingRuleInput[];
+  /** What it is fed by: its own rules, else its crop's, else the feeder-class default. */
+  effectiveRules: FeedingRuleInput[];
+  ruleSource: RuleSource;
+  /** For the one-rule form until it edits `rules`: rules[0] ?? null, and effectiveRules[0]. */
   rule: FeedingRuleInput | null;
   effectiveRule: FeedingRuleInput;
-  ruleSource: RuleSource;
   notes: string | null;
   archivedOn: string | null;
 }
@@ -63,24 +68,16 @@ async function toDtos(tx: DbOrTx, gardenId: string, rows: (typeof plantings.$inf
     .where(
       and(eq(beds.gardenId, gardenId), inArray(beds.id, [...new Set(rows.map((r) => r.bedId))])),
     );
-  const ruleIds = [
-    ...rows.map((r) => r.feedingRuleId),
-    ...cropRows.map((c) => c.feedingRuleId),
-  ].filter((id): id is string => id !== null);
-  const ruleRows = ruleIds.length
-    ? await tx
-        .select()
-        .from(feedingRules)
-        .where(and(eq(feedingRules.gardenId, gardenId), inArray(feedingRules.id, ruleIds)))
-    : [];
-  const rule = new Map(ruleRows.map((r) => [r.id, ruleFromRow(r)]));
+  const rulesOf = await readRules(tx, gardenId, {
+    plantingIds: rows.map((r) => r.id),
+    cropIds: cropRows.map((c) => c.id),
+  });
   const crop = new Map(cropRows.map((c) => [c.id, c]));
   const bedName = new Map(bedRows.map((b) => [b.id, b.name]));
   return rows.map((p): PlantingDto => {
     const c = crop.get(p.cropId)!;
-    const own = p.feedingRuleId ? (rule.get(p.feedingRuleId) ?? null) : null;
-    const cropRule = c.feedingRuleId ? (rule.get(c.feedingRuleId) ?? null) : null;
-    const eff = effectiveRule(own, cropRule, c.feederClass);
+    const own = rulesOf(p.id) ?? [];
+    const eff = effectiveRules(own, rulesOf(c.id) ?? [], c.feederClass);
     return {
       id: p.id,
       bedId: p.bedId,
@@ -94,9 +91,11 @@ async function toDtos(tx: DbOrTx, gardenId: string, rows: (typeof plantings.$inf
       expectedHarvestOn: p.expectedHarvestOn,
       endedOn: p.endedOn,
       priority: priorityFromRank(p.priority),
-      rule: own,
-      effectiveRule: eff.rule,
+      rules: own,
+      effectiveRules: eff.rules,
       ruleSource: eff.source,
+      rule: own[0] ?? null,
+      effectiveRule: eff.rules[0]!,
       notes: p.notes,
       archivedOn: p.archivedOn,
     };
@@ -221,12 +220,6 @@ export async function createPlantings({
               message: `${crop.name}: closer than the usual spacing.`,
             });
         }
-        const ruleId = await writeRule(
-          tx,
-          gardenId,
-          null,
-          input.rule ? ruleInput(input.rule) : null,
-        );
         const [row] = await tx
           .insert(plantings)
           .values({
@@ -241,10 +234,15 @@ export async function createPlantings({
               (facts.daysToHarvest ? addDays(input.plantedOn, facts.daysToHarvest) : null),
             endedOn: input.endedOn ?? null,
             priority: PRIORITY_RANK[input.priority],
-            feedingRuleId: ruleId,
             notes: input.notes ?? null,
           })
           .returning();
+        await replaceRules(
+          tx,
+          gardenId,
+          { plantingId: row!.id },
+          ownRulesChange(input)?.map(ruleInput),
+        );
         rows.push(row!);
       }
       return { plantings: await toDtos(tx, gardenId, rows), warnings };
@@ -262,8 +260,8 @@ export async function updatePlanting({
   gardenId: string;
   plantingId: string;
   input: CreatePlantingInput;
-  /** undefined: keep the override; null: back to the crop's rule; a rule: override. */
-  ruleChange: CreatePlantingInput["rule"] | undefined;
+  /** undefined: keep its own rules; []: back to the crop's rules; a list: its own rules, in order. */
+  ruleChange: CreatePlantingInput["rules"];
 }): Promise<PlantingDto | null> {
   const db = await getDb();
   return thenInvalidatePlan(
@@ -281,9 +279,7 @@ export async function updatePlanting({
       if (!bed) throw fieldError("bedId", "No such bed or container in this garden.");
       const crop = await adoptCrop(tx, gardenId, input.cropId);
       if (!crop) throw fieldError("cropId", "No such crop in this garden.");
-      const next =
-        ruleChange === undefined ? undefined : ruleChange === null ? null : ruleInput(ruleChange);
-      const ruleId = await writeRule(tx, gardenId, current.feedingRuleId, next);
+      await replaceRules(tx, gardenId, { plantingId }, ruleChange?.map(ruleInput));
       await tx
         .update(plantings)
         .set({
@@ -295,11 +291,9 @@ export async function updatePlanting({
           expectedHarvestOn: input.expectedHarvestOn ?? null,
           endedOn: input.endedOn ?? null,
           priority: PRIORITY_RANK[input.priority],
-          feedingRuleId: ruleId,
           notes: input.notes ?? null,
         })
         .where(and(eq(plantings.gardenId, gardenId), eq(plantings.id, plantingId)));
-      if (next === null) await dropRule(tx, gardenId, current.feedingRuleId);
       return getPlantingById({ gardenId, plantingId, tx });
     }),
   );
@@ -307,7 +301,7 @@ export async function updatePlanting({
 
 /**
  * A planting with logged applications is archived and ended (kept for the
- * record, fed no more after today); one without logs is removed with its own rule.
+ * record, fed no more after today); one without logs is removed with its own rules.
  */
 export async function removePlanting({
   gardenId,
@@ -348,8 +342,7 @@ export async function removePlanting({
       await tx
         .delete(plantings)
         .where(and(eq(plantings.gardenId, gardenId), eq(plantings.id, plantingId)));
-      await dropRule(tx, gardenId, current.feedingRuleId);
-      return { removed: true as const };
+      return { removed: true as const }; // its rules go with it (on delete cascade)
     }),
   );
 }

@@ -29,43 +29,6 @@ import { gardens } from "./gardens";
 // another garden. Nullable engine parameters mean "the engine's default"
 // (lib/engine/defaults.ts); no default is copied into a column.
 
-// A feeding rule is owned by a crop (its default) or by a planting (an override).
-// garden_id is null only for the shared starter list's rules.
-export const feedingRules = pgTable(
-  "feeding_rules",
-  {
-    id: id(),
-    gardenId: uuid("garden_id").references(() => gardens.id, { onDelete: "cascade" }),
-    material: materialEnum("material").notNull(),
-    method: methodEnum("method").notNull(),
-    basis: basisEnum("basis").notNull(),
-    // What amount_si measures per basis unit (plant, m² of bed, L of container):
-    // kg ("mass"), L ("volume"; liquids as applied), or percent 0–100 of the mix volume.
-    amountMeasure: amountMeasureEnum("amount_measure").notNull(),
-    amountSi: quantity("amount_si").notNull(),
-    // Leachate: parts of water per part of leachate; null = the engine's default.
-    dilutionWaterParts: quantity("dilution_water_parts"),
-    // Tea: litres of castings per litre of water; null = the garden's setting.
-    teaCastingsPerWater: quantity("tea_castings_per_water"),
-    // RFC 5545 RRULE body, e.g. "FREQ=MONTHLY;BYMONTHDAY=1".
-    rrule: text("rrule").notNull(),
-    createdAt: createdAt(),
-  },
-  (t) => [
-    index("feeding_rules_garden_idx").on(t.gardenId),
-    unique("feeding_rules_garden_id_id").on(t.gardenId, t.id),
-    check("feeding_rules_amount_non_negative", sql`${t.amountSi} >= 0`),
-    check(
-      "feeding_rules_percent_of_mix",
-      sql`(${t.basis} = 'percent-of-mix') = (${t.amountMeasure} = 'percent-of-mix')`,
-    ),
-    check(
-      "feeding_rules_liquids_by_volume",
-      sql`${t.material} = 'castings' or ${t.amountMeasure} = 'volume'`,
-    ),
-  ],
-);
-
 export const beds = pgTable(
   "beds",
   {
@@ -110,8 +73,6 @@ export const crops = pgTable(
     // Decides 120 vs 90 days for manure-fed outputs (7 CFR 205.203(c)(1)).
     edibleTouchesSoil: boolean("edible_touches_soil").notNull(),
     edible: boolean("edible").notNull(),
-    // null = the engine's default rule for the feeder class.
-    feedingRuleId: uuid("feeding_rule_id"),
     // Typical days from planting to harvest and spacing between plants; null =
     // not known (a garden's own crop entered without them).
     daysToHarvest: smallint("days_to_harvest"),
@@ -122,18 +83,7 @@ export const crops = pgTable(
   (t) => [
     index("crops_garden_idx").on(t.gardenId),
     unique("crops_garden_id_id").on(t.gardenId, t.id),
-    // The shared starter crops carry no rule (the engine's default for the class
-    // applies), so every crop rule there is is checked by the garden-scoped key.
-    check(
-      "crops_starter_without_rule",
-      sql`${t.gardenId} is not null or ${t.feedingRuleId} is null`,
-    ),
     check("crops_starter_named", sql`${t.gardenId} is not null or ${t.name} is not null`),
-    foreignKey({
-      name: "crops_rule_same_garden_fk",
-      columns: [t.gardenId, t.feedingRuleId],
-      foreignColumns: [feedingRules.gardenId, feedingRules.id],
-    }),
   ],
 );
 
@@ -157,8 +107,6 @@ export const plantings = pgTable(
     endedOn: date("ended_on"),
     // 1 is fed first when stock is short; null = the engine's default.
     priority: integer("priority"),
-    // An override of the crop's rule; null = the crop's rule.
-    feedingRuleId: uuid("feeding_rule_id"),
     notes: text("notes"),
     archivedOn: date("archived_on"),
     createdAt: createdAt(),
@@ -179,10 +127,68 @@ export const plantings = pgTable(
       columns: [t.gardenId, t.cropId],
       foreignColumns: [crops.gardenId, crops.id],
     }),
+  ],
+);
+
+// Feeding rules: each belongs to exactly one owner, a crop (its defaults) or a
+// planting (its own rules, which replace the crop's: a planting with none
+// inherits them; a crop with none has the engine's default for its feeder
+// class). An owner holds several (castings monthly and tea every two weeks),
+// in `position` order. The owner keys are composite with garden_id, so a rule
+// can only belong to a crop or planting of its own garden, and it goes with
+// its owner. The shared starter crops carry no rules (garden_id is required).
+export const feedingRules = pgTable(
+  "feeding_rules",
+  {
+    id: id(),
+    gardenId: uuid("garden_id")
+      .notNull()
+      .references(() => gardens.id, { onDelete: "cascade" }),
+    plantingId: uuid("planting_id"),
+    cropId: uuid("crop_id"),
+    // Order within the owner (0, 1, …): the first rule of a material keeps the
+    // plain stable feeding id (lib/engine/plan/demand.ts).
+    position: smallint("position").notNull(),
+    material: materialEnum("material").notNull(),
+    method: methodEnum("method").notNull(),
+    basis: basisEnum("basis").notNull(),
+    // What amount_si measures per basis unit (plant, m² of bed, L of container):
+    // kg ("mass"), L ("volume"; liquids as applied), or percent 0–100 of the mix volume.
+    amountMeasure: amountMeasureEnum("amount_measure").notNull(),
+    amountSi: quantity("amount_si").notNull(),
+    // Leachate: parts of water per part of leachate; null = the engine's default.
+    dilutionWaterParts: quantity("dilution_water_parts"),
+    // Tea: litres of castings per litre of water; null = the garden's setting.
+    teaCastingsPerWater: quantity("tea_castings_per_water"),
+    // RFC 5545 RRULE body, e.g. "FREQ=MONTHLY;BYMONTHDAY=1".
+    rrule: text("rrule").notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [
+    index("feeding_rules_garden_idx").on(t.gardenId),
+    unique("feeding_rules_garden_id_id").on(t.gardenId, t.id),
+    unique("feeding_rules_planting_position").on(t.plantingId, t.position),
+    unique("feeding_rules_crop_position").on(t.cropId, t.position),
+    check("feeding_rules_one_owner", sql`num_nonnulls(${t.plantingId}, ${t.cropId}) = 1`),
+    check("feeding_rules_position_non_negative", sql`${t.position} >= 0`),
+    check("feeding_rules_amount_non_negative", sql`${t.amountSi} >= 0`),
+    check(
+      "feeding_rules_percent_of_mix",
+      sql`(${t.basis} = 'percent-of-mix') = (${t.amountMeasure} = 'percent-of-mix')`,
+    ),
+    check(
+      "feeding_rules_liquids_by_volume",
+      sql`${t.material} = 'castings' or ${t.amountMeasure} = 'volume'`,
+    ),
     foreignKey({
-      name: "plantings_rule_same_garden_fk",
-      columns: [t.gardenId, t.feedingRuleId],
-      foreignColumns: [feedingRules.gardenId, feedingRules.id],
-    }),
+      name: "feeding_rules_planting_same_garden_fk",
+      columns: [t.gardenId, t.plantingId],
+      foreignColumns: [plantings.gardenId, plantings.id],
+    }).onDelete("cascade"),
+    foreignKey({
+      name: "feeding_rules_crop_same_garden_fk",
+      columns: [t.gardenId, t.cropId],
+      foreignColumns: [crops.gardenId, crops.id],
+    }).onDelete("cascade"),
   ],
 );

@@ -31,20 +31,26 @@ function amountLimit(rule: FeedingRuleInput) {
   );
 }
 
-/** The rule a planting is fed by, its feeder-class default when it has none of its own. */
-function ruleOf(p: PlantingInput): FeedingRuleInput {
-  if (p.rule) return p.rule;
+/**
+ * The rules a planting is fed by, its feeder-class default when it has none.
+ * A "planting-amount" change is in the first rule's measure; every other rule
+ * of the planting is scaled by the same factor (a rate cut cuts each rule).
+ */
+function rulesOf(p: PlantingInput): FeedingRuleInput[] {
+  if (p.rules.length) return p.rules;
   const d = defaultRuleFor(p.feederClass);
-  return {
-    material: d.material,
-    method: d.method,
-    basis: d.basis,
-    measure: "volume",
-    amount: d.amount,
-    recurrence: d.recurrence,
-    dilutionWaterParts: null,
-    teaCastingsPerWater: null,
-  };
+  return [
+    {
+      material: d.material,
+      method: d.method,
+      basis: d.basis,
+      measure: "volume",
+      amount: d.amount,
+      recurrence: d.recurrence,
+      dilutionWaterParts: null,
+      teaCastingsPerWater: null,
+    },
+  ];
 }
 
 /**
@@ -66,13 +72,17 @@ export function applyWhatIf(
         fields[`${at}.plantingId`] = "no such planting in this garden";
         return;
       }
-      const rule = ruleOf(planting);
+      const rules = rulesOf(planting);
+      const rule = rules[0]!;
       const limit = amountLimit(rule);
       if (limit && change.amount > limit.max) {
         fields[`${at}.amount`] = `must be at most ${limit.max} ${limit.unit} for this planting`;
         return;
       }
-      planting.rule = { ...rule, amount: change.amount };
+      const factor = rule.amount > 0 ? change.amount / rule.amount : 1;
+      planting.rules = rules.map((r, k) =>
+        k === 0 ? { ...r, amount: change.amount } : { ...r, amount: r.amount * factor },
+      );
       return;
     }
     const binId = change.kind === "add-bin" ? change.likeBinId : change.binId;

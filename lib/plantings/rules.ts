@@ -22,15 +22,18 @@ export function defaultRuleInput(feederClass: FeederClass): FeedingRuleInput {
   };
 }
 
-/** A planting's own rule wins, then its crop's, then the feeder-class default (as loadGardenInputs decides). */
-export function effectiveRule(
-  own: FeedingRuleInput | null,
-  crop: FeedingRuleInput | null,
+/**
+ * The rules a planting is fed by: its own when it has any, else its crop's,
+ * else the feeder-class default (as loadGardenInputs decides).
+ */
+export function effectiveRules(
+  own: readonly FeedingRuleInput[],
+  crop: readonly FeedingRuleInput[],
   feederClass: FeederClass,
-): { rule: FeedingRuleInput; source: RuleSource } {
-  if (own) return { rule: own, source: "planting" };
-  if (crop) return { rule: crop, source: "crop" };
-  return { rule: defaultRuleInput(feederClass), source: "default" };
+): { rules: FeedingRuleInput[]; source: RuleSource } {
+  if (own.length) return { rules: [...own], source: "planting" };
+  if (crop.length) return { rules: [...crop], source: "crop" };
+  return { rules: [defaultRuleInput(feederClass)], source: "default" };
 }
 
 /**

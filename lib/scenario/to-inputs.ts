@@ -15,6 +15,8 @@ import type {
 } from "@/lib/engine";
 import { dflt, trayInsideFromOuter } from "@/lib/engine";
 import {
+  cropKey,
+  ownRulesOf,
   scenarioDrainId,
   scenarioHarvestId,
   type Scenario,
@@ -22,10 +24,12 @@ import {
   type ScenarioBin,
   type ScenarioPlanting,
 } from "@/lib/validation/scenario";
+import type { GardenRecords } from "@/lib/scenario/records";
 import { si, siRatio } from "@/lib/validation/scenario-quantity";
 import { quantityOf, toSi, type UnitName } from "@/lib/units";
 
 type Rule = NonNullable<ScenarioPlanting["rule"]>;
+const NO_RULES: readonly Rule[] = [];
 
 /** Castings typed by volume (a cup, a litre) are weighed at the default bulk density. */
 function castingsKg(q: { value: number; unit: string }): number {
@@ -128,7 +132,9 @@ export function ruleInput(rule: Rule): FeedingRuleInput {
   return { ...base, measure: "volume", amount: toSi(a.value, unit) / per };
 }
 
-function plantingInput(p: ScenarioPlanting): PlantingInput {
+/** `inherited`: the rules of the planting's crop (crops[]), used when it has none of its own. */
+function plantingInput(p: ScenarioPlanting, inherited: readonly Rule[]): PlantingInput {
+  const own = ownRulesOf(p);
   return {
     id: p.id,
     bedId: p.bedId,
@@ -141,7 +147,7 @@ function plantingInput(p: ScenarioPlanting): PlantingInput {
     priority: p.priority ?? null,
     edible: p.edible ?? true,
     edibleTouchesSoil: p.edibleTouchesSoil ?? false,
-    rule: p.rule ? ruleInput(p.rule) : null,
+    rules: (own.length ? own : inherited).map(ruleInput),
   };
 }
 
@@ -177,6 +183,7 @@ export function scenarioToInputs(
     })),
   );
   const logs = s.logs ?? {};
+  const cropRules = new Map((s.crops ?? []).map((c) => [cropKey(c), c.rules ?? NO_RULES]));
   // What each lot holds, so an adjustment typed by volume is weighed like its lot.
   const leachateLots = new Set([
     ...drains.map((d) => d.id),
@@ -197,7 +204,7 @@ export function scenarioToInputs(
     },
     bins: s.bins.map((b, i) => binInput(b, `bins[${i}]`)),
     beds: s.beds.map(bedInput),
-    plantings: s.plantings.map(plantingInput),
+    plantings: s.plantings.map((p) => plantingInput(p, cropRules.get(cropKey(p)) ?? NO_RULES)),
     stockLots: (s.stock?.lots ?? [])
       .filter((l) => l.madeOn <= asOf)
       .map((l) => ({
@@ -259,5 +266,43 @@ export function scenarioToInputs(
         .filter((o) => o.date <= asOf),
     },
     asOf,
+  };
+}
+
+/** What the file says beyond GardenInputs (lib/scenario/records.ts), ids as in the file. */
+export function scenarioRecords(s: Scenario): GardenRecords {
+  const bedSizes = new Map<string, { lengthM: number; widthM: number }>();
+  for (const b of s.beds)
+    if (b.kind === "bed") bedSizes.set(b.id, { lengthM: si(b.length), widthM: si(b.width) });
+  return {
+    location: s.garden.location ?? null,
+    bedSizes,
+    bedNotes: new Map(s.beds.flatMap((b) => (b.notes === undefined ? [] : [[b.id, b.notes]]))),
+    binDrainIntervalDays: new Map(
+      s.bins.flatMap((b) =>
+        b.drainIntervalDays === undefined ? [] : [[b.id, b.drainIntervalDays]],
+      ),
+    ),
+    lotDetails: new Map(
+      (s.stock?.lots ?? []).map((l) => [
+        l.id,
+        { pricePerKg: l.pricePerKg ?? null, note: l.note ?? null },
+      ]),
+    ),
+    crops: (s.crops ?? []).map((c) => ({
+      name: c.name,
+      feederClass: c.feederClass,
+      edible: c.edible ?? true,
+      edibleTouchesSoil: c.edibleTouchesSoil ?? false,
+      daysToHarvest: c.daysToHarvest ?? null,
+      spacingM: c.spacing ? si(c.spacing) : null,
+      rules: (c.rules ?? []).map(ruleInput),
+    })),
+    ownRules: new Map(
+      s.plantings.flatMap((p) => {
+        const own = ownRulesOf(p);
+        return own.length ? [[p.id, own.map(ruleInput)]] : [];
+      }),
+    ),
   };
 }

@@ -4,14 +4,9 @@
 // and every GardenInputs field the engine reads is written when it is not the
 // engine default (null), so database → export → import gives the same inputs.
 import type { FeedingRuleInput, GardenInputs } from "@/lib/engine";
+import type { GardenRecords } from "@/lib/scenario/records";
 import { toSi } from "@/lib/units";
-import { SCENARIO_FORMAT, type Scenario } from "@/lib/validation/scenario";
-
-/** A bed's length and width, m, when the source knows them (GardenInputs keeps only the area). */
-export interface BedSize {
-  lengthM: number;
-  widthM: number;
-}
+import { SCENARIO_FORMAT, cropKey, type Scenario } from "@/lib/validation/scenario";
 
 const pad = (n: number) => String(n).padStart(2, "0");
 const m = (value: number) => ({ value, unit: "m" as const });
@@ -26,18 +21,34 @@ function ruleAmount(r: FeedingRuleInput) {
   return { ...kg(r.amount), per: r.basis === "per-area" ? "m2" : "L" };
 }
 
-/** GardenInputs (+ bed sizes) → scenario file. */
-export function inputsToScenario(
-  inputs: GardenInputs,
-  bedSizes: ReadonlyMap<string, BedSize>,
-): Scenario {
+/** A rule as the scenario writes it. */
+function ruleOut(r: FeedingRuleInput) {
+  return {
+    material: r.material,
+    method: r.method,
+    basis: r.basis,
+    amount: ruleAmount(r),
+    recurrence: r.recurrence,
+    dilutionWaterParts: r.dilutionWaterParts ?? undefined,
+    teaCastingsPerWater: r.teaCastingsPerWater ?? undefined,
+  };
+}
+
+/** GardenInputs (+ what the export carries beyond them) → scenario file. */
+export function inputsToScenario(inputs: GardenInputs, records: GardenRecords): Scenario {
   const { settings, logs } = inputs;
+  const { bedSizes } = records;
   const md = (d: { month: number; day: number }) => `${pad(d.month)}-${pad(d.day)}`;
-  const opt = <T>(v: T | null) => (v === null ? undefined : v);
+  const opt = <T>(v: T | null | undefined) => (v === null ? undefined : v);
+  const listed = new Set(records.crops.map((c) => cropKey(c)));
+  // A planting with no rules of its own, whose crop is listed, inherits the crop's:
+  // writing none keeps it inheriting after an import.
+  const plantingRules = (p: GardenInputs["plantings"][number]) =>
+    records.ownRules.has(p.id) || !listed.has(cropKey(p)) ? p.rules : [];
   const scenario = {
     format: SCENARIO_FORMAT,
     version: 1,
-    garden: { name: inputs.garden.name },
+    garden: { name: inputs.garden.name, location: opt(records.location) },
     settings: {
       unitSystem: settings.unitSystem,
       timeZone: settings.timeZone,
@@ -79,6 +90,7 @@ export function inputsToScenario(
           ? undefined
           : { ...kg(b.densityCeilingKgPerM2), per: "m2" as const },
       retiredOn: opt(b.retiredOn),
+      drainIntervalDays: opt(records.binDrainIntervalDays.get(b.id)),
       logs: {
         harvests: logs.harvests
           .filter((h) => h.binId === b.id)
@@ -102,6 +114,7 @@ export function inputsToScenario(
             indoor: b.indoor,
             length: m(bedSizes.get(b.id)?.lengthM ?? Math.sqrt(b.areaM2 ?? 0)),
             width: m(bedSizes.get(b.id)?.widthM ?? Math.sqrt(b.areaM2 ?? 0)),
+            notes: opt(records.bedNotes.get(b.id)),
           }
         : {
             id: b.id,
@@ -109,8 +122,18 @@ export function inputsToScenario(
             kind: "container" as const,
             indoor: b.indoor,
             volume: litres(b.containerVolumeL ?? 0),
+            notes: opt(records.bedNotes.get(b.id)),
           },
     ),
+    crops: records.crops.map((c) => ({
+      name: c.name,
+      feederClass: c.feederClass,
+      edible: c.edible,
+      edibleTouchesSoil: c.edibleTouchesSoil,
+      daysToHarvest: opt(c.daysToHarvest),
+      spacing: c.spacingM === null ? undefined : m(c.spacingM),
+      rules: c.rules.length ? c.rules.map(ruleOut) : undefined,
+    })),
     plantings: inputs.plantings.map((p) => ({
       id: p.id,
       bedId: p.bedId,
@@ -123,18 +146,7 @@ export function inputsToScenario(
       priority: opt(p.priority),
       edible: p.edible,
       edibleTouchesSoil: p.edibleTouchesSoil,
-      rule:
-        p.rule === null
-          ? undefined
-          : {
-              material: p.rule.material,
-              method: p.rule.method,
-              basis: p.rule.basis,
-              amount: ruleAmount(p.rule),
-              recurrence: p.rule.recurrence,
-              dilutionWaterParts: opt(p.rule.dilutionWaterParts),
-              teaCastingsPerWater: opt(p.rule.teaCastingsPerWater),
-            },
+      rules: plantingRules(p).length ? plantingRules(p).map(ruleOut) : undefined,
     })),
     stock: {
       lots: inputs.stockLots.map((l) => ({
@@ -144,6 +156,8 @@ export function inputsToScenario(
         madeOn: l.madeOn,
         amount: l.material === "castings" ? kg(l.amount) : litres(l.amount),
         manureFeedstock: opt(l.manureFeedstock),
+        pricePerKg: opt(records.lotDetails.get(l.id)?.pricePerKg),
+        note: opt(records.lotDetails.get(l.id)?.note),
       })),
     },
     logs: {

@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { feederClassSchema } from "@/lib/validation/engine-inputs";
-import { feedingRuleSchema } from "@/lib/validation/feeding-rule";
+import { checkOwnRules, ownRulesFields } from "@/lib/validation/feeding-rule";
 import { quantitySchema } from "@/lib/validation/scenario-quantity";
 
 // A garden's own crop, or its change to a starter crop's default.
@@ -14,14 +14,14 @@ const cropFields = z.object({
   daysToHarvest: z.number().int().min(1, "At least one day.").max(1000).nullish(),
   /** Distance between plants: the crowding check uses it. */
   spacing: quantitySchema("length", 10).nullish(),
-  /** null = the engine's default rule for the feeder class. */
-  rule: feedingRuleSchema.nullish(),
+  /** What its plantings inherit (`rules`, or one `rule`); none = the engine's default for the feeder class. */
+  ...ownRulesFields,
 });
 
-export const createCropSchema = cropFields;
+export const createCropSchema = cropFields.superRefine(checkOwnRules);
 export type CreateCropInput = z.infer<typeof createCropSchema>;
 
-export const updateCropSchema = cropFields.partial();
+export const updateCropSchema = cropFields.partial().superRefine(checkOwnRules);
 export type UpdateCropInput = z.infer<typeof updateCropSchema>;
 
 export const listCropsQuerySchema = z.object({

@@ -16,3 +16,34 @@ export const feedingRuleSchema = z.preprocess((value) => {
 }, ruleSchema);
 
 export type FeedingRuleBody = z.infer<typeof feedingRuleSchema>;
+
+/** More rules than this on one planting or crop is a slip. */
+export const MAX_RULES = 10;
+
+/**
+ * A planting's or crop's own rules as a request sends them: `rules` (in order;
+ * [] = none of its own), or the single `rule` the one-rule form sends (a rule =
+ * `rules: [rule]`, null = none). Not both.
+ */
+export const ownRulesFields = {
+  rule: feedingRuleSchema.nullish(),
+  rules: z.array(feedingRuleSchema).max(MAX_RULES, `At most ${MAX_RULES} rules.`).optional(),
+};
+
+type OwnRulesBody = { rule?: FeedingRuleBody | null; rules?: FeedingRuleBody[] };
+
+export function checkOwnRules(body: OwnRulesBody, ctx: z.RefinementCtx): void {
+  if (body.rules !== undefined && body.rule !== undefined)
+    ctx.addIssue({
+      code: "custom",
+      path: ["rules"],
+      message: "Send either rule or rules, not both.",
+    });
+}
+
+/** undefined: leave the rules as they are; []: none of its own; a list: replaces them. */
+export function ownRulesChange(body: OwnRulesBody): FeedingRuleBody[] | undefined {
+  if (body.rules !== undefined) return body.rules;
+  if (body.rule === undefined) return undefined;
+  return body.rule === null ? [] : [body.rule];
+}

@@ -1,9 +1,9 @@
 import { z } from "zod";
-import { feedingRuleSchema } from "@/lib/validation/feeding-rule";
+import { checkOwnRules, ownRulesFields } from "@/lib/validation/feeding-rule";
 import { quantitySchema } from "@/lib/validation/scenario-quantity";
 
 // A planting: crop × count in a bed or container, its dates and priority, and
-// optionally its own feeding rule (an override of the crop's).
+// optionally its own feeding rules (replacing the crop's).
 
 export const isoDay = (label: string) =>
   z
@@ -37,8 +37,8 @@ const plantingFields = z.object({
   expectedHarvestOn: isoDay("expected harvest date").nullish(),
   endedOn: isoDay("end date").nullish(),
   priority: prioritySchema.default("normal"),
-  /** null = the crop's rule. */
-  rule: feedingRuleSchema.nullish(),
+  /** Its own rules (`rules`, or one `rule`); none = the crop's rules. */
+  ...ownRulesFields,
   notes: z.string().trim().max(1000, "Use at most 1,000 characters.").nullish(),
   /** The grower saw the crowding warning and plants them anyway. */
   confirmCrowded: z.boolean().optional(),
@@ -62,10 +62,13 @@ function checkDates(p: PlantingFields, ctx: z.RefinementCtx): void {
     });
 }
 
-export const createPlantingSchema = plantingFields.superRefine(checkDates);
+export const createPlantingSchema = plantingFields.superRefine((p, ctx) => {
+  checkDates(p, ctx);
+  checkOwnRules(p, ctx);
+});
 export type CreatePlantingInput = z.infer<typeof createPlantingSchema>;
 
-export const updatePlantingSchema = plantingFields.partial();
+export const updatePlantingSchema = plantingFields.partial().superRefine(checkOwnRules);
 export type UpdatePlantingInput = z.infer<typeof updatePlantingSchema>;
 export { checkDates as checkPlantingDates };
 

@@ -10,6 +10,7 @@ import {
 } from "@/lib/validation/engine-inputs";
 import { quantitySchema, ratioSchema } from "@/lib/validation/scenario-quantity";
 import { ruleSchema } from "@/lib/validation/scenario-rule";
+import { plainText } from "@/lib/validation/text";
 
 /** Default ids of logged harvests and drains, so applications and adjustments can name the lot. */
 export const scenarioHarvestId = (binId: string, date: string) => `${binId}:harvest:${date}`;
@@ -23,6 +24,8 @@ export const SCENARIO_FORMAT = "castline-scenario";
 
 const id = z.string().trim().min(1).max(100);
 const month = z.number().int().min(1).max(12);
+/** Rules of one planting or crop, in order (castings monthly and tea every two weeks). */
+const rulesSchema = z.array(ruleSchema).max(20);
 
 function isTimeZone(tz: string): boolean {
   try {
@@ -103,6 +106,8 @@ const binSchema = z
     densityCeiling: ratioSchema("mass", "area", 100).optional(),
     /** Last day the bin is in use. */
     retiredOn: isoDateSchema.optional(),
+    /** Days between drains of the base. */
+    drainIntervalDays: z.number().int().min(1).max(365).optional(),
     logs: z
       .object({
         harvests: z
@@ -154,6 +159,7 @@ const bedSchema = z.discriminatedUnion("kind", [
       indoor: z.boolean().optional(),
       length: quantitySchema("length", GEOMETRY_LIMITS.bedSideM),
       width: quantitySchema("length", GEOMETRY_LIMITS.bedSideM),
+      notes: z.string().max(1000).optional(),
     })
     .strict(),
   z
@@ -163,6 +169,7 @@ const bedSchema = z.discriminatedUnion("kind", [
       kind: z.literal("container"),
       indoor: z.boolean().optional(),
       volume: quantitySchema("volume", GEOMETRY_LIMITS.containerVolumeL),
+      notes: z.string().max(1000).optional(),
     })
     .strict(),
 ]);
@@ -180,6 +187,9 @@ const plantingSchema = z
     priority: z.number().finite().min(0).max(100).optional(),
     edible: z.boolean().optional(),
     edibleTouchesSoil: z.boolean().optional(),
+    /** The planting's own rules, replacing its crop's; absent or [] = the crop's (crops[]), else the feeder class default. */
+    rules: rulesSchema.optional(),
+    /** One rule, as files written before `rules` have it: read as `rules: [rule]`. */
     rule: ruleSchema.optional(),
   })
   .strict()
@@ -187,7 +197,45 @@ const plantingSchema = z
     if (p.endDate !== undefined && p.endDate < p.startDate) {
       ctx.addIssue({ code: "custom", path: ["endDate"], message: "must not be before startDate" });
     }
+    if (p.rule !== undefined && p.rules !== undefined)
+      ctx.addIssue({ code: "custom", path: ["rule"], message: "give either rule or rules" });
   });
+
+/** The rules a planting gives itself: `rules`, or an older file's single `rule`. */
+export const ownRulesOf = (p: ScenarioPlanting) => p.rules ?? (p.rule ? [p.rule] : []);
+
+/**
+ * A crop of the garden's list: its facts, typical days to harvest and spacing,
+ * and the rules its plantings inherit. A planting belongs to the crop with the
+ * same name, feeder class and edible facts (cropKey).
+ */
+const cropSchema = z
+  .object({
+    name: z.string().trim().min(1).max(100),
+    feederClass: feederClassSchema,
+    edible: z.boolean().optional(),
+    edibleTouchesSoil: z.boolean().optional(),
+    daysToHarvest: z.number().int().min(1).max(1000).optional(),
+    spacing: quantitySchema("length", 10).optional(),
+    rules: rulesSchema.optional(),
+  })
+  .strict();
+
+/** Which crop a planting (or crop entry) is: the same facts a garden's crop row holds. */
+export function cropKey(c: {
+  crop?: string | null;
+  name?: string | null;
+  feederClass: string;
+  edible?: boolean;
+  edibleTouchesSoil?: boolean;
+}): string {
+  return JSON.stringify([
+    c.name ?? c.crop ?? null,
+    c.feederClass,
+    c.edible ?? true,
+    c.edibleTouchesSoil ?? false,
+  ]);
+}
 
 const lotSchema = z
   .object({
@@ -197,6 +245,9 @@ const lotSchema = z
     madeOn: isoDateSchema,
     amount: quantitySchema(["mass", "volume"], 100_000, true),
     manureFeedstock: z.boolean().optional(),
+    /** Bought castings: what was paid per kg, in the garden's currency. */
+    pricePerKg: z.number().finite().nonnegative().max(1000).optional(),
+    note: z.string().max(300).optional(),
   })
   .strict();
 
@@ -273,10 +324,16 @@ export const scenarioSchema = z
   .object({
     format: z.literal(SCENARIO_FORMAT),
     version: z.literal(1),
-    garden: z.object({ name: z.string().trim().min(1).max(80) }).strict(),
+    garden: z
+      .object({
+        name: z.string().trim().min(1).max(80),
+        location: plainText().max(200).optional(),
+      })
+      .strict(),
     settings: settingsSchema,
     bins: z.array(binSchema).max(50),
     beds: z.array(bedSchema).max(5000),
+    crops: z.array(cropSchema).max(5000).optional(),
     plantings: z.array(plantingSchema).max(20_000),
     stock: z
       .object({ lots: z.array(lotSchema).max(1000) })
@@ -299,8 +356,20 @@ function crossCheck(s: z.infer<typeof scenarioSchema>, ctx: z.RefinementCtx): vo
   dupes(s.bins, "bins");
   dupes(s.beds, "beds");
   dupes(s.plantings, "plantings");
+  const cropKeys = new Set<string>();
+  (s.crops ?? []).forEach((c, i) => {
+    const key = cropKey(c);
+    if (cropKeys.has(key))
+      ctx.addIssue({
+        code: "custom",
+        path: ["crops", i, "name"],
+        message: `crop "${c.name}" is listed twice with the same facts`,
+      });
+    cropKeys.add(key);
+  });
   const beds = new Map(s.beds.map((b) => [b.id, b]));
   const bins = new Set(s.bins.map((b) => b.id));
+  const cropRules = new Map((s.crops ?? []).map((c) => [cropKey(c), c.rules ?? []]));
   s.plantings.forEach((p, i) => {
     const bed = beds.get(p.bedId);
     if (!bed)
@@ -309,12 +378,14 @@ function crossCheck(s: z.infer<typeof scenarioSchema>, ctx: z.RefinementCtx): vo
         path: ["plantings", i, "bedId"],
         message: `no bed with id "${p.bedId}"`,
       });
-    const rule = p.rule?.recurrence ?? "FREQ=MONTHLY";
-    let bounded = true;
+    // The rules it is fed by: its own, else its crop's; none = the default, which never ends.
+    const own = ownRulesOf(p);
+    const rules = own.length ? own : (cropRules.get(cropKey(p)) ?? []);
+    let bounded = rules.length > 0;
     try {
-      bounded = isBoundedRule(rule);
+      bounded &&= rules.every((r) => isBoundedRule(r.recurrence));
     } catch {
-      return; // the rule's own error is already reported at rule.recurrence
+      return; // the rule's own error is already reported at its recurrence
     }
     // Outdoors the growing season ends an open-ended rule; indoors nothing does.
     if (!bounded && p.endDate === undefined && bed.indoor) {
@@ -322,7 +393,7 @@ function crossCheck(s: z.infer<typeof scenarioSchema>, ctx: z.RefinementCtx): vo
         code: "custom",
         path: ["plantings", i, "endDate"],
         message:
-          "is needed: the rule never ends (no COUNT or UNTIL) and an indoor bed has no growing season to end it",
+          "is needed: a rule never ends (no COUNT or UNTIL) and an indoor bed has no growing season to end it",
       });
     }
   });
@@ -376,6 +447,7 @@ export type Scenario = z.infer<typeof scenarioSchema>;
 export type ScenarioBin = Scenario["bins"][number];
 export type ScenarioBed = Scenario["beds"][number];
 export type ScenarioPlanting = Scenario["plantings"][number];
+export type ScenarioCrop = NonNullable<Scenario["crops"]>[number];
 
 export interface ScenarioIssue {
   path: string; // e.g. "bins[0].tray.inside.length.unit"

@@ -157,7 +157,7 @@ describe("plantings", () => {
     const inBed = inputs.plantings.filter((p) => p.bedId === b.id);
     expect(inBed.map((p) => p.plantCount).sort()).toEqual([4, 6]);
     // Heavy feeders (PRODUCT.md: tomato and pepper fed 1 cup per plant monthly by default).
-    expect(inBed.every((p) => p.feederClass === "heavy" && p.rule === null)).toBe(true);
+    expect(inBed.every((p) => p.feederClass === "heavy" && p.rules.length === 0)).toBe(true);
   });
 
   it("names an unknown crop in quick entry and writes nothing", async () => {

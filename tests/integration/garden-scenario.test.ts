@@ -6,7 +6,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { getDb } from "@/db";
 import { loadGardenInputs } from "@/db/queries/garden-inputs";
 import { exportGardenScenario, importGardenScenario } from "@/db/queries/garden-scenario";
-import { bins, feedingRules, gardens, plantings, users } from "@/db/schema";
+import { bins, feedingRules, gardens, users } from "@/db/schema";
 import { computePlan, type GardenInputs } from "@/lib/engine";
 import { scenarioToInputs } from "@/lib/scenario/to-inputs";
 import { parseScenario } from "@/lib/validation/scenario";
@@ -397,10 +397,10 @@ describe("database → export → import, with every field set", () => {
       .where(eq(bins.id, id("north")));
     const ruleOf = async (planting: string) => {
       const [row] = await db
-        .select({ ruleId: plantings.feedingRuleId })
-        .from(plantings)
-        .where(eq(plantings.id, id(planting)));
-      return row!.ruleId!;
+        .select({ ruleId: feedingRules.id })
+        .from(feedingRules)
+        .where(eq(feedingRules.plantingId, id(planting)));
+      return row!.ruleId;
     };
     await db
       .update(feedingRules)
@@ -426,7 +426,7 @@ describe("database → export → import, with every field set", () => {
       manureFeedstock: true,
     });
     const ruleFor = (g: GardenInputs, planting: string) =>
-      g.plantings.find((p) => p.id === planting)!.rule;
+      g.plantings.find((p) => p.id === planting)!.rules[0];
     expect(ruleFor(inputsA, id("squash"))).toMatchObject({ measure: "mass", amount: 0.4 });
     expect(ruleFor(inputsA, id("herbs"))).toMatchObject({ measure: "mass", amount: 0.05 });
     expect(ruleFor(inputsA, id("kale"))).toMatchObject({ teaCastingsPerWater: 0.2 });

@@ -25,9 +25,6 @@ async function makeGarden(ids: Ids, name: string): Promise<void> {
   ids.garden =
     await one(sql`insert into gardens (name, time_zone, last_spring_frost, first_fall_frost)
     values (${name}, 'America/Chicago', '2026-04-15', '2026-10-20') returning id`);
-  ids.rule =
-    await one(sql`insert into feeding_rules (garden_id, material, method, basis, amount_measure, amount_si, rrule)
-    values (${ids.garden}, 'castings', 'top-dress', 'per-plant', 'mass', 0.1, 'FREQ=MONTHLY') returning id`);
   ids.crop =
     await one(sql`insert into crops (garden_id, name, feeder_class, edible, edible_touches_soil)
     values (${ids.garden}, 'Tomato', 'heavy', true, false) returning id`);
@@ -36,6 +33,11 @@ async function makeGarden(ids: Ids, name: string): Promise<void> {
   ids.planting =
     await one(sql`insert into plantings (garden_id, bed_id, crop_id, plant_count, planted_on)
     values (${ids.garden}, ${ids.bed}, ${ids.crop}, 6, '2026-05-10') returning id`);
+  ids.rule =
+    await one(sql`insert into feeding_rules (garden_id, planting_id, position, material, method, basis,
+      amount_measure, amount_si, rrule)
+    values (${ids.garden}, ${ids.planting}, 0, 'castings', 'top-dress', 'per-plant', 'mass', 0.1,
+      'FREQ=MONTHLY') returning id`);
   ids.bin =
     await one(sql`insert into bins (garden_id, name, tray_length_m, tray_width_m, tray_depth_m,
       tray_count, started_on, starting_worm_count)
@@ -71,14 +73,18 @@ const crossGardenInserts: [string, () => ReturnType<typeof sql>][] = [
       values (${a.garden}, ${a.bed}, ${b.crop}, 1, '2026-05-10')`,
   ],
   [
-    "a planting overriding with another garden's rule",
-    () => sql`insert into plantings (garden_id, bed_id, crop_id, plant_count, planted_on, feeding_rule_id)
-      values (${a.garden}, ${a.bed}, ${a.crop}, 1, '2026-05-10', ${b.rule})`,
+    "a rule of another garden's planting",
+    () => sql`insert into feeding_rules (garden_id, planting_id, position, material, method, basis,
+        amount_measure, amount_si, rrule)
+      values (${a.garden}, ${b.planting}, 1, 'tea', 'drench', 'per-plant', 'volume', 0.25,
+        'FREQ=WEEKLY;INTERVAL=2')`,
   ],
   [
-    "a crop whose default rule is another garden's",
-    () => sql`insert into crops (garden_id, name, feeder_class, edible, edible_touches_soil, feeding_rule_id)
-      values (${a.garden}, 'Pepper', 'heavy', true, false, ${b.rule})`,
+    "a rule of another garden's crop",
+    () => sql`insert into feeding_rules (garden_id, crop_id, position, material, method, basis,
+        amount_measure, amount_si, rrule)
+      values (${a.garden}, ${b.crop}, 0, 'castings', 'top-dress', 'per-plant', 'mass', 0.1,
+        'FREQ=MONTHLY')`,
   ],
   [
     "a bin split off another garden's bin",
@@ -147,9 +153,18 @@ describe("garden-scoped foreign keys", () => {
       await outcome(sql`insert into bin_events (garden_id, bin_id, kind, occurred_on)
         values (${a.garden}, ${a.bin}, 'feeding', '2026-07-03')`),
     ).toBe("ok");
+    // A second rule of the planting (castings monthly and tea every two weeks), and a crop's rule.
     expect(
-      await outcome(sql`insert into plantings (garden_id, bed_id, crop_id, plant_count, planted_on, feeding_rule_id)
-        values (${a.garden}, ${a.bed}, ${a.crop}, 2, '2026-05-10', ${a.rule})`),
+      await outcome(sql`insert into feeding_rules (garden_id, planting_id, position, material, method,
+          basis, amount_measure, amount_si, rrule)
+        values (${a.garden}, ${a.planting}, 1, 'tea', 'drench', 'per-plant', 'volume', 0.25,
+          'FREQ=WEEKLY;INTERVAL=2')`),
+    ).toBe("ok");
+    expect(
+      await outcome(sql`insert into feeding_rules (garden_id, crop_id, position, material, method,
+          basis, amount_measure, amount_si, rrule)
+        values (${a.garden}, ${a.crop}, 0, 'castings', 'top-dress', 'per-plant', 'mass', 0.1,
+          'FREQ=MONTHLY')`),
     ).toBe("ok");
   });
 
@@ -172,8 +187,11 @@ describe("garden-scoped foreign keys", () => {
     expect(await outcome(sql`delete from gardens where id = ${b.garden}`)).toBe("ok");
     const left = (await db.execute(
       sql`select (select count(*)::int from plantings where garden_id = ${b.garden}) as b_plantings,
-        (select count(*)::int from plantings where garden_id = ${a.garden}) as a_plantings`,
-    )) as unknown as { rows: { b_plantings: number; a_plantings: number }[] };
-    expect(left.rows[0]).toEqual({ b_plantings: 0, a_plantings: 2 });
+        (select count(*)::int from feeding_rules where garden_id = ${b.garden}) as b_rules,
+        (select count(*)::int from plantings where garden_id = ${a.garden}) as a_plantings,
+        (select count(*)::int from feeding_rules where garden_id = ${a.garden}) as a_rules`,
+    )) as unknown as { rows: Record<string, number>[] };
+    // Garden A keeps its planting with its two rules and its crop's rule.
+    expect(left.rows[0]).toEqual({ b_plantings: 0, b_rules: 0, a_plantings: 1, a_rules: 3 });
   });
 });

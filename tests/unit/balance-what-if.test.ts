@@ -53,16 +53,18 @@ const inputs: GardenInputs = {
       priority: null,
       edible: true,
       edibleTouchesSoil: false,
-      rule: {
-        material: "castings",
-        method: "top-dress",
-        basis: "per-plant",
-        measure: "mass",
-        amount: 0.17,
-        recurrence: "FREQ=MONTHLY",
-        dilutionWaterParts: null,
-        teaCastingsPerWater: null,
-      },
+      rules: [
+        {
+          material: "castings",
+          method: "top-dress",
+          basis: "per-plant",
+          measure: "mass",
+          amount: 0.17,
+          recurrence: "FREQ=MONTHLY",
+          dilutionWaterParts: null,
+          teaCastingsPerWater: null,
+        },
+      ],
     },
   ],
   stockLots: [],
@@ -119,7 +121,7 @@ describe("applyWhatIf", () => {
     ]);
     expect(JSON.stringify(inputs)).toBe(before);
     expect(next.bins[0]!.trays).toBe(6);
-    expect(next.plantings[0]!.rule!.amount).toBe(0.085);
+    expect(next.plantings[0]!.rules[0]!.amount).toBe(0.085);
     expect(next.bins).toHaveLength(2);
     expect(next.bins[1]).toMatchObject({ startDate: "2026-12-01", startingWorms: 500, trays: 6 });
   });

@@ -11,7 +11,12 @@ import type {
   PlantingInput as DemandPlanting,
 } from "@/lib/engine/demand/types";
 import { isBoundedRule } from "@/lib/engine/demand/recurrence";
-import type { FeedingRuleInput, GardenInputs, MonthDay } from "@/lib/engine/plan/inputs";
+import type {
+  FeedingRuleInput,
+  GardenInputs,
+  MonthDay,
+  PlantingInput,
+} from "@/lib/engine/plan/inputs";
 import type { PlanContext } from "@/lib/engine/plan/context";
 import type { Explanation, PlanWarning } from "@/lib/engine/plan/results";
 
@@ -34,6 +39,55 @@ export interface LoggedClaim extends LedgerLogged {
 
 export const feedingId = (plantingId: string, material: Material, date: IsoDate) =>
   `${plantingId}:${material}:${date}`;
+
+/**
+ * A planting's rules one by one (none: its feeder class default, `rule` null).
+ * Stable ids when a planting has several rules: a feeding keeps
+ * `planting:material:date` (feedingId) unless an earlier rule of the planting
+ * (in its order) already has a feeding of that material that day; then it gets
+ * `:2` (`:3`, …) on that day only. So castings monthly on the 1st and castings
+ * weekly give `p:castings:2026-07-01` and `p:castings:2026-07-01:2`; a rule
+ * added after the others changes none of their ids, and no planting's ids
+ * depend on another planting's.
+ */
+interface RuleOfPlanting {
+  p: PlantingInput;
+  i: number;
+  rule: FeedingRuleInput | null;
+  k: number | null;
+  idOf: (id: string) => string;
+}
+
+function eachRule(plantings: readonly PlantingInput[]): RuleOfPlanting[] {
+  return plantings.flatMap((p, i): RuleOfPlanting[] => {
+    if (p.rules.length === 0) return [{ p, i, rule: null, k: null, idOf: (id: string) => id }];
+    const seen = new Map<string, number>();
+    const idOf = (id: string) => {
+      const n = (seen.get(id) ?? 0) + 1;
+      seen.set(id, n);
+      return n === 1 ? id : `${id}:${n}`;
+    };
+    return p.rules.map((rule, k) => ({ p, i, rule, k, idOf }));
+  });
+}
+
+/** expandPlanting for rule k of a planting: its errors name `plantings[i].rules[k].…`. */
+function expandRule(
+  dp: DemandPlanting,
+  bed: DemandBed,
+  options: Parameters<typeof expandPlanting>[2],
+  field: string,
+  k: number | null,
+): ReturnType<typeof expandPlanting> {
+  try {
+    return expandPlanting(dp, bed, options, field);
+  } catch (e) {
+    if (k === null || !(e instanceof EngineInputError) || !e.field.startsWith(`${field}.rule.`))
+      throw e;
+    const at = e.field.replace(`${field}.rule.`, `${field}.rules[${k}].`);
+    throw new EngineInputError(at, e.message.slice(e.field.length + 2));
+  }
+}
 
 const md = (m: MonthDay) => `${String(m.month).padStart(2, "0")}-${String(m.day).padStart(2, "0")}`;
 
@@ -68,21 +122,25 @@ export function buildDemand(
   const from = ctx.asOfDay + 1;
   const range = { from: fromDayNumber(from), to: fromDayNumber(Math.max(from, ctx.planEndDay)) };
   const planted: PlannedClaim[] = [];
-  const plantings = new Map<string, { p: DemandPlanting; rule: FeedingRuleInput | null }>();
+  const plantings = new Map<string, { p: DemandPlanting; rules: FeedingRuleInput[] }>();
   const density = ctx.castingsDensityKgPerL;
 
-  inputs.plantings.forEach((p, i) => {
+  // Every rule expands into its own feedings.
+  for (const { p, i, rule: ruleInput, k, idOf } of eachRule(inputs.plantings)) {
     const field = `plantings[${i}]`;
     const bed = beds.get(p.bedId);
     if (!bed) throw new EngineInputError(`${field}.bedId`, `no bed with id "${p.bedId}"`);
     if (!Number.isInteger(p.plantCount) || p.plantCount < 1)
       throw new EngineInputError(`${field}.plantCount`, `must be a whole number of plants ≥ 1`);
-    const rule = p.rule ? toEngineRule(p.rule) : undefined;
+    const rule = ruleInput ? toEngineRule(ruleInput) : undefined;
     let end = p.endDate;
     if (end === null) {
       const start = toDayNumber(p.startDate, `${field}.startDate`);
-      if (isBoundedRule(rule?.recurrence ?? "FREQ=MONTHLY", `${field}.rule.recurrence`))
-        end = fromDayNumber(Math.max(start, ctx.planEndDay));
+      // The planting's end, not the rule's: it ends with the season unless every rule ends.
+      const bounded =
+        p.rules.length > 0 &&
+        p.rules.every((r, j) => isBoundedRule(r.recurrence, `${field}.rules[${j}].recurrence`));
+      if (bounded) end = fromDayNumber(Math.max(start, ctx.planEndDay));
       else if (!bed.indoor) end = fromDayNumber(seasonEnd(start, inputs.settings.firstFallFrost));
       else
         throw new EngineInputError(
@@ -103,14 +161,14 @@ export function buildDemand(
       edibleTouchesSoil: p.edibleTouchesSoil,
       rule,
     };
-    plantings.set(p.id, { p: dp, rule: p.rule });
+    plantings.set(p.id, { p: dp, rules: p.rules });
     const db: DemandBed = {
       id: bed.id,
       indoor: bed.indoor,
       areaM2: bed.areaM2 ?? undefined,
       containerVolumeL: bed.containerVolumeL ?? undefined,
     };
-    const r = expandPlanting(dp, db, { range, season, bulkDensityKgPerL: density }, field);
+    const r = expandRule(dp, db, { range, season, bulkDensityKgPerL: density }, field, k);
     for (const w of r.warnings)
       warnings.push({
         kind: "mix-above-limit",
@@ -125,8 +183,8 @@ export function buildDemand(
         },
       });
     const phi = preHarvestBlockStart(dp, field);
-    const teaRatio = p.rule?.teaCastingsPerWater ?? ctx.teaCastingsPerWater;
-    // One explanation per planting and material: every date of a planting needs the same amount.
+    const teaRatio = ruleInput?.teaCastingsPerWater ?? ctx.teaCastingsPerWater;
+    // One explanation per rule: every date of a rule needs the same amount.
     const first = r.occurrences[0];
     const need1 = first
       ? first.material === "tea"
@@ -159,7 +217,7 @@ export function buildDemand(
       const day = toDayNumber(o.date);
       const need = o.material === "tea" ? o.amount * teaRatio * density : o.amount;
       planted.push({
-        id: feedingId(p.id, o.material, o.date),
+        id: idOf(feedingId(p.id, o.material, o.date)),
         plantingId: p.id,
         bedId: p.bedId,
         date: o.date,
@@ -175,7 +233,7 @@ export function buildDemand(
         cleanOnly: phi !== null && o.date >= phi,
       });
     }
-  });
+  }
 
   const logged: LoggedClaim[] = [];
   const replaced = new Set<string>();
@@ -187,13 +245,14 @@ export function buildDemand(
         `no planting with id "${a.plantingId}"`,
       );
     const day = toDayNumber(a.date, "logs.applications[].date");
+    // The planting's first rule of that material holds its recipe (tea ratio, dilution).
+    const rule = pl.rules.find((r) => r.material === a.material);
     let need: number;
     if (a.draws.length > 0) need = a.draws.reduce((s, d) => s + d.amount, 0);
     else if (a.material === "castings") need = a.amount;
     else if (a.material === "tea")
-      need = a.amount * (pl.rule?.teaCastingsPerWater ?? ctx.teaCastingsPerWater) * density;
-    else
-      need = a.amount / (1 + (pl.rule?.dilutionWaterParts ?? dflt("leachateDilutionWaterParts")));
+      need = a.amount * (rule?.teaCastingsPerWater ?? ctx.teaCastingsPerWater) * density;
+    else need = a.amount / (1 + (rule?.dilutionWaterParts ?? dflt("leachateDilutionWaterParts")));
     // Planned feedings all fall after asOf: only a log that names one, or is dated after asOf, can replace it.
     if (a.plannedFeedingId !== null) replaced.add(a.plannedFeedingId);
     else if (day > ctx.asOfDay) replaced.add(feedingId(a.plantingId, a.material, a.date));

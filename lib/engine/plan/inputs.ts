@@ -126,8 +126,13 @@ export interface PlantingInput {
   edible: boolean;
   /** Edible part touches soil: 120-day rather than 90-day window (7 CFR 205.203(c)(1)). */
   edibleTouchesSoil: boolean;
-  /** null = the feeder class default (see DEFAULTS). */
-  rule: FeedingRuleInput | null;
+  /**
+   * What the planting is fed, in order; each rule expands into its own feedings
+   * (castings monthly and tea every two weeks). Empty = the feeder class default
+   * (see DEFAULTS). Adapters resolve inheritance: a planting with no rules of its
+   * own gets its crop's.
+   */
+  rules: FeedingRuleInput[];
 }
 
 /** Stock not made by a logged harvest or drain: bought castings, stock from before the garden used Castline. */

@@ -49,16 +49,18 @@ export function planting(over: Partial<PlantingInput> & { id: string }): Plantin
     priority: null,
     edible: true,
     edibleTouchesSoil: false,
-    rule: {
-      material: "castings",
-      method: "top-dress",
-      basis: "per-plant",
-      measure: "mass",
-      amount: 1,
-      recurrence: "FREQ=MONTHLY",
-      dilutionWaterParts: null,
-      teaCastingsPerWater: null,
-    },
+    rules: [
+      {
+        material: "castings",
+        method: "top-dress",
+        basis: "per-plant",
+        measure: "mass",
+        amount: 1,
+        recurrence: "FREQ=MONTHLY",
+        dilutionWaterParts: null,
+        teaCastingsPerWater: null,
+      },
+    ],
     ...over,
   };
 }

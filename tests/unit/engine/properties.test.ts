@@ -77,16 +77,18 @@ const gardenArb: fc.Arbitrary<GardenInputs> = fc
         priority: p.priority,
         edible: p.edible,
         edibleTouchesSoil: p.soil,
-        rule: {
-          material: p.material,
-          method: p.material === "castings" ? "top-dress" : "drench",
-          basis: "per-plant",
-          measure: p.material === "castings" ? "mass" : "volume",
-          amount: p.kg,
-          recurrence: p.weekly ? "FREQ=WEEKLY" : "FREQ=MONTHLY",
-          dilutionWaterParts: null,
-          teaCastingsPerWater: null,
-        },
+        rules: [
+          {
+            material: p.material,
+            method: p.material === "castings" ? "top-dress" : "drench",
+            basis: "per-plant",
+            measure: p.material === "castings" ? "mass" : "volume",
+            amount: p.kg,
+            recurrence: p.weekly ? "FREQ=WEEKLY" : "FREQ=MONTHLY",
+            dilutionWaterParts: null,
+            teaCastingsPerWater: null,
+          },
+        ],
       }),
     );
     g.logs.applications = r.logs

@@ -57,7 +57,7 @@ export default async function BedPage({
     } · ${p.feederClass} feeder`,
     priority: p.priority,
     plantedOn: p.plantedOn,
-    ruleWords: describeRule(p.effectiveRule, system),
+    ruleWords: p.effectiveRules.map((r) => describeRule(r, system)).join("; "),
     ruleSource: p.ruleSource,
   }));
 

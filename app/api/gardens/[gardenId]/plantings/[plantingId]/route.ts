@@ -3,6 +3,7 @@ import { requireRole } from "@/lib/auth/require-role";
 import { AppError, validationError } from "@/lib/errors";
 import { parseJson, parseParams, refuseOtherMethods, route } from "@/lib/http";
 import { fromSi } from "@/lib/units";
+import { ownRulesChange } from "@/lib/validation/feeding-rule";
 import {
   createPlantingSchema,
   plantingIdParamsSchema,
@@ -19,7 +20,8 @@ export const GET = route<Params>(async (request, { params }) => {
   return Response.json({ planting });
 });
 
-// The rule travels inside: rule null = back to the crop's rule, a rule = override, absent = unchanged.
+// Rules travel inside: `rules` (in order; [] = back to the crop's) or one `rule` (null = back
+// to the crop's; a rule = its only rule); absent = unchanged.
 export const PATCH = route<Params>(async (request, { params }) => {
   const { gardenId, plantingId } = await parseParams(request, params, plantingIdParamsSchema);
   await requireRole(request, gardenId, "grower");
@@ -37,7 +39,7 @@ export const PATCH = route<Params>(async (request, { params }) => {
     priority: current.priority,
     notes: current.notes,
   };
-  const { rule, ...rest } = patch;
+  const { rule, rules, ...rest } = patch;
   // Dates are checked on the merged planting: moving the end alone before the start is refused.
   const merged = createPlantingSchema.safeParse({ ...stored, ...rest });
   if (!merged.success) throw validationError(merged.error);
@@ -45,7 +47,7 @@ export const PATCH = route<Params>(async (request, { params }) => {
     gardenId,
     plantingId,
     input: merged.data,
-    ruleChange: rule,
+    ruleChange: ownRulesChange({ rule, rules }),
   });
   if (!planting) throw new AppError("not_found:planting");
   return Response.json({ planting });
