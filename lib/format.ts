@@ -14,6 +14,12 @@ export function formatDay(
   return new Intl.DateTimeFormat("en-US", { ...options, timeZone: "UTC" }).format(date);
 }
 
+/** A day of every year, "MM-DD" (a usual frost day), e.g. "Apr 15". */
+export function formatMonthDay(md: string): string {
+  // 2000 is a leap year, so "02-29" has a day to land on.
+  return formatDay(`2000-${md}`, { month: "short", day: "numeric" });
+}
+
 /** A calendar day with its year, e.g. "Apr 15, 2026": for messages read out of context. */
 export function formatDayWithYear(day: string): string {
   return formatDay(day, { month: "short", day: "numeric", year: "numeric" });

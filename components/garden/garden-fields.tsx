@@ -1,16 +1,19 @@
 "use client";
 
-import type { FieldErrors, UseFormRegister } from "react-hook-form";
+import type { Control, FieldErrors, UseFormRegister } from "react-hook-form";
 import { Field, Input, Select } from "@/components/ui";
 import type { CreateGardenInput } from "@/lib/validation/garden";
+import { MonthDayField } from "./month-day-field";
 import { TimeZoneField } from "./time-zone-field";
 
 /** The fields shared by "start a garden" and the garden's settings. */
 export function GardenFields({
   register,
+  control,
   errors,
 }: {
   register: UseFormRegister<CreateGardenInput>;
+  control: Control<CreateGardenInput>;
   errors: FieldErrors<CreateGardenInput>;
 }) {
   return (
@@ -26,20 +29,20 @@ export function GardenFields({
             <option value="metric">Metric (kg, litres, m²)</option>
           </Select>
         </Field>
-        <Field
+        <MonthDayField
+          control={control}
+          name="lastSpringFrost"
           label="Last spring frost"
-          hint="Usual date; feeding starts after it."
+          hint="The usual day; feeding starts after it each year."
           error={errors.lastSpringFrost?.message}
-        >
-          <Input type="date" {...register("lastSpringFrost")} />
-        </Field>
-        <Field
+        />
+        <MonthDayField
+          control={control}
+          name="firstFallFrost"
           label="First fall frost"
-          hint="Outdoor feeding stops here."
+          hint="The usual day; outdoor feeding stops here each year."
           error={errors.firstFallFrost?.message}
-        >
-          <Input type="date" {...register("firstFallFrost")} />
-        </Field>
+        />
       </div>
       <Field
         label="Where is it?"

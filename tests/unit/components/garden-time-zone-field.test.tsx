@@ -13,10 +13,12 @@ let read: () => CreateGardenInput = () => {
 };
 function Harness() {
   const form = useForm<CreateGardenInput>({
-    defaultValues: { name: "", timeZone: "UTC", unitSystem: "us" },
+    defaultValues: { name: "", timeZone: "UTC", unitSystem: "us", lastSpringFrost: "04-15" },
   });
   read = form.getValues;
-  return <GardenFields register={form.register} errors={form.formState.errors} />;
+  return (
+    <GardenFields register={form.register} control={form.control} errors={form.formState.errors} />
+  );
 }
 
 describe("GardenFields time zone", () => {

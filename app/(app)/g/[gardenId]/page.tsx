@@ -17,7 +17,7 @@ import { listLotStock } from "@/db/queries/lots";
 import { requirePageMember } from "@/lib/auth/page-session";
 import { roleLabels } from "@/lib/auth/roles";
 import { computePlan } from "@/lib/engine";
-import { formatDay } from "@/lib/format";
+import { formatMonthDay } from "@/lib/format";
 import { todayIn } from "@/lib/garden-today";
 
 export const metadata: Metadata = { title: "Overview" };
@@ -60,7 +60,8 @@ export default async function GardenOverviewPage({
         </h1>
         <p className="flex flex-wrap items-center gap-2 text-soil-700">
           <Badge tone="positive">{roleLabels[member.role]}</Badge>
-          Growing season {formatDay(garden.lastSpringFrost)} – {formatDay(garden.firstFallFrost)}
+          Growing season {formatMonthDay(garden.lastSpringFrost)} –{" "}
+          {formatMonthDay(garden.firstFallFrost)}
           {garden.location ? ` · ${garden.location}` : ""}
         </p>
       </header>
