@@ -1,5 +1,6 @@
 import { render, screen, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
+import { useEffect } from "react";
 import { useForm } from "react-hook-form";
 import { describe, expect, it } from "vitest";
 import { GardenFields } from "@/components/garden/garden-fields";
@@ -9,11 +10,10 @@ import type { CreateGardenInput } from "@/lib/validation/garden";
 // plan applies them to every year. Days per month from the Gregorian calendar
 // (April 30, February 29 in a leap year).
 
-let read: () => CreateGardenInput = () => {
-  throw new Error("not rendered");
-};
+// The test reads the form's values through this, set once the harness mounts.
+const form = { read: (): CreateGardenInput => ({}) as CreateGardenInput };
 function Harness() {
-  const form = useForm<CreateGardenInput>({
+  const methods = useForm<CreateGardenInput>({
     defaultValues: {
       name: "",
       timeZone: "UTC",
@@ -22,9 +22,15 @@ function Harness() {
       firstFallFrost: "10-15",
     },
   });
-  read = form.getValues;
+  useEffect(() => {
+    form.read = methods.getValues;
+  }, [methods]);
   return (
-    <GardenFields register={form.register} control={form.control} errors={form.formState.errors} />
+    <GardenFields
+      register={methods.register}
+      control={methods.control}
+      errors={methods.formState.errors}
+    />
   );
 }
 
@@ -36,7 +42,7 @@ describe("GardenFields frost days", () => {
     expect(spring.querySelector('input[type="date"]')).toBeNull();
     await userEvent.selectOptions(within(spring).getByLabelText("Month"), "May");
     await userEvent.selectOptions(within(spring).getByLabelText("Day"), "2");
-    expect(read().lastSpringFrost).toBe("05-02");
+    expect(form.read().lastSpringFrost).toBe("05-02");
   });
 
   it("offers only the days the month has, keeping 29 February", async () => {
@@ -47,6 +53,6 @@ describe("GardenFields frost days", () => {
     expect(within(day).getAllByRole("option")).toHaveLength(29);
     await userEvent.selectOptions(within(fall).getByLabelText("Month"), "April");
     expect(within(day).getAllByRole("option")).toHaveLength(30);
-    expect(read().firstFallFrost).toBe("04-15");
+    expect(form.read().firstFallFrost).toBe("04-15");
   });
 });
