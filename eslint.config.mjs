@@ -51,6 +51,27 @@ const config = [
       ],
     },
   },
+  {
+    // Components get their data from their page or layout (props) or through React
+    // Query; only app/ calls db/queries. A type-only import (a DTO's shape) reads
+    // nothing and is erased at build, so it stays allowed.
+    files: ["components/**/*.{ts,tsx}"],
+    rules: {
+      "@typescript-eslint/no-restricted-imports": [
+        "error",
+        {
+          patterns: [
+            {
+              group: ["@/db", "@/db/*", "@/db/**", "**/db/*", "**/db/**"],
+              allowTypeImports: true,
+              message:
+                "components/ never import db/: let the page or layout fetch and pass the data down",
+            },
+          ],
+        },
+      ],
+    },
+  },
 ];
 
 export default config;

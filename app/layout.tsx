@@ -2,15 +2,22 @@ import type { Metadata, Viewport } from "next";
 import { headers } from "next/headers";
 import type { ReactNode } from "react";
 import { Providers } from "@/components/providers";
+import { siteIcons } from "@/lib/site-icons";
+import { palette } from "@/tailwind.config";
 import { bodyFont, displayFont } from "./fonts";
 import "./globals.css";
 
 export const metadata: Metadata = {
   title: { default: "Castline", template: "%s · Castline" },
   description: "Plans a garden's feeding around what its worm bins actually make.",
+  icons: siteIcons,
 };
 
-export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: "#2e6b3a" };
+export const viewport: Viewport = {
+  width: "device-width",
+  initialScale: 1,
+  themeColor: palette.leaf[700],
+};
 
 export default async function RootLayout({ children }: { children: ReactNode }) {
   // Reading the request makes every page render per request, which the CSP

@@ -18,8 +18,8 @@ const steps = [
     text: "Stock carried over and aged out, shortfalls dated, and the extra tray or second bin that would close the gap.",
   },
   {
-    title: "Feed on time, log it in one tap",
-    text: "A calendar you can subscribe to, e-mail reminders, and a phone-friendly log so nothing is fed twice or missed.",
+    title: "Share the garden by role",
+    text: "Invite the people who tend it by e-mail: growers plan beds and bins, helpers log harvests and drains from a phone, viewers read along.",
   },
 ];
 

@@ -4,7 +4,7 @@ import Link from "next/link";
 import { useState } from "react";
 import { FormMessage } from "@/components/forms/form-message";
 import { useApiForm } from "@/components/forms/use-api-form";
-import { Alert, Button, Field, Input } from "@/components/ui";
+import { Alert, Button, Field, inlineLinkStyles, Input } from "@/components/ui";
 import { apiFetch } from "@/lib/api-client";
 import { confirmResetSchema } from "@/lib/validation/auth";
 
@@ -24,7 +24,7 @@ export function ResetPasswordForm({ token }: { token: string }) {
     return (
       <Alert tone="info">
         {done}{" "}
-        <Link className="underline" href="/sign-in">
+        <Link className={inlineLinkStyles} href="/sign-in">
           Sign in
         </Link>
       </Alert>

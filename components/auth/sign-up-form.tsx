@@ -5,7 +5,7 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { FormMessage } from "@/components/forms/form-message";
 import { useApiForm } from "@/components/forms/use-api-form";
-import { Alert, Button, Field, Input } from "@/components/ui";
+import { Alert, Button, Field, Input, textLinkStyles } from "@/components/ui";
 import { apiFetch } from "@/lib/api-client";
 import { safeNextPath } from "@/lib/safe-next";
 import { signUpSchema } from "@/lib/validation/auth";
@@ -64,7 +64,7 @@ export function SignUpForm({ next }: { next: string }) {
       </Button>
       <p className="text-sm text-soil-700">
         Already have one?{" "}
-        <Link className="underline" href={`/sign-in?next=${encodeURIComponent(next)}`}>
+        <Link className={textLinkStyles} href={`/sign-in?next=${encodeURIComponent(next)}`}>
           Sign in
         </Link>
       </p>

@@ -15,18 +15,21 @@ import { formatAmount, formatColumnAmount, formatPercent } from "@/lib/format-qu
 import type { UnitSystem } from "@/lib/units";
 import { monthLabel } from "@/components/balance/month-label";
 
-const columns: { key: SortKey; label: string }[] = [
+// `figure`: a plain quantity of the row, shown in the garden's units and opening its
+// explanation. The columns without one are written out in cellOf below.
+const columns: { key: SortKey; label: string; figure?: (row: MonthRow) => number }[] = [
   { key: "month", label: "Month" },
-  { key: "opening", label: "Opening" },
-  { key: "supplied", label: "Harvested / drained" },
-  { key: "adjusted", label: "Taken out or added by hand" },
-  { key: "demand", label: "Wanted" },
-  { key: "allocated", label: "Fed" },
-  { key: "agedOut", label: "Aged out" },
-  { key: "closing", label: "Closing" },
+  { key: "opening", label: "Opening", figure: (r) => r.opening },
+  { key: "supplied", label: "Harvested / drained", figure: (r) => r.supplied },
+  { key: "adjusted", label: "Taken out or added by hand", figure: (r) => r.adjusted },
+  { key: "demand", label: "Wanted", figure: (r) => r.demand },
+  { key: "allocated", label: "Fed", figure: (r) => r.allocated },
+  { key: "agedOut", label: "Aged out", figure: (r) => r.agedOut },
+  { key: "closing", label: "Closing", figure: (r) => r.closing },
   { key: "shortfall", label: "Short or spare" },
   { key: "coverage", label: "Coverage" },
 ];
+const figureColumns = columns.filter((c) => c.key !== "month");
 
 export function BalanceTable({
   rows,
@@ -92,11 +95,23 @@ export function BalanceTable({
         <TBody>
           {sorted.map((row) => {
             const title = `${row.pool === "castings" ? "Castings" : "Leachate"}, ${monthLabel(row.month)}`;
-            const fig = (si: number) => (
-              <Figure title={title} explanation={row.explanation}>
-                {amount(row, si)}
-              </Figure>
-            );
+            const cellOf = (column: (typeof columns)[number]) => {
+              if (column.figure)
+                return (
+                  <Figure title={title} explanation={row.explanation}>
+                    {amount(row, column.figure(row))}
+                  </Figure>
+                );
+              if (column.key === "coverage")
+                return row.demand > 0 ? formatPercent(coverageOf(row)) : "—";
+              if (row.shortfall > 0)
+                return (
+                  <strong className="text-bloom-800">{amount(row, row.shortfall)} short</strong>
+                );
+              if (row.closing > 0)
+                return <span className="text-leaf-800">{amount(row, row.closing)} spare</span>;
+              return "even";
+            };
             return (
               <Tr
                 key={`${row.month}-${row.pool}`}
@@ -127,39 +142,11 @@ export function BalanceTable({
                     </span>
                   ) : null}
                 </Td>
-                <Td numeric data-col="opening">
-                  {fig(row.opening)}
-                </Td>
-                <Td numeric data-col="supplied">
-                  {fig(row.supplied)}
-                </Td>
-                <Td numeric data-col="adjusted">
-                  {fig(row.adjusted)}
-                </Td>
-                <Td numeric data-col="demand">
-                  {fig(row.demand)}
-                </Td>
-                <Td numeric data-col="allocated">
-                  {fig(row.allocated)}
-                </Td>
-                <Td numeric data-col="agedOut">
-                  {fig(row.agedOut)}
-                </Td>
-                <Td numeric data-col="closing">
-                  {fig(row.closing)}
-                </Td>
-                <Td numeric data-col="shortfall">
-                  {row.shortfall > 0 ? (
-                    <strong className="text-bloom-800">{amount(row, row.shortfall)} short</strong>
-                  ) : row.closing > 0 ? (
-                    <span className="text-leaf-800">{amount(row, row.closing)} spare</span>
-                  ) : (
-                    "even"
-                  )}
-                </Td>
-                <Td numeric data-col="coverage">
-                  {row.demand > 0 ? formatPercent(coverageOf(row)) : "—"}
-                </Td>
+                {figureColumns.map((c) => (
+                  <Td key={c.key} numeric data-col={c.key}>
+                    {cellOf(c)}
+                  </Td>
+                ))}
               </Tr>
             );
           })}

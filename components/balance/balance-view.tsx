@@ -139,6 +139,8 @@ export function BalanceView({
               gap={plan.gap}
               names={names}
               system={system}
+              gardenId={gardenId}
+              canEdit={canPlan}
               onTry={(c) => {
                 setChanges(c);
                 requestAnimationFrame(() =>

@@ -1,10 +1,12 @@
 "use client";
 
-import { Button, Card, CardBody } from "@/components/ui";
+import Link from "next/link";
+import { Button, Card, CardBody, buttonStyles } from "@/components/ui";
 import { ExplanationText, Figure } from "@/components/balance/explanation";
 import type { GardenNames } from "@/components/balance/garden-names";
 import { changesForSuggestion, type TryChange } from "@/components/balance/what-if-changes";
 import { nameLookup } from "@/components/balance/garden-names";
+import { formLinksForSuggestion } from "@/components/balance/suggestion-links";
 import type { GapReport } from "@/lib/engine";
 import { formatDay } from "@/lib/format";
 import { formatPoolAmount } from "@/lib/format-quantity";
@@ -26,11 +28,16 @@ export function GapPanel({
   names,
   system,
   onTry,
+  gardenId,
+  canEdit,
 }: {
   gap: GapReport;
   names: GardenNames;
   system: UnitSystem;
   onTry: (changes: TryChange[]) => void;
+  gardenId: string;
+  /** Growers and owners get links to the forms that make a suggestion real; others none. */
+  canEdit: boolean;
 }) {
   if (!gap.needed) return null;
   const nameOf = nameLookup(names);
@@ -55,6 +62,7 @@ export function GapPanel({
       <ul className="grid gap-3 sm:grid-cols-2">
         {gap.suggestions.map((s, i) => {
           const changes = changesForSuggestion(s, names);
+          const links = canEdit ? formLinksForSuggestion(s, names, gardenId) : [];
           return (
             <li key={`${s.kind}-${i}`} data-testid={`suggestion-${s.kind}`}>
               <Card className="h-full">
@@ -67,16 +75,23 @@ export function GapPanel({
                       {formatPoolAmount(s.remainingShortfallKg, "castings", system)}
                     </Figure>
                   </p>
-                  {changes && changes.length > 0 ? (
-                    <Button
-                      variant="secondary"
-                      size="sm"
-                      className="mt-auto self-start"
-                      onClick={() => onTry(changes)}
-                    >
-                      Try it in what-if
-                    </Button>
-                  ) : null}
+                  <div className="mt-auto flex flex-wrap gap-2">
+                    {changes && changes.length > 0 ? (
+                      <Button variant="secondary" size="sm" onClick={() => onTry(changes)}>
+                        Try it in what-if
+                      </Button>
+                    ) : null}
+                    {links.map((l) => (
+                      <Link
+                        key={l.href}
+                        href={l.href}
+                        className={buttonStyles({ variant: "secondary", size: "sm" })}
+                        data-testid="suggestion-form-link"
+                      >
+                        {l.label}
+                      </Link>
+                    ))}
+                  </div>
                 </CardBody>
               </Card>
             </li>

@@ -1,5 +1,7 @@
 import type { FeederClass, GardenInputs } from "@/lib/engine";
 
+export type BinKind = "stacked-tray" | "single" | "flow-through";
+
 // What the Balance needs to put names on the engine's ids (the plan carries ids
 // only). Built on the server from the garden's inputs, passed to the client.
 export interface GardenNames {
@@ -9,6 +11,9 @@ export interface GardenNames {
     trays: number;
     rotationIntervalDays: number | null;
     startDate: string;
+    startingWorms: number;
+    /** From the bins table (the engine does not need it); null when not given. */
+    kind: BinKind | null;
   }[];
   beds: { id: string; name: string }[];
   plantings: {
@@ -23,8 +28,12 @@ export interface GardenNames {
   }[];
 }
 
-export function gardenNamesFrom(inputs: GardenInputs): GardenNames {
+export function gardenNamesFrom(
+  inputs: GardenInputs,
+  binKinds: { id: string; kind: BinKind }[] = [],
+): GardenNames {
   const bedName = new Map(inputs.beds.map((b) => [b.id, b.name]));
+  const kindOf = new Map(binKinds.map((b) => [b.id, b.kind]));
   return {
     bins: inputs.bins.map((b) => ({
       id: b.id,
@@ -32,6 +41,8 @@ export function gardenNamesFrom(inputs: GardenInputs): GardenNames {
       trays: b.trays,
       rotationIntervalDays: b.rotationIntervalDays,
       startDate: b.startDate,
+      startingWorms: b.startingWorms,
+      kind: kindOf.get(b.id) ?? null,
     })),
     beds: inputs.beds.map((b) => ({ id: b.id, name: b.name })),
     plantings: inputs.plantings.map((p) => ({

@@ -1,6 +1,7 @@
 "use client";
 
 import { Badge, Card, CardBody, CardHeader, CardTitle } from "@/components/ui";
+import { BinMonthSupply } from "@/components/balance/bin-month-supply";
 import { Figure } from "@/components/balance/explanation";
 import { LiquidCaution, PreHarvestCaution } from "@/components/balance/feeding-cautions";
 import type { GardenNames } from "@/components/balance/garden-names";
@@ -58,7 +59,6 @@ export function MonthDetail({
   names: GardenNames;
   system: UnitSystem;
 }) {
-  const binName = (id: string) => names.bins.find((b) => b.id === id)?.name ?? "A bin";
   const bedName = (id: string) => names.beds.find((b) => b.id === id)?.name ?? "A bed";
   const plantingName = (id: string) =>
     names.plantings.find((p) => p.id === id)?.label ?? "A planting";
@@ -79,27 +79,7 @@ export function MonthDetail({
         {monthLabel(month)} in detail
       </h2>
       <div className="grid gap-3 sm:grid-cols-2">
-        <Card>
-          <CardHeader>
-            <CardTitle as="h3">Made by each bin</CardTitle>
-          </CardHeader>
-          <CardBody>
-            <ul className="flex flex-col gap-1">
-              {plan.bins.map((b) => {
-                const m = b.months.find((x) => x.month === month);
-                return (
-                  <li key={b.binId}>
-                    {binName(b.binId)}:{" "}
-                    <Figure title={`${binName(b.binId)}, castings`} explanation={b.explanation}>
-                      {formatPoolAmount(m?.castingsKg ?? 0, "castings", system)}
-                    </Figure>{" "}
-                    castings, {formatPoolAmount(m?.leachateL ?? 0, "leachate", system)} leachate
-                  </li>
-                );
-              })}
-            </ul>
-          </CardBody>
-        </Card>
+        <BinMonthSupply plan={plan} month={month} names={names} system={system} />
         <Card>
           <CardHeader>
             <CardTitle as="h3">Wanted by each bed</CardTitle>

@@ -1,6 +1,9 @@
 import type { WhatIfChange } from "@/lib/balance/types";
 import { defaultRuleFor, type GapSuggestion } from "@/lib/engine";
 import type { GardenNames } from "@/components/balance/garden-names";
+import { amountEntryFor, type RuleShape } from "@/lib/balance/rule-amount-units";
+import { roundForDisplay } from "@/lib/format-quantity";
+import type { UnitSystem } from "@/lib/units";
 
 // Turning the grower's "try this" into the what-if API's changes, and back into words.
 
@@ -41,13 +44,23 @@ export function changesForSuggestion(s: GapSuggestion, names: GardenNames): TryC
 
 /** Today's amount per feeding of a planting in its rule's measure (SI), its own rule or its class default. */
 export function currentAmount(plantingId: string, names: GardenNames): number | null {
+  return currentRule(plantingId, names)?.amount ?? null;
+}
+
+/** The rule a planting is fed by today (its own, or its feeder class default, which measures volume). */
+export function currentRule(
+  plantingId: string,
+  names: GardenNames,
+): (RuleShape & { amount: number }) | null {
   const p = names.plantings.find((x) => x.id === plantingId);
   if (!p) return null;
-  return p.rule ? p.rule.amount : defaultRuleFor(p.feederClass).amount;
+  if (p.rule) return p.rule;
+  const d = defaultRuleFor(p.feederClass);
+  return { material: d.material, measure: "volume", basis: d.basis, amount: d.amount };
 }
 
 /** A change in words for the list of what is being tried. */
-export function describeChange(c: TryChange, names: GardenNames): string {
+export function describeChange(c: TryChange, names: GardenNames, system: UnitSystem): string {
   const bin = (id: string) => names.bins.find((b) => b.id === id)?.name ?? "a bin";
   const change = c;
   switch (change.kind) {
@@ -58,10 +71,12 @@ export function describeChange(c: TryChange, names: GardenNames): string {
     case "bin-start":
       return `${bin(change.binId)}: started on ${change.startDate}`;
     case "planting-amount": {
-      const today = currentAmount(change.plantingId, names);
+      const rule = currentRule(change.plantingId, names);
       const label = names.plantings.find((p) => p.id === change.plantingId)?.label ?? "a planting";
-      const pct = today ? Math.round((100 * change.amount) / today) : null;
-      return `${label}: ${pct === null ? "new amount" : `${pct} % of today's amount`}`;
+      if (!rule) return `${label}: a new amount`;
+      const entry = amountEntryFor(rule, system);
+      const shown = (si: number) => `${roundForDisplay(entry.fromSi(si))} ${entry.label}`;
+      return `${label}: ${shown(change.amount)} (today ${shown(rule.amount)})`;
     }
     case "add-bin":
       return `A second bin like ${bin(change.likeBinId)}, started ${change.startDate}`;

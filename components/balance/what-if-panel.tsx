@@ -5,14 +5,11 @@ import { useQuery } from "@tanstack/react-query";
 import { Alert, Button, Field, Input, Select } from "@/components/ui";
 import type { GardenNames } from "@/components/balance/garden-names";
 import { monthLabel } from "@/components/balance/month-label";
-import {
-  currentAmount,
-  describeChange,
-  type TryChange,
-} from "@/components/balance/what-if-changes";
+import { currentRule, describeChange, type TryChange } from "@/components/balance/what-if-changes";
 import { apiFetch, ApiError } from "@/lib/api-client";
+import { amountEntryFor, largestEntry } from "@/lib/balance/rule-amount-units";
 import type { WhatIfBody } from "@/lib/balance/types";
-import { formatPoolAmount } from "@/lib/format-quantity";
+import { formatPoolAmount, roundForDisplay } from "@/lib/format-quantity";
 import { queryKeys } from "@/lib/query-keys";
 import type { UnitSystem } from "@/lib/units";
 
@@ -25,7 +22,7 @@ const kindLabels: Record<Kind, string> = {
   "bin-trays": "Trays in a bin's stack",
   "bin-rotation": "Days between trays",
   "bin-start": "A bin's start date",
-  "planting-amount": "A planting's amount (% of today's)",
+  "planting-amount": "A planting's amount per feeding",
 };
 
 export function WhatIfPanel({
@@ -46,6 +43,7 @@ export function WhatIfPanel({
   const [kind, setKind] = useState<Kind>("bin-trays");
   const [target, setTarget] = useState("");
   const [value, setValue] = useState("");
+  const [valueError, setValueError] = useState<string | undefined>();
   const result = useQuery({
     queryKey: queryKeys.whatIf(gardenId, range.from, range.months, changes),
     queryFn: () =>
@@ -61,6 +59,9 @@ export function WhatIfPanel({
       ? names.plantings.map((p) => ({ id: p.id, name: p.label }))
       : names.bins;
   const targetId = targets.some((t) => t.id === target) ? target : (targets[0]?.id ?? "");
+  // A planting's amount is entered in the garden's units, as its rule measures it.
+  const rule = kind === "planting-amount" ? currentRule(targetId, names) : null;
+  const entry = rule ? amountEntryFor(rule, system) : null;
 
   function add() {
     const n = Number(value);
@@ -68,12 +69,18 @@ export function WhatIfPanel({
     if (kind === "bin-trays") change = { kind, binId: targetId, trays: n };
     else if (kind === "bin-rotation") change = { kind, binId: targetId, rotationIntervalDays: n };
     else if (kind === "bin-start") change = { kind, binId: targetId, startDate: value };
-    else {
-      const today = currentAmount(targetId, names);
-      if (today !== null) change = { kind, plantingId: targetId, amount: (today * n) / 100 };
+    else if (entry && rule && Number.isFinite(n)) {
+      // The API refuses the same bound (400 naming the field); say it here in the garden's units.
+      const most = largestEntry(rule, entry);
+      if (most !== null && entry.toSi(n) > entry.toSi(most)) {
+        setValueError(`At most ${most} ${entry.label}.`);
+        return;
+      }
+      change = { kind, plantingId: targetId, amount: entry.toSi(n) };
     }
     if (change && targetId && value) onChangesChange([...changes, change]);
     setValue("");
+    setValueError(undefined);
   }
 
   return (
@@ -115,12 +122,19 @@ export function WhatIfPanel({
           </Select>
         </Field>
         <Field
-          label={kind === "bin-start" ? "Date" : kind === "planting-amount" ? "Percent" : "Number"}
+          label={kind === "bin-start" ? "Date" : entry ? `Amount (${entry.label})` : "Number"}
+          hint={
+            entry && rule
+              ? `Today ${roundForDisplay(entry.fromSi(rule.amount))} ${entry.label}`
+              : undefined
+          }
+          error={valueError}
         >
           <Input
             type={kind === "bin-start" ? "date" : "number"}
-            inputMode={kind === "bin-start" ? undefined : "numeric"}
-            min={kind === "bin-start" ? undefined : 1}
+            inputMode={kind === "bin-start" ? undefined : entry ? "decimal" : "numeric"}
+            min={kind === "bin-start" ? undefined : entry ? 0 : 1}
+            step={entry ? "any" : undefined}
             value={value}
             onChange={(e) => setValue(e.target.value)}
             required
@@ -135,7 +149,7 @@ export function WhatIfPanel({
           <ul className="flex flex-col gap-1" aria-label="Changes being tried">
             {changes.map((c, i) => (
               <li key={i} className="flex flex-wrap items-center gap-2">
-                <span>{describeChange(c, names)}</span>
+                <span>{describeChange(c, names, system)}</span>
                 <Button
                   variant="ghost"
                   size="sm"
@@ -161,7 +175,7 @@ export function WhatIfPanel({
       ) : null}
       {result.error ? (
         <Alert tone="danger" title="That change could not be tried">
-          {result.error instanceof ApiError ? result.error.message : "Something went wrong."}
+          {result.error instanceof ApiError ? errorText(result.error) : "Something went wrong."}
         </Alert>
       ) : null}
       {result.data && changes.length > 0 ? <Comparison body={result.data} system={system} /> : null}
@@ -219,4 +233,16 @@ function Comparison({ body, system }: { body: WhatIfBody; system: UnitSystem }) 
       </div>
     </div>
   );
+}
+
+/** The API's message, or for a 400 what it said about each field, naming the change. */
+function errorText(error: ApiError): string {
+  const fields = Object.entries(error.fields ?? {});
+  if (fields.length === 0) return error.message;
+  return fields
+    .map(([path, message]) => {
+      const at = /^changes\.(\d+)\./.exec(path);
+      return `${at ? `Change ${Number(at[1]) + 1}` : path}: ${message}.`;
+    })
+    .join(" ");
 }

@@ -7,7 +7,7 @@ import { useApiForm } from "@/components/forms/use-api-form";
 import { Button, Field, Input, Textarea } from "@/components/ui";
 import { apiFetch } from "@/lib/api-client";
 import { queryKeys } from "@/lib/query-keys";
-import type { UnitSystem } from "@/lib/units";
+import { fromSi, type UnitSystem } from "@/lib/units";
 import { createBedSchema } from "@/lib/validation/bed";
 import { SizeField } from "./size-field";
 
@@ -20,32 +20,68 @@ function sizeError(errors: Errors, name: string): string | undefined {
   return e?.message ?? e?.value?.message ?? e?.unit?.message;
 }
 
-export function BedForm({ gardenId, unitSystem }: { gardenId: string; unitSystem: UnitSystem }) {
+/** The stored bed, for editing: sizes in SI, shown back in the garden's units. */
+export interface EditableBed {
+  id: string;
+  name: string;
+  kind: "bed" | "container";
+  indoors: boolean;
+  lengthM: number | null;
+  widthM: number | null;
+  depthM: number | null;
+  containerVolumeL: number | null;
+  notes: string | null;
+}
+
+/** SI → the field's unit, 2 decimals (a bed is not measured finer); blank when unknown. */
+function shown(si: number | null, unit: string): number {
+  return si === null ? NaN : Math.round(fromSi(si, unit) * 100) / 100;
+}
+
+/** Adds a bed or container; with `bed`, edits that one (PATCH) and calls onDone. */
+export function BedForm({
+  gardenId,
+  unitSystem,
+  bed,
+  onDone,
+}: {
+  gardenId: string;
+  unitSystem: UnitSystem;
+  bed?: EditableBed;
+  onDone?: () => void;
+}) {
   const router = useRouter();
   const queryClient = useQueryClient();
   const us = unitSystem === "us";
   const side = us ? "ft" : "m";
+  const small = us ? "in" : "cm";
+  const big = us ? "gal" : "L";
   const { form, formError, submit } = useApiForm(createBedSchema, {
-    name: "",
-    kind: "bed",
-    indoors: false,
-    length: { value: NaN, unit: side },
-    width: { value: NaN, unit: side },
-    depth: { value: NaN, unit: us ? "in" : "cm" },
-    volume: { value: NaN, unit: us ? "gal" : "L" },
-    diameter: { value: NaN, unit: us ? "in" : "cm" },
+    name: bed?.name ?? "",
+    kind: bed?.kind ?? "bed",
+    indoors: bed?.indoors ?? false,
+    length: { value: shown(bed?.lengthM ?? null, side), unit: side },
+    width: { value: shown(bed?.widthM ?? null, side), unit: side },
+    depth: { value: shown(bed?.depthM ?? null, small), unit: small },
+    volume: { value: shown(bed?.containerVolumeL ?? null, big), unit: big },
+    diameter: { value: NaN, unit: small },
+    notes: bed?.notes ?? "",
   });
   const { register, formState, watch } = form;
   const kind = watch("kind");
   const errors = formState.errors as unknown as Errors;
 
   const onSubmit = submit(async (values) => {
-    const { bed } = await apiFetch<{ bed: { id: string } }>(`/api/gardens/${gardenId}/beds`, {
-      body: values,
-    });
+    const saved = await apiFetch<{ bed: { id: string } }>(
+      bed ? `/api/gardens/${gardenId}/beds/${bed.id}` : `/api/gardens/${gardenId}/beds`,
+      { method: bed ? "PATCH" : "POST", body: values },
+    );
     await queryClient.invalidateQueries({ queryKey: queryKeys.plan(gardenId) });
     await queryClient.invalidateQueries({ queryKey: queryKeys.beds(gardenId) });
-    router.push(`/g/${gardenId}/beds/${bed.id}`);
+    if (bed) {
+      router.refresh();
+      onDone?.();
+    } else router.push(`/g/${gardenId}/beds/${saved.bed.id}`);
   });
 
   const lengths = us ? (["ft", "in"] as const) : (["m", "cm"] as const);
@@ -54,10 +90,10 @@ export function BedForm({ gardenId, unitSystem }: { gardenId: string; unitSystem
       onSubmit={onSubmit}
       noValidate
       className="flex flex-col gap-4"
-      aria-label="Add a bed or container"
+      aria-label={bed ? `Edit ${bed.name}` : "Add a bed or container"}
     >
       <FormMessage message={formError} />
-      <fieldset className="flex flex-wrap gap-4">
+      <fieldset className={bed ? "hidden" : "flex flex-wrap gap-4"}>
         <legend className="mb-1.5 font-semibold text-soil-900">What is it?</legend>
         {(["bed", "container"] as const).map((k) => (
           <label key={k} className="inline-flex min-h-11 items-center gap-2">
@@ -130,9 +166,16 @@ export function BedForm({ gardenId, unitSystem }: { gardenId: string; unitSystem
       <Field label="Notes" error={errors.notes?.message as string | undefined}>
         <Textarea rows={2} {...register("notes")} />
       </Field>
-      <Button type="submit" pending={formState.isSubmitting} className="self-start">
-        Add {kind === "bed" ? "bed" : "container"}
-      </Button>
+      <div className="flex flex-wrap gap-2">
+        <Button type="submit" pending={formState.isSubmitting}>
+          {bed ? "Save changes" : `Add ${kind === "bed" ? "bed" : "container"}`}
+        </Button>
+        {bed ? (
+          <Button variant="secondary" onClick={onDone}>
+            Cancel
+          </Button>
+        ) : null}
+      </div>
     </form>
   );
 }

@@ -1,6 +1,7 @@
 "use client";
 
 import { useQuery } from "@tanstack/react-query";
+import Image from "next/image";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { Badge, Select, Skeleton } from "@/components/ui";
 import { apiFetch } from "@/lib/api-client";
@@ -28,6 +29,7 @@ export interface LogEntry {
   direction: "in" | "out" | null;
   otherBin: { gardenName: string; binName: string } | null;
   note: string | null;
+  photoIds: string[];
   loggedBy: string | null;
   loggedAt: string;
 }
@@ -109,6 +111,26 @@ export function BinLog({
               <span>{summary(e, system)}</span>
             </div>
             {e.note ? <p className="text-soil-700">{e.note}</p> : null}
+            {e.photoIds.length ? (
+              <div className="flex flex-wrap gap-2 py-1">
+                {e.photoIds.map((id, i) => {
+                  const src = `/api/gardens/${gardenId}/photos/${id}`;
+                  return (
+                    <a key={id} href={src} target="_blank" rel="noopener" className="block">
+                      {/* Served by our own route to members only: nothing for the optimizer to fetch. */}
+                      <Image
+                        unoptimized
+                        src={src}
+                        width={96}
+                        height={72}
+                        alt={`Photo ${i + 1} of the ${binEventKindLabels[e.kind].toLowerCase()} on ${formatDay(e.on)}`}
+                        className="h-18 w-24 rounded-card border border-loam-200 object-cover"
+                      />
+                    </a>
+                  );
+                })}
+              </div>
+            ) : null}
             <p className="text-sm text-soil-600">
               {e.loggedBy
                 ? `Logged by ${e.loggedBy}`

@@ -22,6 +22,7 @@ export function BinSummary({
   today,
   system,
   volumeL,
+  loggedWorms,
 }: {
   bin: BinDto;
   supply: BinSupply | undefined;
@@ -29,6 +30,8 @@ export function BinSummary({
   today: string;
   system: UnitSystem;
   volumeL: number;
+  /** Start, moves in and out, and the latest count: what a move is checked against. */
+  loggedWorms: number;
 }) {
   const next = supply?.tasks.find((t) => t.kind === "harvest-tray" && t.date >= today && !t.logged);
   const nextTray = supply?.tasks.find((t) => t.kind === "add-tray" && t.date >= today && !t.logged);
@@ -67,6 +70,14 @@ export function BinSummary({
             {cal && cal.harvestsUsed > 0
               ? `Scaled ×${cal.factor.toFixed(2)} from ${cal.harvestsUsed} logged harvest${cal.harvestsUsed === 1 ? "" : "s"}`
               : "Not yet: log a harvest with its weight and the forecast learns from it"}
+          </dd>
+          <dt className="font-semibold">Worms on record</dt>
+          <dd>
+            <span data-testid="logged-worms">{loggedWorms.toLocaleString("en-US")}</span>
+            <span className="block text-sm text-soil-700">
+              Start, moves and your last count: a move may take up to this many. Log a count when
+              they have multiplied.
+            </span>
           </dd>
           <dt className="font-semibold">Worms now</dt>
           <dd>

@@ -72,7 +72,19 @@ export function LogEntryForm({
   const [warnings, setWarnings] = useState<string[]>([]);
   const [harvestId, setHarvestId] = useState<string | null>(null);
   const { register, handleSubmit, control, reset, formState } = useForm<Values>({
-    defaultValues: { kind: "food-added", on: today, harvestBy: "weight", foods: [], target: "" },
+    // Every field has a value, mounted or not: the submit reads them all.
+    defaultValues: {
+      kind: "food-added",
+      on: today,
+      amount: "",
+      harvestBy: "weight",
+      foods: [],
+      temperature: "",
+      moisture: "",
+      worms: "",
+      target: "",
+      note: "",
+    },
   });
   const kind = useWatch({ control, name: "kind" });
   const harvestBy = useWatch({ control, name: "harvestBy" });
@@ -82,7 +94,8 @@ export function LogEntryForm({
   const onSubmit = handleSubmit(async (v) => {
     setErrors({});
     setFormError(null);
-    const n = (s: string) => (s.trim() === "" ? undefined : Number(s));
+    // A field of another kind is unmounted and may read as undefined.
+    const n = (s: string | undefined) => (!s?.trim() ? undefined : Number(s));
     const base = { kind: v.kind, on: v.on, note: v.note?.trim() || null };
     const tempC = n(v.temperature);
     const body =

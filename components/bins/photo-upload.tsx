@@ -1,7 +1,9 @@
 "use client";
 
+import { useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
 import { Alert, Button } from "@/components/ui";
+import { queryKeys } from "@/lib/query-keys";
 
 // A photo for a log entry that is already saved: if storage is down the
 // entry stays and this form can simply be sent again.
@@ -10,6 +12,7 @@ export function PhotoUpload({ gardenId, eventId }: { gardenId: string; eventId: 
   const [file, setFile] = useState<File | null>(null);
   const [state, setState] = useState<"idle" | "sending" | "done">("idle");
   const [error, setError] = useState<string | null>(null);
+  const queryClient = useQueryClient();
   async function send() {
     if (!file) return;
     setState("sending");
@@ -30,6 +33,8 @@ export function PhotoUpload({ gardenId, eventId }: { gardenId: string; eventId: 
         );
       }
       setState("done");
+      // The log shows the entry's photos.
+      await queryClient.invalidateQueries({ queryKey: queryKeys.bins(gardenId) });
     } catch (e) {
       setError(e instanceof Error ? e.message : "The photo was not saved.");
       setState("idle");

@@ -44,8 +44,8 @@ export function DeleteGarden({ gardenId, gardenName }: { gardenId: string; garde
         onCancel={() => setOpen(false)}
         onConfirm={confirm}
       >
-        This removes its beds, plantings, bins, stock, logs and calendar links for every member. It
-        cannot be undone.
+        This removes its beds, plantings, bins, stock and logs for every member. It cannot be
+        undone.
       </ConfirmDialog>
     </>
   );

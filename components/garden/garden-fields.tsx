@@ -25,8 +25,9 @@ export function GardenFields({
         <TimeZoneField registration={register("timeZone")} error={errors.timeZone?.message} />
         <Field label="Units" error={errors.unitSystem?.message}>
           <Select {...register("unitSystem")}>
-            <option value="us">US customary (lb, cups, gallons, ft²)</option>
-            <option value="metric">Metric (kg, litres, m²)</option>
+            {/* Short enough to show whole in a 375 px wide phone's closed select. */}
+            <option value="us">US customary (lb, gal, ft²)</option>
+            <option value="metric">Metric (kg, L, m²)</option>
           </Select>
         </Field>
         <MonthDayField

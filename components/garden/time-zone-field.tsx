@@ -24,7 +24,7 @@ export function TimeZoneField({
   return (
     <Field
       label="Time zone"
-      hint="Type a city or region, e.g. Chicago. The garden’s days and times follow this clock."
+      hint="Type a city or region, e.g. Chicago. “Today” and every date in the plan follow this clock."
       error={error}
     >
       {(control) => (

@@ -2,7 +2,7 @@
 
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
-import { useState } from "react";
+import { useId, useState } from "react";
 import { Badge, Button, ConfirmDialog, Select, useToast } from "@/components/ui";
 import { apiFetch, ApiError } from "@/lib/api-client";
 import { roleLabels, roles, type Role } from "@/lib/auth/roles";
@@ -33,6 +33,12 @@ export function MemberList({
     queryFn: () => apiFetch<{ members: Member[] }>(`/api/gardens/${gardenId}/members`),
     initialData: { members: initial },
   });
+  const reasonId = useId();
+  // The server refuses to leave a garden without an owner (409 conflict:last_owner), so
+  // the only owner is not offered leaving or stepping down; the reason sits beside them.
+  const onlyOwner =
+    data.members.filter((m) => m.role === "owner").length === 1 &&
+    data.members.some((m) => m.userId === meId && m.role === "owner");
   const onError = (e: unknown) =>
     toast.show({ title: e instanceof ApiError ? e.message : "That did not work.", tone: "danger" });
 
@@ -70,42 +76,59 @@ export function MemberList({
   return (
     <>
       <ul className="flex flex-col divide-y divide-loam-200">
-        {data.members.map((m) => (
-          <li key={m.userId} className="flex flex-wrap items-center gap-3 py-3">
-            <span className="flex flex-col">
-              <span className="font-semibold">
-                {m.name}{" "}
-                {m.userId === meId ? <span className="text-sm font-normal">(you)</span> : null}
+        {data.members.map((m) => {
+          const mine = m.userId === meId;
+          const locked = mine && onlyOwner;
+          const describedBy = locked ? reasonId : undefined;
+          return (
+            <li key={m.userId} className="flex flex-wrap items-center gap-3 py-3">
+              <span className="flex min-w-0 flex-col">
+                <span className="font-semibold">
+                  {m.name} {mine ? <span className="text-sm font-normal">(you)</span> : null}
+                </span>
+                <span className="text-sm break-all text-soil-700">{m.email}</span>
               </span>
-              <span className="text-sm text-soil-700">{m.email}</span>
-            </span>
-            <span className="ml-auto flex flex-wrap items-center gap-2">
-              {canManage ? (
-                <Select
-                  aria-label={`Role of ${m.name}`}
-                  value={m.role}
-                  disabled={changeRole.isPending}
-                  onChange={(e) =>
-                    changeRole.mutate({ userId: m.userId, role: e.target.value as Role })
-                  }
-                >
-                  {[...roles].reverse().map((r) => (
-                    <option key={r} value={r}>
-                      {roleLabels[r]}
-                    </option>
-                  ))}
-                </Select>
-              ) : (
-                <Badge>{roleLabels[m.role]}</Badge>
-              )}
-              {canManage || m.userId === meId ? (
-                <Button size="sm" variant="ghost" onClick={() => setRemoving(m)}>
-                  {m.userId === meId ? "Leave" : "Remove"}
-                </Button>
+              <span className="ml-auto flex flex-wrap items-center gap-2">
+                {canManage ? (
+                  <Select
+                    aria-label={`Role of ${m.name}`}
+                    aria-describedby={describedBy}
+                    value={m.role}
+                    disabled={changeRole.isPending || locked}
+                    onChange={(e) =>
+                      changeRole.mutate({ userId: m.userId, role: e.target.value as Role })
+                    }
+                  >
+                    {[...roles].reverse().map((r) => (
+                      <option key={r} value={r}>
+                        {roleLabels[r]}
+                      </option>
+                    ))}
+                  </Select>
+                ) : (
+                  <Badge>{roleLabels[m.role]}</Badge>
+                )}
+                {canManage || mine ? (
+                  <Button
+                    size="sm"
+                    variant="ghost"
+                    disabled={locked}
+                    aria-describedby={describedBy}
+                    onClick={() => setRemoving(m)}
+                  >
+                    {mine ? "Leave" : "Remove"}
+                  </Button>
+                ) : null}
+              </span>
+              {locked ? (
+                <p id={reasonId} className="basis-full text-sm text-soil-700">
+                  You are the only owner, so you cannot leave or change your own role. Make someone
+                  else an owner first.
+                </p>
               ) : null}
-            </span>
-          </li>
-        ))}
+            </li>
+          );
+        })}
       </ul>
       <ConfirmDialog
         open={removing !== null}

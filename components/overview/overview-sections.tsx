@@ -1,3 +1,4 @@
+import type { ReactNode } from "react";
 import Link from "next/link";
 import { Alert, Card, CardBody, CardHeader, CardTitle, buttonStyles } from "@/components/ui";
 import { LiquidCaution, PreHarvestCaution } from "@/components/balance/feeding-cautions";
@@ -21,38 +22,33 @@ export function ThisMonth({
   gardenId: string;
 }) {
   return (
-    <Card>
-      <CardHeader>
-        <CardTitle>This month</CardTitle>
-      </CardHeader>
-      <CardBody className="flex flex-col gap-1">
-        {status.thisMonth.map((r) => {
-          const a = (si: number) => formatPoolAmount(si, r.pool, system);
-          return (
-            <p key={r.pool} data-testid={`this-month-${r.pool}`}>
-              <strong>{r.pool === "castings" ? "Castings" : "Leachate"}:</strong> {a(r.opening)} on
-              hand at the start, {a(r.supplied)} {r.pool === "castings" ? "harvested" : "collected"}
-              , {a(r.demand)} wanted —{" "}
-              {r.shortfall > 0 ? (
-                <strong className="text-bloom-800">{a(r.shortfall)} short</strong>
-              ) : (
-                "all fed"
-              )}
-              {r.tea && r.tea.litres > 0
-                ? ` (incl. ${formatAmount(r.tea.litres, "liquid", system)} tea brewed from ${formatAmount(r.tea.castingsDemandKg, "castings-mass", system)} castings)`
-                : ""}
-              .
-            </p>
-          );
-        })}
-        <Link
-          href={`/g/${gardenId}/balance`}
-          className={buttonStyles({ variant: "ghost", size: "sm", className: "self-start" })}
-        >
-          Open the balance
-        </Link>
-      </CardBody>
-    </Card>
+    <OverviewCard title="This month" bodyClassName="flex flex-col gap-1">
+      {status.thisMonth.map((r) => {
+        const a = (si: number) => formatPoolAmount(si, r.pool, system);
+        return (
+          <p key={r.pool} data-testid={`this-month-${r.pool}`}>
+            <strong>{r.pool === "castings" ? "Castings" : "Leachate"}:</strong> {a(r.opening)} on
+            hand at the start, {a(r.supplied)} {r.pool === "castings" ? "harvested" : "collected"},{" "}
+            {a(r.demand)} wanted —{" "}
+            {r.shortfall > 0 ? (
+              <strong className="text-bloom-800">{a(r.shortfall)} short</strong>
+            ) : (
+              "all fed"
+            )}
+            {r.tea && r.tea.litres > 0
+              ? ` (incl. ${formatAmount(r.tea.litres, "liquid", system)} tea brewed from ${formatAmount(r.tea.castingsDemandKg, "castings-mass", system)} castings)`
+              : ""}
+            .
+          </p>
+        );
+      })}
+      <Link
+        href={`/g/${gardenId}/balance`}
+        className={buttonStyles({ variant: "ghost", size: "sm", className: "self-start" })}
+      >
+        Open the balance
+      </Link>
+    </OverviewCard>
   );
 }
 
@@ -67,27 +63,22 @@ export function NextHarvests({
 }) {
   const nameOf = nameLookup(names);
   return (
-    <Card>
-      <CardHeader>
-        <CardTitle>Next harvests</CardTitle>
-      </CardHeader>
-      <CardBody>
-        {status.nextHarvests.length === 0 ? (
-          <p className="text-soil-700">No tray is due for harvest in the next months.</p>
-        ) : (
-          <ul className="flex flex-col gap-1">
-            {status.nextHarvests.map((h) => (
-              <li key={`${h.binId}-${h.date}`}>
-                {formatDay(h.date)}: {nameOf("bin", h.binId) ?? "a bin"}
-                {h.amountKg !== null
-                  ? `, about ${formatPoolAmount(h.amountKg, "castings", system)}`
-                  : ""}
-              </li>
-            ))}
-          </ul>
-        )}
-      </CardBody>
-    </Card>
+    <OverviewCard title="Next harvests">
+      {status.nextHarvests.length === 0 ? (
+        <EmptyNote>No tray is due for harvest in the next months.</EmptyNote>
+      ) : (
+        <ul className="flex flex-col gap-1">
+          {status.nextHarvests.map((h) => (
+            <li key={`${h.binId}-${h.date}`}>
+              {formatDay(h.date)}: {nameOf("bin", h.binId) ?? "a bin"}
+              {h.amountKg !== null
+                ? `, about ${formatPoolAmount(h.amountKg, "castings", system)}`
+                : ""}
+            </li>
+          ))}
+        </ul>
+      )}
+    </OverviewCard>
   );
 }
 
@@ -103,32 +94,27 @@ export function DueThisWeek({
   const nameOf = nameLookup(names);
   const liquids = status.dueThisWeek.some((f) => f.material !== "castings");
   return (
-    <Card>
-      <CardHeader>
-        <CardTitle>Feedings due this week</CardTitle>
-      </CardHeader>
-      <CardBody className="flex flex-col gap-2">
-        {status.dueThisWeek.length === 0 ? (
-          <p className="text-soil-700">Nothing is due in the next seven days.</p>
-        ) : (
-          <ul className="flex flex-col gap-1">
-            {status.dueThisWeek.map((f) => (
-              <li key={f.id}>
-                {formatDay(f.date)}: {nameOf("planting", f.plantingId) ?? "a planting"} —{" "}
-                {formatAmount(
-                  f.amount,
-                  f.material === "castings" ? "castings-mass" : "liquid",
-                  system,
-                )}{" "}
-                {f.material}
-                {f.status === "blocked" ? " (held back: pre-harvest interval)" : ""}
-              </li>
-            ))}
-          </ul>
-        )}
-        {liquids ? <LiquidCaution /> : null}
-      </CardBody>
-    </Card>
+    <OverviewCard title="Feedings due this week" bodyClassName="flex flex-col gap-2">
+      {status.dueThisWeek.length === 0 ? (
+        <EmptyNote>Nothing is due in the next seven days.</EmptyNote>
+      ) : (
+        <ul className="flex flex-col gap-1">
+          {status.dueThisWeek.map((f) => (
+            <li key={f.id}>
+              {formatDay(f.date)}: {nameOf("planting", f.plantingId) ?? "a planting"} —{" "}
+              {formatAmount(
+                f.amount,
+                f.material === "castings" ? "castings-mass" : "liquid",
+                system,
+              )}{" "}
+              {f.material}
+              {f.status === "blocked" ? " (held back: pre-harvest interval)" : ""}
+            </li>
+          ))}
+        </ul>
+      )}
+      {liquids ? <LiquidCaution /> : null}
+    </OverviewCard>
   );
 }
 
@@ -136,34 +122,37 @@ export function StockOnHand({
   status,
   names,
   system,
+  gardenId,
 }: {
   status: GardenStatus;
   names: GardenNames;
   system: UnitSystem;
+  gardenId: string;
 }) {
   const nameOf = nameLookup(names);
   return (
-    <Card>
-      <CardHeader>
-        <CardTitle>Stock on hand</CardTitle>
-      </CardHeader>
-      <CardBody>
-        {status.stock.length === 0 ? (
-          <p className="text-soil-700">Nothing on the shelf right now.</p>
-        ) : (
-          <ul className="flex flex-col gap-1">
-            {status.stock.map((l) => (
-              <li key={l.id}>
-                {formatPoolAmount(l.remainingSi, l.material, system)} {l.material} from{" "}
-                {l.binId ? (nameOf("bin", l.binId) ?? "a bin") : "outside"}, made{" "}
-                {formatDay(l.producedOn)} · keeps until {formatDay(l.keepsUntil)}
-                {l.nearEnd ? <strong className="text-clay-800"> — use soon</strong> : null}
-              </li>
-            ))}
-          </ul>
-        )}
-      </CardBody>
-    </Card>
+    <OverviewCard title="Stock on hand" bodyClassName="flex flex-col gap-2">
+      {status.stock.length === 0 ? (
+        <EmptyNote>Nothing on the shelf right now.</EmptyNote>
+      ) : (
+        <ul className="flex flex-col gap-1">
+          {status.stock.map((l) => (
+            <li key={l.id}>
+              {formatPoolAmount(l.remainingSi, l.material, system)} {l.material} from{" "}
+              {l.binId ? (nameOf("bin", l.binId) ?? "a bin") : "outside"}, made{" "}
+              {formatDay(l.producedOn)} · keeps until {formatDay(l.keepsUntil)}
+              {l.nearEnd ? <strong className="text-clay-800"> — use soon</strong> : null}
+            </li>
+          ))}
+        </ul>
+      )}
+      <Link
+        href={`/g/${gardenId}/stock`}
+        className={buttonStyles({ variant: "ghost", size: "sm", className: "self-start" })}
+      >
+        Open the stock
+      </Link>
+    </OverviewCard>
   );
 }
 
@@ -212,25 +201,83 @@ function groupWarnings(warnings: GardenStatus["warnings"]) {
   return [...groups.values()];
 }
 
-export function FirstSteps({ hasBins, hasBeds }: { hasBins: boolean; hasBeds: boolean }) {
+export function FirstSteps({
+  hasBins,
+  hasBeds,
+  gardenId,
+}: {
+  hasBins: boolean;
+  hasBeds: boolean;
+  gardenId: string;
+}) {
+  const done = "text-soil-700 line-through";
   return (
-    <Card data-testid="first-steps">
+    <OverviewCard title="First steps" testId="first-steps">
+      <ol className="ml-5 flex list-decimal flex-col gap-1">
+        <li className={hasBins ? done : undefined}>
+          <Link href={`/g/${gardenId}/bins/new`} className="underline">
+            Add your worm bin
+          </Link>
+          : its tray size, how many trays, when it started.
+        </li>
+        <li className={hasBeds ? done : undefined}>
+          <Link href={`/g/${gardenId}/beds`} className="underline">
+            Add a bed or a container
+          </Link>
+          , and what grows in it.
+        </li>
+        <li>
+          Open the Balance to see what the bins make against what the plants want, month by month.
+        </li>
+      </ol>
+    </OverviewCard>
+  );
+}
+
+/** The garden's counts, each a link to the page that lists them. */
+export function GardenCounts({
+  figures,
+}: {
+  figures: { label: string; value: number; href: string }[];
+}) {
+  return (
+    <section aria-label="The garden at a glance" className="grid grid-cols-2 gap-3 sm:grid-cols-5">
+      {figures.map((f) => (
+        <Link key={f.label} href={f.href} className="rounded-card">
+          <Card className="h-full hover:border-loam-400">
+            <CardBody>
+              <p className="text-3xl font-semibold tabular-nums">{f.value}</p>
+              <p className="text-sm text-soil-700 underline underline-offset-2">{f.label}</p>
+            </CardBody>
+          </Card>
+        </Link>
+      ))}
+    </section>
+  );
+}
+
+/** The one card shape every overview section shares: a title over its body. */
+function OverviewCard({
+  title,
+  bodyClassName,
+  testId,
+  children,
+}: {
+  title: string;
+  bodyClassName?: string;
+  testId?: string;
+  children: ReactNode;
+}) {
+  return (
+    <Card data-testid={testId}>
       <CardHeader>
-        <CardTitle>First steps</CardTitle>
+        <CardTitle>{title}</CardTitle>
       </CardHeader>
-      <CardBody>
-        <ol className="ml-5 flex list-decimal flex-col gap-1">
-          <li className={hasBins ? "text-soil-700 line-through" : undefined}>
-            Add your worm bin: its tray size, how many trays, when it started.
-          </li>
-          <li className={hasBeds ? "text-soil-700 line-through" : undefined}>
-            Add a bed or a container, and what grows in it.
-          </li>
-          <li>
-            Open the Balance to see what the bins make against what the plants want, month by month.
-          </li>
-        </ol>
-      </CardBody>
+      <CardBody className={bodyClassName}>{children}</CardBody>
     </Card>
   );
+}
+
+function EmptyNote({ children }: { children: ReactNode }) {
+  return <p className="text-soil-700">{children}</p>;
 }

@@ -5,6 +5,7 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Badge, Button, useToast } from "@/components/ui";
 import { apiFetch, ApiError } from "@/lib/api-client";
+import type { RuleFormValues } from "@/lib/plantings/rule-form-values";
 import { queryKeys } from "@/lib/query-keys";
 import type { UnitSystem } from "@/lib/units";
 import { RuleEditor } from "./rule-editor";
@@ -17,6 +18,10 @@ export interface PlantingView {
   plantedOn: string;
   ruleWords: string;
   ruleSource: "planting" | "crop" | "default";
+  /** The first rule in use, as the rule editor's fields. */
+  ruleValues: RuleFormValues;
+  /** How many rules feed it (the editor edits one and replaces them all with it). */
+  ruleCount: number;
 }
 
 const SOURCE_WORDS = {
@@ -32,17 +37,20 @@ export function PlantingItem({
   canEdit,
   today,
   unitSystem,
+  rateCut,
 }: {
   gardenId: string;
   planting: PlantingView;
   canEdit: boolean;
   today: string;
   unitSystem: UnitSystem;
+  /** The Balance's rate-cut link: open the editor on these reduced values (not saved). */
+  rateCut?: { percent: number; values: RuleFormValues };
 }) {
   const router = useRouter();
   const toast = useToast();
   const queryClient = useQueryClient();
-  const [editing, setEditing] = useState(false);
+  const [editing, setEditing] = useState(Boolean(rateCut && canEdit));
   const [confirming, setConfirming] = useState(false);
   const [busy, setBusy] = useState(false);
   const url = `/api/gardens/${gardenId}/plantings/${planting.id}`;
@@ -118,10 +126,21 @@ export function PlantingItem({
       {editing ? (
         <RuleEditor
           gardenId={gardenId}
-          plantingId={planting.id}
+          saveUrl={url}
           plantedOn={planting.plantedOn}
           today={today}
           unitSystem={unitSystem}
+          initial={rateCut?.values ?? planting.ruleValues}
+          note={[
+            rateCut
+              ? `Amount cut by ${rateCut.percent} %, as the Balance suggests. Not saved until you press Save rule.`
+              : "",
+            planting.ruleCount > 1
+              ? `It is fed by ${planting.ruleCount} rules; this form shows the first, and saving replaces all of them with it.`
+              : "",
+          ]
+            .filter(Boolean)
+            .join(" ")}
           onDone={() => setEditing(false)}
         />
       ) : null}

@@ -8,6 +8,7 @@ import { useApiForm } from "@/components/forms/use-api-form";
 import { Button, Field, Input, Select } from "@/components/ui";
 import { apiFetch } from "@/lib/api-client";
 import { buildRrule, WEEKDAYS, type RecurrenceForm } from "@/lib/plantings/recurrence";
+import { recurrenceForm, type RuleFormValues } from "@/lib/plantings/rule-form-values";
 import { queryKeys } from "@/lib/query-keys";
 import type { UnitSystem } from "@/lib/units";
 import { feedingRuleSchema } from "@/lib/validation/feeding-rule";
@@ -23,36 +24,45 @@ const AMOUNT_UNITS: Record<
   "per-container-volume": { us: ["cup"], metric: ["mL"], per: { us: "gal", metric: "L" } },
 };
 
-/** Override a planting's feeding rule: material, method, basis, amount, and a recurrence built or typed. */
+/**
+ * Override a planting's feeding rule: material, method, basis, amount, and a
+ * recurrence built or typed. Opens on `initial` (the rule in use, or the
+ * Balance's rate cut of it); a recurrence the simple form cannot show opens as RRULE.
+ */
 export function RuleEditor({
   gardenId,
-  plantingId,
+  saveUrl,
   plantedOn,
   today,
   unitSystem,
+  initial,
+  note,
   onDone,
 }: {
   gardenId: string;
-  plantingId: string;
+  /** The planting or crop the rule belongs to: PATCHed with { rule }. */
+  saveUrl: string;
+  /** First day the preview's next dates count from. */
   plantedOn: string;
   today: string;
   unitSystem: UnitSystem;
+  initial?: RuleFormValues;
+  /** Why the form opened with these values (the rate cut), shown above it. */
+  note?: string;
   onDone: () => void;
 }) {
   const router = useRouter();
   const queryClient = useQueryClient();
-  const [raw, setRaw] = useState(false);
-  const [rec, setRec] = useState<RecurrenceForm>({
-    every: 1,
-    unit: "months",
-    monthDay: null,
-    weekday: null,
-  });
+  const simple = initial ? recurrenceForm(initial.recurrence) : null;
+  const [raw, setRaw] = useState(Boolean(initial && !simple));
+  const [rec, setRec] = useState<RecurrenceForm>(
+    simple ?? { every: 1, unit: "months", monthDay: null, weekday: null },
+  );
   const us = unitSystem === "us";
   const { form, formError, submit } = useApiForm(
     // The preprocess step (upper-casing the RRULE) hides the object shape from the form types.
     feedingRuleSchema as unknown as typeof ruleSchema,
-    {
+    initial ?? {
       material: "castings",
       method: "top-dress",
       basis: "per-plant",
@@ -78,7 +88,7 @@ export function RuleEditor({
     const v = values as { amount: { per?: string } };
     if (units.per) v.amount.per = us ? units.per.us : units.per.metric;
     else delete v.amount.per;
-    await apiFetch(`/api/gardens/${gardenId}/plantings/${plantingId}`, {
+    await apiFetch(saveUrl, {
       method: "PATCH",
       body: { rule: values },
     });
@@ -95,6 +105,7 @@ export function RuleEditor({
       aria-label="Change feeding rule"
     >
       <FormMessage message={formError} />
+      {note ? <p className="font-semibold text-soil-900">{note}</p> : null}
       <div className="grid gap-3 sm:grid-cols-3">
         <Field label="Material" error={errors.material?.message}>
           <Select {...register("material")}>

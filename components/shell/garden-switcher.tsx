@@ -1,7 +1,7 @@
 "use client";
 
 import { useRouter } from "next/navigation";
-import { Select } from "@/components/ui";
+import { cn, Select } from "@/components/ui";
 
 type GardenOption = { id: string; name: string };
 
@@ -9,19 +9,21 @@ type GardenOption = { id: string; name: string };
 export function GardenSwitcher({
   gardens,
   currentId,
+  className,
 }: {
   gardens: GardenOption[];
   currentId?: string;
+  className?: string;
 }) {
   const router = useRouter();
   if (gardens.length === 0) return null;
   return (
-    <label className="flex items-center gap-2">
+    <label className={cn("flex items-center", className)}>
       <span className="sr-only">Garden</span>
       <Select
         value={currentId ?? ""}
         onChange={(e) => router.push(e.target.value ? `/g/${e.target.value}` : "/gardens")}
-        className="min-w-40"
+        className="w-full min-w-0"
         aria-label="Switch garden"
       >
         {!currentId ? <option value="">Choose a garden…</option> : null}

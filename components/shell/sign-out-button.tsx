@@ -5,7 +5,7 @@ import { useState } from "react";
 import { Button } from "@/components/ui";
 import { apiFetch } from "@/lib/api-client";
 
-export function SignOutButton() {
+export function SignOutButton({ className }: { className?: string }) {
   const router = useRouter();
   const [pending, setPending] = useState(false);
   return (
@@ -13,6 +13,7 @@ export function SignOutButton() {
       variant="ghost"
       size="sm"
       pending={pending}
+      className={className}
       onClick={async () => {
         setPending(true);
         await apiFetch("/api/session", { method: "DELETE" }).catch(() => undefined);

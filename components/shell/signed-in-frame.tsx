@@ -1,22 +1,31 @@
 import type { ReactNode } from "react";
-import { listGardensForUser } from "@/db/queries/memberships";
-import type { UserDto } from "@/db/queries/users";
+import type { Role } from "@/lib/auth/roles";
 import { AppHeader } from "./app-header";
+import { GardenNav } from "./garden-nav";
 
-/** Header with the garden switcher, then the page. */
-export async function SignedInFrame({
-  user,
-  currentGardenId,
+/**
+ * Header (with the garden switcher and, on phones, the menu), the garden's tab bar on
+ * wide screens, then the page. The page or layout fetches the gardens and hands them
+ * down: components never read the database (eslint.config.mjs).
+ */
+export function SignedInFrame({
+  userName,
+  gardens,
+  garden,
   children,
 }: {
-  user: UserDto;
-  currentGardenId?: string;
+  userName: string;
+  gardens: { id: string; name: string }[];
+  /** The garden being shown, and the signed-in person's role in it. */
+  garden?: { id: string; role: Role };
   children: ReactNode;
 }) {
-  const gardens = await listGardensForUser({ userId: user.id });
   return (
     <>
-      <AppHeader userName={user.name} gardens={gardens} currentGardenId={currentGardenId} />
+      <AppHeader userName={userName} gardens={gardens} garden={garden} />
+      {garden ? (
+        <GardenNav gardenId={garden.id} role={garden.role} className="hidden md:block" />
+      ) : null}
       {children}
     </>
   );

@@ -71,7 +71,7 @@ export function StockList({
       ) : null}
       <ul className="flex flex-col divide-y divide-loam-200">
         {shown.map((lot) => (
-          <li key={lot.id} className="flex flex-col gap-2 py-3">
+          <li key={lot.id} data-testid="stock-lot" className="flex flex-col gap-2 py-3">
             <div className="flex flex-wrap items-center gap-2">
               <strong className="text-lg">
                 {formatAmount(lot.remainingSi, kindOf(lot.material), system)} {lot.material}

@@ -5,6 +5,7 @@ import { useId, useState, type FormEvent, type ReactNode } from "react";
 import { Button } from "@/components/ui/button";
 import { Dialog } from "@/components/ui/dialog";
 import { Input } from "@/components/ui/input";
+import { confirmTextMismatch, sameConfirmText } from "@/lib/confirm-text";
 
 export type ConfirmDialogProps = {
   open: boolean;
@@ -18,7 +19,8 @@ export type ConfirmDialogProps = {
   cancelLabel?: string;
   /**
    * A word the person must type before the confirm button works (e.g. the
-   * garden's name). Compared exactly, case included, after trimming the ends.
+   * garden's name). Case counts; curly and straight quotes, dashes and spaces do not
+   * (lib/confirm-text.ts), and a line under the field says what does not match yet.
    */
   confirmText?: string;
   /** "danger" for destructive actions (the default), "primary" otherwise. */
@@ -54,7 +56,9 @@ function ConfirmBody({
 }: Omit<ConfirmDialogProps, "open" | "title">) {
   const [typed, setTyped] = useState("");
   const inputId = useId();
-  const matches = confirmText === undefined || typed.trim() === confirmText;
+  const hintId = useId();
+  const matches = confirmText === undefined || sameConfirmText(typed, confirmText);
+  const mismatch = confirmText === undefined ? null : confirmTextMismatch(typed, confirmText);
 
   function submit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
@@ -78,8 +82,13 @@ function ConfirmBody({
             autoCapitalize="off"
             autoCorrect="off"
             spellCheck={false}
+            aria-describedby={mismatch ? hintId : undefined}
             data-autofocus
           />
+          {/* Polite: read after typing pauses, not on every key. */}
+          <p id={hintId} aria-live="polite" className="min-h-5 text-sm text-soil-700">
+            {mismatch}
+          </p>
         </div>
       ) : null}
       <div className="flex flex-col-reverse gap-2 sm:flex-row sm:justify-end">

@@ -32,6 +32,7 @@ export { Input, type InputProps } from "@/components/ui/input";
 export { Select, type SelectProps } from "@/components/ui/select";
 export { Skeleton } from "@/components/ui/skeleton";
 export { Table, TBody, Td, Th, THead, Tr, type TableProps } from "@/components/ui/table";
+export { inlineLinkStyles, textLinkStyles } from "@/components/ui/text-link";
 export { Textarea, type TextareaProps } from "@/components/ui/textarea";
 export {
   TOAST_ACTION_DURATION_MS,

@@ -244,3 +244,23 @@ export async function removeBed({
     }),
   );
 }
+
+/** Whether any planting in the bed has logged applications: then removing it archives it instead. */
+export async function bedHasLoggedFeedings({
+  gardenId,
+  bedId,
+}: {
+  gardenId: string;
+  bedId: string;
+}): Promise<boolean> {
+  const db = await getDb();
+  const [row] = await db
+    .select({ n: count() })
+    .from(applications)
+    .innerJoin(
+      plantings,
+      and(eq(plantings.gardenId, applications.gardenId), eq(plantings.id, applications.plantingId)),
+    )
+    .where(and(eq(applications.gardenId, gardenId), eq(plantings.bedId, bedId)));
+  return (row?.n ?? 0) > 0;
+}

@@ -1,7 +1,8 @@
 import "server-only";
-import { and, desc, eq, or } from "drizzle-orm";
+import { and, desc, eq, inArray, or } from "drizzle-orm";
 import { getDb, type DbOrTx } from "@/db";
-import { binEvents, bins, gardens, stockLots, users, wormMoves } from "@/db/schema";
+import { binEvents, bins, gardens, stockLots, uploads, users, wormMoves } from "@/db/schema";
+import { PHOTO_OWNER_TYPE } from "@/db/queries/photos";
 import { insertDrain, insertHarvest } from "@/db/queries/lots";
 import type { BinEventKind } from "@/lib/validation/bin-event";
 
@@ -29,6 +30,8 @@ export interface BinLogEntry {
   otherBin: { gardenName: string; binName: string } | null;
   note: string | null;
   lotId: string | null;
+  /** Photos attached to the entry (a harvest's), oldest first; read through /photos/{id}. */
+  photoIds: string[];
   loggedBy: string | null;
   loggedAt: string;
 }
@@ -118,9 +121,15 @@ export async function listBinLog({
           .orderBy(desc(wormMoves.movedOn), desc(wormMoves.createdAt))
           .limit(limit);
   const names = await binNames(db, gardenId);
+  const photos = await photosByEvent(
+    db,
+    gardenId,
+    events.map((e) => e.id),
+  );
   const entries: BinLogEntry[] = [
     ...events.map((e) => ({
       ...e,
+      photoIds: photos.get(e.id) ?? [],
       source: "event" as const,
       kind: eventKind(e.kind),
       direction: null,
@@ -148,6 +157,7 @@ export async function listBinLog({
         otherBin: other ? (names.get(other) ?? null) : null,
         note: m.note,
         lotId: null,
+        photoIds: [],
         loggedBy: m.loggedBy,
         loggedAt: m.loggedAt.toISOString(),
       };
@@ -159,6 +169,24 @@ export async function listBinLog({
       a.on === b.on ? b.loggedAt.localeCompare(a.loggedAt) : b.on.localeCompare(a.on),
     )
     .slice(0, limit);
+}
+
+async function photosByEvent(db: DbOrTx, gardenId: string, eventIds: string[]) {
+  const byEvent = new Map<string, string[]>();
+  if (!eventIds.length) return byEvent;
+  const rows = await db
+    .select({ id: uploads.id, eventId: uploads.attachedToId })
+    .from(uploads)
+    .where(
+      and(
+        eq(uploads.gardenId, gardenId),
+        eq(uploads.attachedToType, PHOTO_OWNER_TYPE),
+        inArray(uploads.attachedToId, eventIds),
+      ),
+    )
+    .orderBy(uploads.createdAt);
+  for (const r of rows) byEvent.set(r.eventId!, [...(byEvent.get(r.eventId!) ?? []), r.id]);
+  return byEvent;
 }
 
 async function binNames(db: DbOrTx, gardenId: string) {

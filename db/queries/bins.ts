@@ -182,6 +182,12 @@ export async function countLoggedWorms(
   return { worms: Math.max(0, worms), countedOn: since };
 }
 
+/** The bin page's "worms by the log": the same count a worm move is checked against. */
+export async function getLoggedWorms(input: { gardenId: string; binId: string; on: string }) {
+  const db = await getDb();
+  return db.transaction((tx) => countLoggedWorms(tx, input));
+}
+
 /** Where each lot came from, for the stock list: its bin (name), its log entry, its manure flag as it applies. */
 export async function listLotSources({ gardenId }: { gardenId: string }) {
   const db = await getDb();

@@ -3,6 +3,7 @@ import { markGardenInputsChanged } from "@/db/queries/garden-inputs-version";
 import { eq } from "drizzle-orm";
 import { getDb } from "@/db";
 import { gardens, memberships } from "@/db/schema";
+import { forgetCheckedSessionsAndRoles } from "@/lib/auth/gate-cache";
 import type { CreateGardenInput, UpdateGardenInput } from "@/lib/validation/garden";
 
 const gardenColumns = {
@@ -80,4 +81,5 @@ export async function deleteGarden({ gardenId }: { gardenId: string }): Promise<
   const db = await getDb();
   await db.delete(gardens).where(eq(gardens.id, gardenId));
   markGardenInputsChanged(gardenId);
+  forgetCheckedSessionsAndRoles(); // its memberships went with it
 }

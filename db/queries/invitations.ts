@@ -1,9 +1,10 @@
 import "server-only";
-import { and, desc, eq, isNull } from "drizzle-orm";
+import { and, desc, eq, isNull, sql } from "drizzle-orm";
 import { getDb } from "@/db";
-import { gardens, invitations, memberships } from "@/db/schema";
+import { gardens, invitations, memberships, users } from "@/db/schema";
 import type { Role } from "@/lib/auth/roles";
 import { roleAtLeast } from "@/lib/auth/roles";
+import { forgetCheckedSessionsAndRoles } from "@/lib/auth/gate-cache";
 
 export const INVITATION_TTL_MS = 7 * 24 * 60 * 60 * 1000;
 
@@ -73,6 +74,43 @@ export async function listOpenInvitations({
     )
     .orderBy(desc(invitations.createdAt))
     .limit(200);
+}
+
+/**
+ * Who an address already is in this garden, if anyone: a member, or someone with an
+ * invitation still open (not accepted, not withdrawn; an expired one counts too, since
+ * "Resend" renews it). Addresses are stored trimmed and lower-cased.
+ */
+export async function findInviteeStanding({
+  gardenId,
+  email,
+}: {
+  gardenId: string;
+  email: string;
+}): Promise<{ member: true } | { invitationId: string } | null> {
+  const db = await getDb();
+  const address = email.trim().toLowerCase();
+  const [member] = await db
+    .select({ userId: memberships.userId })
+    .from(memberships)
+    .innerJoin(users, eq(users.id, memberships.userId))
+    .where(and(eq(memberships.gardenId, gardenId), eq(sql`lower(${users.email})`, address)))
+    .limit(1);
+  if (member) return { member: true };
+  const [open] = await db
+    .select({ id: invitations.id })
+    .from(invitations)
+    .where(
+      and(
+        eq(invitations.gardenId, gardenId),
+        eq(invitations.email, address),
+        isNull(invitations.acceptedAt),
+        isNull(invitations.revokedAt),
+      ),
+    )
+    .orderBy(desc(invitations.createdAt))
+    .limit(1);
+  return open ? { invitationId: open.id } : null;
 }
 
 export async function getInvitation({
@@ -175,7 +213,7 @@ export async function acceptInvitation(input: {
 }): Promise<AcceptOutcome> {
   const db = await getDb();
   const now = input.now ?? new Date();
-  return db.transaction(async (tx) => {
+  const outcome = await db.transaction(async (tx): Promise<AcceptOutcome> => {
     const [inv] = await tx
       .select(invitationColumns)
       .from(invitations)
@@ -211,4 +249,6 @@ export async function acceptInvitation(input: {
       .where(eq(invitations.id, inv.id));
     return { ok: true, gardenId: inv.gardenId, role };
   });
+  forgetCheckedSessionsAndRoles(); // a role may have changed
+  return outcome;
 }

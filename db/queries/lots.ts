@@ -64,19 +64,7 @@ export async function insertApplicationWithDraws(
       draws: "names a lot twice",
     });
   const pool = input.material === "leachate" ? "leachate" : "castings";
-  const lots = lotIds.length
-    ? await tx
-        .select({
-          id: stockLots.id,
-          material: stockLots.material,
-          producedOn: stockLots.producedOn,
-          initial: stockLots.initialAmountSi,
-        })
-        .from(stockLots)
-        .where(and(eq(stockLots.gardenId, gardenId), inArray(stockLots.id, lotIds)))
-        .for("update")
-    : [];
-  const taken = await takenSoFar(tx, gardenId, lotIds);
+  const lots = await readLots(tx, { gardenId, lotIds, lock: true });
   const fields: Record<string, string> = {};
   draws.forEach((d, i) => {
     const lot = lots.find((l) => l.id === d.lotId);
@@ -85,7 +73,7 @@ export async function insertApplicationWithDraws(
     else if (lot.material !== pool) fields[`${at}.lotId`] = `is ${lot.material}, not ${pool}`;
     else if (lot.producedOn > input.appliedOn) fields[`${at}.lotId`] = "was made after that day";
     else if (!(d.amountSi > 0)) fields[`${at}.amountSi`] = "must be more than zero";
-    else if (d.amountSi > lot.initial - (taken.get(lot.id) ?? 0) + EPSILON)
+    else if (goesBelowZero(lot, -d.amountSi))
       fields[`${at}.amountSi`] = "is more than the lot has left";
   });
   if (Object.keys(fields).length) {
@@ -127,17 +115,48 @@ function plannedDate(key: string): string | null {
   return m ? m[1]! : null;
 }
 
-/** Per lot: everything drawn less every adjustment (what has left the lot so far). */
-async function takenSoFar(tx: DbOrTx, gardenId: string, lotIds: string[]) {
-  const taken = new Map<string, number>();
-  if (!lotIds.length) return taken;
+interface LotLeft {
+  id: string;
+  binId: string | null;
+  material: "castings" | "leachate";
+  producedOn: string;
+  initialSi: number;
+  /** Initial amount less every draw, plus adjustments (not aged out: that is the engine's to say). */
+  remainingSi: number;
+}
+
+/**
+ * The one lot look-up: a garden's lots (all, or those named), oldest first, each
+ * with what its draws and adjustments have left. `lock` takes the rows FOR
+ * UPDATE, so a writer's check and its insert see the same stock.
+ */
+async function readLots(
+  tx: DbOrTx,
+  { gardenId, lotIds, lock = false }: { gardenId: string; lotIds?: string[]; lock?: boolean },
+): Promise<LotLeft[]> {
+  if (lotIds && !lotIds.length) return [];
+  const named = lotIds ? inArray(stockLots.id, lotIds) : undefined;
+  const query = tx
+    .select({
+      id: stockLots.id,
+      binId: stockLots.binId,
+      material: stockLots.material,
+      producedOn: stockLots.producedOn,
+      initialSi: stockLots.initialAmountSi,
+    })
+    .from(stockLots)
+    .where(and(eq(stockLots.gardenId, gardenId), named))
+    .orderBy(asc(stockLots.producedOn), asc(stockLots.id));
+  const lots = lock ? await query.for("update") : await query;
+  const ids = lots.map((l) => l.id);
+  if (!ids.length) return [];
   const draws = await tx
     .select({
       lotId: applicationDraws.lotId,
       total: sql<number>`sum(${applicationDraws.amountSi})`,
     })
     .from(applicationDraws)
-    .where(and(eq(applicationDraws.gardenId, gardenId), inArray(applicationDraws.lotId, lotIds)))
+    .where(and(eq(applicationDraws.gardenId, gardenId), inArray(applicationDraws.lotId, ids)))
     .groupBy(applicationDraws.lotId);
   const adjustments = await tx
     .select({
@@ -145,11 +164,17 @@ async function takenSoFar(tx: DbOrTx, gardenId: string, lotIds: string[]) {
       total: sql<number>`sum(${stockAdjustments.amountSi})`,
     })
     .from(stockAdjustments)
-    .where(and(eq(stockAdjustments.gardenId, gardenId), inArray(stockAdjustments.lotId, lotIds)))
+    .where(and(eq(stockAdjustments.gardenId, gardenId), inArray(stockAdjustments.lotId, ids)))
     .groupBy(stockAdjustments.lotId);
-  for (const d of draws) taken.set(d.lotId, Number(d.total));
-  for (const a of adjustments) taken.set(a.lotId, (taken.get(a.lotId) ?? 0) - Number(a.total));
-  return taken;
+  const change = new Map<string, number>();
+  for (const d of draws) change.set(d.lotId, -Number(d.total));
+  for (const a of adjustments) change.set(a.lotId, (change.get(a.lotId) ?? 0) + Number(a.total));
+  return lots.map((l) => ({ ...l, remainingSi: l.initialSi + (change.get(l.id) ?? 0) }));
+}
+
+/** Would adding `changeSi` (negative takes away) leave the lot below zero? */
+function goesBelowZero(lot: LotLeft, changeSi: number): boolean {
+  return lot.remainingSi + changeSi < -EPSILON;
 }
 
 export interface RecordAdjustmentInput {
@@ -167,23 +192,18 @@ export interface RecordAdjustmentInput {
 export async function recordStockAdjustment(input: RecordAdjustmentInput): Promise<{ id: string }> {
   const db = await getDb();
   const result = await db.transaction(async (tx) => {
-    const [lot] = await tx
-      .select({
-        id: stockLots.id,
-        initial: stockLots.initialAmountSi,
-        producedOn: stockLots.producedOn,
-      })
-      .from(stockLots)
-      .where(and(eq(stockLots.gardenId, input.gardenId), eq(stockLots.id, input.lotId)))
-      .for("update");
+    const [lot] = await readLots(tx, {
+      gardenId: input.gardenId,
+      lotIds: [input.lotId],
+      lock: true,
+    });
     if (!lot)
       throw new AppError("validation:lot", undefined, { lotId: "no such lot in this garden" });
     if (lot.producedOn > input.adjustedOn)
       throw new AppError("validation:lot", undefined, { adjustedOn: "is before the lot was made" });
     if (input.amountSi === 0 || !Number.isFinite(input.amountSi))
       throw new AppError("validation:amount", undefined, { amountSi: "must not be zero" });
-    const left = lot.initial - ((await takenSoFar(tx, input.gardenId, [lot.id])).get(lot.id) ?? 0);
-    if (left + input.amountSi < -EPSILON)
+    if (goesBelowZero(lot, input.amountSi))
       throw new AppError("conflict:stock", undefined, {
         amountSi: "is more than the lot has left",
       });
@@ -304,40 +324,14 @@ export async function recordDrain(input: RecordYieldInput & { litres: number }) 
   return result;
 }
 
-export interface LotStock {
-  id: string;
-  binId: string | null;
-  material: "castings" | "leachate";
-  producedOn: string;
-  initialSi: number;
-  /** Initial amount less every draw, plus adjustments (not aged out: that is the engine's to say). */
-  remainingSi: number;
-}
+export type LotStock = LotLeft;
 
 /** Every lot of a garden with what its draws and adjustments have left, oldest first. */
 export async function listLotStock({ gardenId }: { gardenId: string }): Promise<LotStock[]> {
-  const db = await getDb();
-  const lots = await db
-    .select({
-      id: stockLots.id,
-      binId: stockLots.binId,
-      material: stockLots.material,
-      producedOn: stockLots.producedOn,
-      initialSi: stockLots.initialAmountSi,
-    })
-    .from(stockLots)
-    .where(eq(stockLots.gardenId, gardenId))
-    .orderBy(asc(stockLots.producedOn), asc(stockLots.id));
-  const taken = await takenSoFar(
-    db,
-    gardenId,
-    lots.map((l) => l.id),
-  );
-  return lots.map((l) => ({ ...l, remainingSi: l.initialSi - (taken.get(l.id) ?? 0) }));
+  return readLots(await getDb(), { gardenId });
 }
 
-// ── Added by the bins branch (issue 11): stock entered by hand. Data helper: move or
-// reshape freely; POST /api/gardens/[gardenId]/lots calls it.
+// Stock entered by hand (issue 11); POST /api/gardens/[gardenId]/lots calls it.
 
 export interface EnteredLotInput {
   gardenId: string;
@@ -366,5 +360,6 @@ export async function recordEnteredLot(input: EnteredLotInput): Promise<{ lotId:
       note: input.note ?? null,
     })
     .returning({ id: stockLots.id });
+  markGardenInputsChanged(input.gardenId); // the Balance starts from stock: its cached plan is stale
   return { lotId: lot!.id };
 }

@@ -3,6 +3,7 @@ import { and, asc, count, eq } from "drizzle-orm";
 import { getDb, type Db } from "@/db";
 import { gardens, memberships, users } from "@/db/schema";
 import type { Role } from "@/lib/auth/roles";
+import { forgetCheckedSessionsAndRoles } from "@/lib/auth/gate-cache";
 
 export type MembershipDto = { gardenId: string; userId: string; role: Role };
 
@@ -71,7 +72,7 @@ export async function changeMemberRole(input: {
   role: Role;
 }): Promise<MemberChangeOutcome> {
   const db = await getDb();
-  return db.transaction(async (tx) => {
+  const outcome = await db.transaction(async (tx): Promise<MemberChangeOutcome> => {
     const rows = await lockMemberships(tx, input.gardenId);
     const target = rows.find((r) => r.userId === input.userId);
     if (!target) return { ok: false, reason: "not_member" } as const;
@@ -84,6 +85,8 @@ export async function changeMemberRole(input: {
       .where(and(eq(memberships.gardenId, input.gardenId), eq(memberships.userId, input.userId)));
     return { ok: true } as const;
   });
+  forgetCheckedSessionsAndRoles(); // after commit: the next request reads the new role
+  return outcome;
 }
 
 export async function removeMember(input: {
@@ -91,7 +94,7 @@ export async function removeMember(input: {
   userId: string;
 }): Promise<MemberChangeOutcome> {
   const db = await getDb();
-  return db.transaction(async (tx) => {
+  const outcome = await db.transaction(async (tx): Promise<MemberChangeOutcome> => {
     const rows = await lockMemberships(tx, input.gardenId);
     const target = rows.find((r) => r.userId === input.userId);
     if (!target) return { ok: false, reason: "not_member" } as const;
@@ -102,6 +105,8 @@ export async function removeMember(input: {
       .where(and(eq(memberships.gardenId, input.gardenId), eq(memberships.userId, input.userId)));
     return { ok: true } as const;
   });
+  forgetCheckedSessionsAndRoles(); // after commit: the next request reads the new role
+  return outcome;
 }
 
 async function lockMemberships(tx: Tx, gardenId: string) {

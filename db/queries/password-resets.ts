@@ -2,6 +2,7 @@ import "server-only";
 import { and, eq, isNull } from "drizzle-orm";
 import { getDb } from "@/db";
 import { passwordResetTokens, sessions, users } from "@/db/schema";
+import { forgetCheckedSessionsAndRoles } from "@/lib/auth/gate-cache";
 
 export const RESET_TTL_MS = 60 * 60 * 1000;
 
@@ -37,7 +38,7 @@ export async function consumePasswordReset(input: {
 }): Promise<ResetOutcome> {
   const db = await getDb();
   const now = input.now ?? new Date();
-  return db.transaction(async (tx) => {
+  const outcome = await db.transaction(async (tx): Promise<ResetOutcome> => {
     const [row] = await tx
       .select({
         id: passwordResetTokens.id,
@@ -64,6 +65,8 @@ export async function consumePasswordReset(input: {
     await tx.delete(sessions).where(eq(sessions.userId, row.userId));
     return { ok: true, userId: row.userId } as const;
   });
+  forgetCheckedSessionsAndRoles(); // after commit: the ended sessions must not linger in the gate
+  return outcome;
 }
 
 /** Sets a new password and ends every session of the account in the same transaction. */
@@ -76,6 +79,7 @@ export async function setPassword(input: { userId: string; passwordHash: string 
       .where(eq(users.id, input.userId));
     await tx.delete(sessions).where(eq(sessions.userId, input.userId));
   });
+  forgetCheckedSessionsAndRoles();
 }
 
 /** What a reset link's page shows before the form: usable, or why not. */

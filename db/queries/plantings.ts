@@ -2,7 +2,7 @@ import "server-only";
 import { and, asc, count, eq, gte, inArray, isNotNull, isNull, or } from "drizzle-orm";
 import { getDb, type DbOrTx } from "@/db";
 import { applications, beds, crops, gardens, plantings } from "@/db/schema";
-import { addDays, type FeederClass, type FeedingRuleInput } from "@/lib/engine";
+import type { FeederClass, FeedingRuleInput } from "@/lib/engine";
 import { AppError } from "@/lib/errors";
 import {
   CROWDED_REFUSE_RATIO,
@@ -11,6 +11,7 @@ import {
   effectiveRules,
   type RuleSource,
 } from "@/lib/plantings/rules";
+import { expectedEnd } from "@/lib/plantings/expected-end";
 import { ruleInput } from "@/lib/scenario/to-inputs";
 import {
   PRIORITY_RANK,
@@ -175,7 +176,7 @@ const fieldError = (field: string, message: string) =>
 /**
  * Writes new plantings in one transaction (quick entry writes several). Each
  * gets the garden's own copy of its crop and, unless given, an expected
- * harvest from the crop's days to harvest. Plantings far beyond their crops'
+ * harvest from the crop's days to harvest (outdoors: not past the first fall frost). Plantings far beyond their crops'
  * spacing are refused unless confirmed; merely full beds come back as warnings.
  */
 export async function createPlantings({
@@ -195,9 +196,19 @@ export async function createPlantings({
       const warnings: PlantingWarning[] = [];
       const rows: (typeof plantings.$inferSelect)[] = [];
       const byBed = new Map<string, { count: number; spacingM: number | null }[]>();
+      const [garden] = await tx
+        .select({ firstFallFrost: gardens.firstFallFrost })
+        .from(gardens)
+        .where(eq(gardens.id, gardenId));
       for (const input of inputs) {
         const [bed] = await tx
-          .select({ id: beds.id, kind: beds.kind, lengthM: beds.lengthM, widthM: beds.widthM })
+          .select({
+            id: beds.id,
+            kind: beds.kind,
+            indoors: beds.indoors,
+            lengthM: beds.lengthM,
+            widthM: beds.widthM,
+          })
           .from(beds)
           .where(and(eq(beds.gardenId, gardenId), eq(beds.id, input.bedId)));
         if (!bed) throw fieldError("bedId", "No such bed or container in this garden.");
@@ -231,7 +242,12 @@ export async function createPlantings({
             plantedOn: input.plantedOn,
             expectedHarvestOn:
               input.expectedHarvestOn ??
-              (facts.daysToHarvest ? addDays(input.plantedOn, facts.daysToHarvest) : null),
+              expectedEnd({
+                plantedOn: input.plantedOn,
+                daysToHarvest: facts.daysToHarvest,
+                indoors: bed.indoors,
+                firstFallFrost: garden!.firstFallFrost,
+              }),
             endedOn: input.endedOn ?? null,
             priority: PRIORITY_RANK[input.priority],
             notes: input.notes ?? null,

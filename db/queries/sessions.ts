@@ -2,6 +2,7 @@ import "server-only";
 import { and, eq, gt, lt } from "drizzle-orm";
 import { getDb } from "@/db";
 import { sessions, users } from "@/db/schema";
+import { forgetCheckedSessionsAndRoles } from "@/lib/auth/gate-cache";
 import type { UserDto } from "./users";
 
 // The session allow-list: a session exists exactly as long as its row does.
@@ -21,14 +22,17 @@ export async function createSession(input: {
   });
 }
 
-/** The user of a live session, or null when the row is gone, expired or names someone else. */
-export async function getSessionUser(input: {
+/** A live session's user and expiry, or null when the row is gone, expired or names someone else. */
+export async function getLiveSession(input: {
   sessionId: string;
   userId: string;
-}): Promise<UserDto | null> {
+}): Promise<{ user: UserDto; expiresAt: Date } | null> {
   const db = await getDb();
   const [row] = await db
-    .select({ id: users.id, email: users.email, name: users.name })
+    .select({
+      user: { id: users.id, email: users.email, name: users.name },
+      expiresAt: sessions.expiresAt,
+    })
     .from(sessions)
     .innerJoin(users, eq(users.id, sessions.userId))
     .where(
@@ -45,10 +49,12 @@ export async function getSessionUser(input: {
 export async function deleteSession({ sessionId }: { sessionId: string }): Promise<void> {
   const db = await getDb();
   await db.delete(sessions).where(eq(sessions.id, sessionId));
+  forgetCheckedSessionsAndRoles(); // the gate's memory of this cookie goes too
 }
 
 /** "Sign out everywhere": every session of this user ends. */
 export async function deleteUserSessions({ userId }: { userId: string }): Promise<void> {
   const db = await getDb();
   await db.delete(sessions).where(eq(sessions.userId, userId));
+  forgetCheckedSessionsAndRoles();
 }

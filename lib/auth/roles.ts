@@ -17,5 +17,5 @@ export const roleDescriptions: Record<Role, string> = {
   owner: "Everything, including members, roles and deleting the garden",
   grower: "Plans beds, plantings, bins and feeding rules; logs anything",
   helper: "Logs feedings and bin work on the day; sees the plan",
-  viewer: "Reads the plan, calendar and logs; can subscribe to the calendar",
+  viewer: "Reads the plan and the logs; changes nothing",
 };

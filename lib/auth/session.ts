@@ -5,11 +5,12 @@ import {
   createSession,
   deleteSession,
   deleteUserSessions,
-  getSessionUser,
+  getLiveSession,
 } from "@/db/queries/sessions";
 import type { UserDto } from "@/db/queries/users";
 import { AppError } from "@/lib/errors";
 import { readCookie, SESSION_COOKIE, SESSION_MAX_AGE_SECONDS, serializeCookie } from "./cookies";
+import { gateGeneration, recallSessionUser, rememberSessionUser } from "./gate-cache";
 import { getAuthSecret } from "./secret";
 
 // Sessions are an allow-list on the server. The cookie is an Auth.js JWT (encrypted,
@@ -21,6 +22,8 @@ import { getAuthSecret } from "./secret";
 interface SessionClaims {
   sub: string;
   sid: string;
+  /** The cookie's own expiry (JWT `exp`), in ms since the epoch. */
+  expiresAt: number;
 }
 
 export async function issueSessionCookie(user: UserDto): Promise<string> {
@@ -48,7 +51,8 @@ async function claimsFrom(token: string | undefined): Promise<SessionClaims | nu
   try {
     const payload = await decode({ token, secret: getAuthSecret(), salt: SESSION_COOKIE });
     if (!payload || typeof payload.sub !== "string" || typeof payload.sid !== "string") return null;
-    return { sub: payload.sub, sid: payload.sid };
+    const expiresAt = typeof payload.exp === "number" ? payload.exp * 1000 : Infinity;
+    return { sub: payload.sub, sid: payload.sid, expiresAt };
   } catch {
     return null;
   }
@@ -56,9 +60,18 @@ async function claimsFrom(token: string | undefined): Promise<SessionClaims | nu
 
 /** The signed-in user for a cookie value, or null if signed out, expired or ended. */
 export async function userFromSessionToken(token: string | undefined): Promise<UserDto | null> {
+  if (!token) return null;
+  // A cookie checked moments ago, whose session nothing has ended since (lib/auth/gate-cache.ts).
+  const recalled = recallSessionUser(token);
+  if (recalled) return recalled;
+  const generation = gateGeneration();
   const claims = await claimsFrom(token);
   if (!claims) return null;
-  return getSessionUser({ sessionId: claims.sid, userId: claims.sub });
+  const live = await getLiveSession({ sessionId: claims.sid, userId: claims.sub });
+  if (!live) return null;
+  const expiresAt = Math.min(claims.expiresAt, live.expiresAt.getTime());
+  await rememberSessionUser(token, live.user, { generation, expiresAt });
+  return live.user;
 }
 
 export function sessionTokenFromRequest(request: Request): string | undefined {

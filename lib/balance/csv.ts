@@ -1,12 +1,12 @@
-import { unparse } from "papaparse";
 import type { BalanceBody } from "@/lib/balance/types";
+import { spreadsheetCsv } from "@/lib/csv";
 import type { MonthRow, PoolName } from "@/lib/engine";
 import { columnHeader, toColumnValue, type AmountKind } from "@/lib/format-quantity";
 
 // The Balance month table as CSV: one line per month, each material's columns
 // with the unit in the header, numbers in the garden's units rounded as on screen
 // (lib/format-quantity.ts). Cells that a spreadsheet would run as a formula
-// (= + - @ tab CR at the start of a text cell) are prefixed by papaparse.
+// are neutralised by lib/csv.ts.
 
 const POOLS: { pool: PoolName; title: string; kind: AmountKind; supplied: string }[] = [
   { pool: "castings", title: "Castings", kind: "castings-mass", supplied: "harvested" },
@@ -51,5 +51,5 @@ export function balanceCsv(body: BalanceBody): string {
     }
     return line;
   });
-  return unparse([header, ...lines], { escapeFormulae: true });
+  return spreadsheetCsv([header, ...lines]);
 }

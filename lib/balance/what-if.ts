@@ -1,35 +1,11 @@
 import type { WhatIfChange, WhatIfMonthDiff } from "@/lib/balance/types";
 import type { FeedingRuleInput, GardenInputs, GardenPlan, PlantingInput } from "@/lib/engine";
 import { defaultRuleFor } from "@/lib/engine";
+import { amountLimit } from "@/lib/balance/rule-amount-units";
 import { AppError, type FieldErrors } from "@/lib/errors";
 
 // Applies what-if changes to a COPY of a garden's inputs (the caller's object is
 // never touched, so a cached plan's inputs stay as they were) and diffs two plans.
-
-/**
- * Largest amount a planting's rule may be set to, by basis and measure (SI). Sanity
- * bounds, not advice: each is several times the largest common-practice dose —
- * heavy feeders get ¾–1 cup of castings per plant monthly (PRODUCT.md), 1 cup =
- * 0.2366 L ≈ 0.17 kg at 0.7 kg/L; top-dressing ¼–½ in (Cumberland County SWCD),
- * ½ in = 12.7 mm = 12.7 L/m² ≈ 8.9 kg/m²; potting mix above 20 % castings is
- * warned about (Atiyeh et al. 2000).
- */
-const MAX_AMOUNT: Record<string, { max: number; unit: string }> = {
-  "per-plant:mass": { max: 2, unit: "kg per plant" },
-  "per-plant:volume:castings": { max: 3, unit: "L per plant" },
-  "per-plant:volume": { max: 20, unit: "L per plant" },
-  "per-area:mass": { max: 20, unit: "kg per m²" },
-  "per-area:volume": { max: 30, unit: "L per m²" },
-  "per-container-volume:volume": { max: 0.5, unit: "L per L of container" },
-  "percent-of-mix:percent-of-mix": { max: 50, unit: "% of the mix" },
-};
-
-function amountLimit(rule: FeedingRuleInput) {
-  const key = `${rule.basis}:${rule.measure}`;
-  return (
-    (rule.material === "castings" ? MAX_AMOUNT[`${key}:castings`] : undefined) ?? MAX_AMOUNT[key]
-  );
-}
 
 /**
  * The rules a planting is fed by, its feeder-class default when it has none.

@@ -30,4 +30,4 @@ export {
 } from "@/lib/engine/supply/liquid";
 export { expandRecurrence, isBoundedRule, parseRecurrence } from "@/lib/engine/demand/recurrence";
 export { defaultRuleFor } from "@/lib/engine/demand/feeding-rules";
-export { runLedger } from "@/lib/engine/balance/ledger";
+export { runLedger, type LedgerClaim, type LedgerLot } from "@/lib/engine/balance/ledger";

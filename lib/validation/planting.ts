@@ -1,5 +1,9 @@
 import { z } from "zod";
-import { checkOwnRules, ownRulesFields } from "@/lib/validation/feeding-rule";
+import {
+  checkOwnRules,
+  ownRulesFields,
+  recurrenceWithoutDates,
+} from "@/lib/validation/feeding-rule";
 import { quantitySchema } from "@/lib/validation/scenario-quantity";
 
 // A planting: crop × count in a bed or container, its dates and priority, and
@@ -60,6 +64,15 @@ function checkDates(p: PlantingFields, ctx: z.RefinementCtx): void {
       path: ["expectedHarvestOn"],
       message: "The harvest date must not be before the planting date.",
     });
+  // Each own rule must give dates from the planting day (an UNTIL before it gives none).
+  const own: { rule: { recurrence: string }; path: (string | number)[] }[] = [
+    ...(p.rules ?? []).map((rule, i) => ({ rule, path: ["rules", i] })),
+    ...(p.rule ? [{ rule: p.rule, path: ["rule"] }] : []),
+  ];
+  for (const { rule, path } of own) {
+    const why = recurrenceWithoutDates(rule.recurrence, p.plantedOn);
+    if (why) ctx.addIssue({ code: "custom", path: [...path, "recurrence"], message: why });
+  }
 }
 
 export const createPlantingSchema = plantingFields.superRefine((p, ctx) => {

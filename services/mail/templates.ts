@@ -107,7 +107,7 @@ const ROLE_DUTIES: Record<InvitedRole, string> = {
   owner: "run the garden, including its members and roles",
   grower: "plan beds, plantings and bins and log any work",
   helper: "log feedings and bin work and see the plan",
-  viewer: "read the plan, the calendar and the logs",
+  viewer: "read the plan and the logs",
 };
 
 function requireDate(value: Date, field: string): Date {

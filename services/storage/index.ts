@@ -1,6 +1,7 @@
 import "server-only";
 import { z } from "zod";
-import { LOCAL_BUCKET, startLocalS3 } from "./local-s3";
+import { getEnv } from "@/lib/env";
+import { LOCAL_BUCKET, localS3Directory, startLocalS3 } from "./local-s3";
 import { createS3Storage } from "./s3-storage";
 import type { ObjectStorage } from "./types";
 
@@ -8,7 +9,8 @@ export { StorageUnavailableError, type ObjectStorage } from "./types";
 export { stopLocalS3 } from "./local-s3";
 
 // S3_ENDPOINT set → that service (AWS or any S3-compatible one). Unset → a
-// local fake S3 server in this process, files under S3_LOCAL_DIR (or a temp dir).
+// local fake S3 server in this process, files under S3_LOCAL_DIR (default: beside
+// the database directory, see localS3Directory).
 const storageEnv = z.object({
   S3_ENDPOINT: z.url().optional(),
   S3_REGION: z.string().min(1).default("us-east-1"),
@@ -45,7 +47,9 @@ async function openStorage(): Promise<ObjectStorage> {
       forcePathStyle: env.S3_FORCE_PATH_STYLE !== "false",
     });
   }
-  const endpoint = await startLocalS3(env.S3_LOCAL_DIR);
+  const endpoint = await startLocalS3(
+    localS3Directory({ s3LocalDir: env.S3_LOCAL_DIR, pgliteDir: getEnv().PGLITE_DIR }),
+  );
   // s3rver accepts any key pair; these name the fake, they are not secrets.
   return createS3Storage({
     endpoint,

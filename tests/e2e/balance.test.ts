@@ -122,7 +122,11 @@ describe("the Balance as the demo viewer", () => {
     );
     expect(changing).toEqual([]);
     expect(
-      await new GardenPage(session.page).nav().getByRole("link", { name: "Settings" }).count(),
+      await (
+        await new GardenPage(session.page).nav()
+      )
+        .getByRole("link", { name: "Settings" })
+        .count(),
     ).toBe(0);
     expect(await balance.horizontalOverflow()).toBeLessThanOrEqual(0);
     expect(session.problems).toEqual([]);

@@ -40,7 +40,7 @@ describe("demo garden in a real browser (phone-sized viewport)", () => {
       await switcher.evaluate((el: HTMLSelectElement) => el.selectedOptions[0]?.textContent),
     ).toBe(demoGarden.name);
     // The owner sees Settings; the page passed our CSP without console errors.
-    expect(await garden.nav().getByRole("link", { name: "Settings" }).count()).toBe(1);
+    expect(await (await garden.nav()).getByRole("link", { name: "Settings" }).count()).toBe(1);
     expect(session.problems).toEqual([]);
   });
 

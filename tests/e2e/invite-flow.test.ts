@@ -126,8 +126,8 @@ describe("an owner invites a helper, who joins from the e-mailed link (phone-siz
     expect(await overview.gardenName().textContent()).toBe(garden.name);
     await overview.roleBadge("Helper").waitFor();
     // Settings is for owners only (PRODUCT.md: only the owner manages members, roles, deletion).
-    await overview.nav().getByRole("link", { name: "Members" }).waitFor();
-    expect(await overview.nav().getByRole("link", { name: "Settings" }).count()).toBe(0);
+    await (await overview.nav()).getByRole("link", { name: "Members" }).waitFor();
+    expect(await (await overview.nav()).getByRole("link", { name: "Settings" }).count()).toBe(0);
   });
 
   it("the same link cannot be used twice", async () => {

@@ -4,6 +4,7 @@ import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import * as balanceRoute from "@/app/api/gardens/[gardenId]/balance/route";
 import * as exportRoute from "@/app/api/gardens/[gardenId]/export/route";
 import * as whatIfRoute from "@/app/api/gardens/[gardenId]/what-if/route";
+import * as lotsRoute from "@/app/api/gardens/[gardenId]/lots/route";
 import * as gardenRoute from "@/app/api/gardens/[gardenId]/route";
 import * as importRoute from "@/app/api/gardens/import/route";
 import { recordHarvest } from "@/db/queries/lots";
@@ -343,6 +344,26 @@ describe("plan cache", () => {
     const third = (await getBalance(gardenId, "?from=2027-03&months=3")).json as BalanceBody;
     expect(third.settings.unitSystem).toBe("metric");
     expect(third.settings.units.castingsMass).toBe("kg");
+  });
+
+  it("a bag of castings entered on the stock page reaches the next Balance", async () => {
+    // Regression: POST /lots did not bump the inputs version, so the cached plan
+    // kept the old stock. A bought bag is a lot like any other (issue 11, "Stock").
+    const before = (await getBalance(gardenId, "?from=2027-03&months=3")).json as BalanceBody;
+    const added = await call(lotsRoute.POST, {
+      url: url(gardenId, "/lots"),
+      params: { gardenId },
+      cookie: owner.cookie,
+      body: { reason: "bought", material: "castings", producedOn: "2027-02-12", amountSi: 9 },
+    });
+    expect(added.status, added.text).toBe(201);
+    const after = (await getBalance(gardenId, "?from=2027-03&months=3")).json as BalanceBody;
+    // Nothing is drawn before March (the first feeding is 03-05): March opens 9 kg higher.
+    expect(castings(after, "2027-03").opening - castings(before, "2027-03").opening).toBeCloseTo(
+      9,
+      6,
+    );
+    expect(after.inputsVersion).toBeGreaterThan(before.inputsVersion);
   });
 });
 

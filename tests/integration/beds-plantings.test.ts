@@ -334,6 +334,145 @@ describe("plantings", () => {
   });
 });
 
+describe("expected end from the season", () => {
+  // Tomato: 75 days to harvest on the crop list (common practice, from memory). The test
+  // garden's first fall frost is 20 October (tests/support/integration/harness.ts).
+  async function plantTomato(bedId: string, plantedOn: string) {
+    const res = await call(plantings.POST, {
+      url: url("plantings"),
+      params: params(),
+      cookie: grower,
+      body: { bedId, cropId: await starterCropId("Tomato"), plantCount: 1, plantedOn },
+    });
+    expect(res.status, res.text).toBe(201);
+    return res.json.plantings[0];
+  }
+
+  it("is planted day + days to harvest when that comes before the frost", async () => {
+    const b = await makeBed(world.gardenId);
+    // 1 May + 75 days = 15 July (31 + 30 + 14 days to 15 July).
+    expect((await plantTomato(b.id, "2026-05-01")).expectedHarvestOn).toBe("2026-07-15");
+  });
+
+  it("stops at the first fall frost outdoors, not after it", async () => {
+    const b = await makeBed(world.gardenId);
+    // 15 Aug + 75 days = 29 Oct, past the 20 Oct frost.
+    expect((await plantTomato(b.id, "2026-08-15")).expectedHarvestOn).toBe("2026-10-20");
+  });
+
+  it("runs the full days to harvest indoors (no frost there)", async () => {
+    const created = await call(beds.POST, {
+      url: url("beds"),
+      params: params(),
+      cookie: grower,
+      body: {
+        name: "Sunroom pot",
+        kind: "container",
+        indoors: true,
+        volume: { value: 5, unit: "gal" },
+      },
+    });
+    expect((await plantTomato(created.json.bed.id, "2026-08-15")).expectedHarvestOn).toBe(
+      "2026-10-29",
+    );
+  });
+
+  it("stays editable: a given expected end is kept", async () => {
+    const b = await makeBed(world.gardenId);
+    const res = await call(plantings.POST, {
+      url: url("plantings"),
+      params: params(),
+      cookie: grower,
+      body: {
+        bedId: b.id,
+        cropId: await starterCropId("Tomato"),
+        plantCount: 1,
+        plantedOn: "2026-08-15",
+        expectedHarvestOn: "2026-11-05",
+      },
+    });
+    expect(res.json.plantings[0].expectedHarvestOn).toBe("2026-11-05");
+  });
+});
+
+describe("rules that give no dates", () => {
+  const rule = (recurrence: string) => ({
+    material: "castings",
+    method: "top-dress",
+    basis: "per-plant",
+    amount: { value: 1, unit: "cup" },
+    recurrence,
+  });
+
+  // RFC 5545 §3.3.10: BYMONTHDAY days a month does not have are ignored, so June (30 days) and the 31st give no dates.
+  it("refuses BYMONTHDAY=31 with BYMONTH=6 on a new planting, naming the field and saying why", async () => {
+    const b = await makeBed(world.gardenId);
+    const res = await call(plantings.POST, {
+      url: url("plantings"),
+      params: params(),
+      cookie: grower,
+      body: {
+        bedId: b.id,
+        cropId: await starterCropId("Tomato"),
+        plantCount: 1,
+        plantedOn: "2026-05-01",
+        rule: rule("FREQ=MONTHLY;BYMONTHDAY=31;BYMONTH=6"),
+      },
+    });
+    expect(res.status).toBe(400);
+    expect(res.json.error.fields["rule.recurrence"]).toMatch(/June never has a 31st day/);
+  });
+
+  it("names which of several rules gives no dates (rules[1]: an UNTIL before the planting day)", async () => {
+    const b = await makeBed(world.gardenId);
+    const res = await call(plantings.POST, {
+      url: url("plantings"),
+      params: params(),
+      cookie: grower,
+      body: {
+        bedId: b.id,
+        cropId: await starterCropId("Tomato"),
+        plantCount: 1,
+        plantedOn: "2026-05-01",
+        rules: [rule("FREQ=MONTHLY"), rule("FREQ=WEEKLY;INTERVAL=2;UNTIL=20260401")],
+      },
+    });
+    expect(res.status).toBe(400);
+    expect(res.json.error.fields["rules.1.recurrence"]).toMatch(
+      /UNTIL 1 Apr 2026 is before the first day/,
+    );
+  });
+
+  it("refuses it on a crop's default rule too", async () => {
+    const res = await call(crops.POST, {
+      url: url("crops"),
+      params: params(),
+      cookie: grower,
+      body: {
+        name: "June-31 squash",
+        feederClass: "heavy",
+        rule: rule("freq=monthly;bymonthday=31;bymonth=6"),
+      },
+    });
+    expect(res.status).toBe(400);
+    expect(res.json.error.fields["rule.recurrence"]).toMatch(/June never has a 31st day/);
+  });
+
+  it("refuses, on a planting's PATCH, a rule whose UNTIL is before the planting day", async () => {
+    const p = await makePlanting(world.gardenId);
+    const res = await call(planting.PATCH, {
+      url: url(`plantings/${p.id}`),
+      params: params({ plantingId: p.id }),
+      cookie: grower,
+      body: { rule: rule("FREQ=MONTHLY;UNTIL=20260101") },
+    });
+    expect(res.status).toBe(400);
+    expect(res.json.error.fields["rule.recurrence"]).toMatch(
+      /UNTIL 1 Jan 2026 is before the first day 1 May 2026/,
+    );
+  });
+});
+
 describe("crops", () => {
   it("lists at least 40 crops, and a garden's change to a starter crop becomes its own copy", async () => {
     const list = await call(crops.GET, { url: url("crops"), params: params(), cookie: grower });

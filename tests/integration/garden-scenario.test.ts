@@ -1,12 +1,12 @@
 import "@/tests/support/integration/env";
 import fs from "node:fs";
 import path from "node:path";
-import { eq } from "drizzle-orm";
+import { and, asc, eq, isNull } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { getDb } from "@/db";
 import { loadGardenInputs } from "@/db/queries/garden-inputs";
 import { exportGardenScenario, importGardenScenario } from "@/db/queries/garden-scenario";
-import { bins, feedingRules, gardens, users } from "@/db/schema";
+import { beds, bins, crops, feedingRules, gardens, stockLots, users } from "@/db/schema";
 import { computePlan, type GardenInputs } from "@/lib/engine";
 import { scenarioToInputs } from "@/lib/scenario/to-inputs";
 import { parseScenario } from "@/lib/validation/scenario";
@@ -193,6 +193,75 @@ describe("database → export → import", () => {
 // retired day; a rule's own tea recipe; castings rules by mass per m² or per L
 // of container) are written straight into the rows after the import, so this
 // test builds the same garden whatever the format carries.
+/** Rows of a garden beyond GardenInputs, keyed by the ids an import maps (crops by name). */
+async function gardenFacts(gardenId: string) {
+  const db = await getDb();
+  const [garden] = await db
+    .select({ location: gardens.location })
+    .from(gardens)
+    .where(eq(gardens.id, gardenId));
+  const byId = <T extends { id: string }>(rows: T[]) =>
+    Object.fromEntries(rows.map(({ id, ...rest }) => [id, rest]));
+  const rules = await db
+    .select()
+    .from(feedingRules)
+    .where(eq(feedingRules.gardenId, gardenId))
+    .orderBy(asc(feedingRules.position));
+  const rulesOf = (owner: { plantingId?: string; cropId?: string }) =>
+    rules
+      .filter((r) =>
+        owner.plantingId ? r.plantingId === owner.plantingId : r.cropId === owner.cropId,
+      )
+      .map((r) => ({
+        position: r.position,
+        material: r.material,
+        method: r.method,
+        basis: r.basis,
+        amountMeasure: r.amountMeasure,
+        amountSi: r.amountSi,
+        rrule: r.rrule,
+        dilutionWaterParts: r.dilutionWaterParts,
+        teaCastingsPerWater: r.teaCastingsPerWater,
+      }));
+  const cropRows = await db.select().from(crops).where(eq(crops.gardenId, gardenId));
+  const plantingIds = [...new Set(rules.flatMap((r) => (r.plantingId ? [r.plantingId] : [])))];
+  return {
+    garden,
+    beds: byId(
+      await db
+        .select({ id: beds.id, notes: beds.notes, lengthM: beds.lengthM, widthM: beds.widthM })
+        .from(beds)
+        .where(eq(beds.gardenId, gardenId)),
+    ),
+    bins: byId(
+      await db
+        .select({ id: bins.id, drainIntervalDays: bins.drainIntervalDays })
+        .from(bins)
+        .where(eq(bins.gardenId, gardenId)),
+    ),
+    lots: byId(
+      await db
+        .select({ id: stockLots.id, pricePerKg: stockLots.pricePerKg, note: stockLots.note })
+        .from(stockLots)
+        .where(and(eq(stockLots.gardenId, gardenId), isNull(stockLots.sourceEventId))),
+    ),
+    crops: cropRows
+      .map((c) => ({
+        name: c.name,
+        feederClass: c.feederClass,
+        edible: c.edible,
+        edibleTouchesSoil: c.edibleTouchesSoil,
+        daysToHarvest: c.daysToHarvest,
+        spacingM: c.spacingM,
+        rules: rulesOf({ cropId: c.id }),
+      }))
+      .sort((x, y) => (x.name ?? "").localeCompare(y.name ?? "")),
+    plantingRules: Object.fromEntries(
+      plantingIds.map((plantingId) => [plantingId, rulesOf({ plantingId })]),
+    ),
+  };
+}
+
 const everyField = {
   format: "castline-scenario",
   version: 1,
@@ -304,13 +373,34 @@ const everyField = {
       plantCount: 6,
       startDate: "2026-04-20",
       endDate: "2026-10-01",
-      rule: {
-        material: "tea",
-        method: "drench",
-        basis: "per-plant",
-        amount: { value: 0.3, unit: "L" },
-        recurrence: "FREQ=WEEKLY;INTERVAL=2",
-      },
+      // Two rules: tea every two weeks and castings monthly (issue 10, item 3).
+      rules: [
+        {
+          material: "tea",
+          method: "drench",
+          basis: "per-plant",
+          amount: { value: 0.3, unit: "L" },
+          recurrence: "FREQ=WEEKLY;INTERVAL=2",
+        },
+        {
+          material: "castings",
+          method: "side-dress",
+          basis: "per-plant",
+          amount: { value: 0.08, unit: "kg" },
+          recurrence: "FREQ=MONTHLY;BYMONTHDAY=1",
+        },
+      ],
+    },
+    // No rules of its own: it is fed by its crop's two rules (crops below).
+    {
+      id: "beet",
+      bedId: "plot",
+      crop: "beet",
+      feederClass: "light",
+      plantCount: 12,
+      startDate: "2026-05-05",
+      endDate: "2026-08-20",
+      edibleTouchesSoil: true,
     },
     {
       id: "chard",
@@ -329,6 +419,29 @@ const everyField = {
         recurrence: "FREQ=WEEKLY",
         dilutionWaterParts: 4,
       },
+    },
+  ],
+  crops: [
+    {
+      name: "beet",
+      feederClass: "light",
+      edibleTouchesSoil: true,
+      rules: [
+        {
+          material: "castings",
+          method: "top-dress",
+          basis: "per-plant",
+          amount: { value: 0.05, unit: "kg" },
+          recurrence: "FREQ=MONTHLY",
+        },
+        {
+          material: "leachate",
+          method: "drench",
+          basis: "per-plant",
+          amount: { value: 0.1, unit: "L" },
+          recurrence: "FREQ=WEEKLY;INTERVAL=2",
+        },
+      ],
     },
   ],
   stock: {
@@ -399,9 +512,30 @@ describe("database → export → import, with every field set", () => {
       const [row] = await db
         .select({ ruleId: feedingRules.id })
         .from(feedingRules)
-        .where(eq(feedingRules.plantingId, id(planting)));
+        .where(and(eq(feedingRules.plantingId, id(planting)), eq(feedingRules.position, 0)));
       return row!.ruleId;
     };
+    // Facts the engine does not plan from, which a round trip once dropped (issue 8, item 1).
+    await db
+      .update(gardens)
+      .set({ location: "Hollis Street, plot 7" })
+      .where(eq(gardens.id, first.gardenId));
+    await db
+      .update(beds)
+      .set({ notes: "Morning sun only" })
+      .where(eq(beds.id, id("plot")));
+    await db
+      .update(bins)
+      .set({ drainIntervalDays: 10 })
+      .where(eq(bins.id, id("north")));
+    await db
+      .update(stockLots)
+      .set({ pricePerKg: 3.3, note: "Two bags from the co-op" })
+      .where(eq(stockLots.id, id("bought")));
+    await db
+      .update(crops)
+      .set({ daysToHarvest: 60, spacingM: 0.1 })
+      .where(and(eq(crops.gardenId, first.gardenId), eq(crops.name, "beet")));
     await db
       .update(feedingRules)
       .set({ amountMeasure: "mass", amountSi: 0.4 })
@@ -431,6 +565,16 @@ describe("database → export → import, with every field set", () => {
     expect(ruleFor(inputsA, id("herbs"))).toMatchObject({ measure: "mass", amount: 0.05 });
     expect(ruleFor(inputsA, id("kale"))).toMatchObject({ teaCastingsPerWater: 0.2 });
     expect(ruleFor(inputsA, id("chard"))).toMatchObject({ dilutionWaterParts: 4 });
+    const rulesFor = (g: GardenInputs, planting: string) =>
+      g.plantings.find((p) => p.id === planting)!.rules.map((r) => [r.material, r.recurrence]);
+    expect(rulesFor(inputsA, id("kale"))).toEqual([
+      ["tea", "FREQ=WEEKLY;INTERVAL=2"],
+      ["castings", "FREQ=MONTHLY;BYMONTHDAY=1"],
+    ]);
+    expect(rulesFor(inputsA, id("beet"))).toEqual([
+      ["castings", "FREQ=MONTHLY"],
+      ["leachate", "FREQ=WEEKLY;INTERVAL=2"],
+    ]);
     expect(inputsA.beds.find((b) => b.id === id("pot"))).toMatchObject({ indoor: true });
 
     const exported = await exportGardenScenario({ gardenId: first.gardenId, asOf });
@@ -451,6 +595,23 @@ describe("database → export → import, with every field set", () => {
     expect(canonical({ ...b, garden: { ...b.garden, name: "" } })).toEqual(
       canonical({ ...a, garden: { ...a.garden, name: "" } }),
     );
+    // And the rows beyond GardenInputs: which rules are a planting's own and which its
+    // crop's, the crop list's facts, notes, prices, drain interval and location.
+    const factsA = await gardenFacts(first.gardenId);
+    const factsB = withIds(await gardenFacts(second.gardenId), invert(second.ids));
+    expect(factsA.garden).toEqual({ location: "Hollis Street, plot 7" });
+    expect(factsB.garden).toEqual(factsA.garden);
+    expect(factsB.beds).toEqual(factsA.beds);
+    expect(factsB.bins).toEqual(factsA.bins);
+    expect(factsB.lots).toEqual(factsA.lots);
+    expect(factsB.crops).toEqual(factsA.crops);
+    expect(factsB.plantingRules).toEqual(factsA.plantingRules);
+    expect(factsA.crops.find((c) => c.name === "beet")).toMatchObject({
+      daysToHarvest: 60,
+      spacingM: 0.1,
+    });
+    expect(factsA.plantingRules[id("kale")]).toHaveLength(2);
+    expect(factsA.plantingRules[id("beet")]).toBeUndefined();
 
     const planA = computePlan(inputsA, plan);
     const planB = withIds(computePlan(inputsB, plan), invert(second.ids));

@@ -143,6 +143,19 @@ describe("gardens", () => {
     expect((await call(garden.GET, { ...at(g.gardenId), cookie })).status).toBe(404);
   });
 
+  it("deletes when a phone typed the name with a curly apostrophe (issue 12 item 7)", async () => {
+    const g = await makeGardenWithRoles(world, "Bo's Plot");
+    const res = await call(garden.DELETE, {
+      ...at(g.gardenId),
+      method: "DELETE",
+      cookie: await cookieFor(world.owner),
+      // U+2019 RIGHT SINGLE QUOTATION MARK, what iOS types for an apostrophe.
+      body: { confirmName: "Bo\u2019s Plot" },
+    });
+    expect(res.status).toBe(200);
+    expect(await membershipRole(g.gardenId, world.owner.id)).toBeUndefined();
+  });
+
   it("answers 404 to a non-member asking for another garden's data, as for a garden that does not exist", async () => {
     const cookie = await cookieFor(world.outsider);
     for (const handler of [garden.GET, members.GET]) {

@@ -2,82 +2,37 @@ import { describe, expect, it } from "vitest";
 import { applyWhatIf } from "@/lib/balance/what-if";
 import type { GardenInputs } from "@/lib/engine";
 import { AppError } from "@/lib/errors";
+import { bin, garden, planting } from "./engine/garden-fixtures";
 
 // What-if changes go on a copy; amounts beyond reason are refused by field.
 // Bounds (lib/balance/what-if.ts) are several times common practice: heavy feeders
 // get ¾–1 cup of castings per plant monthly (PRODUCT.md), 1 cup = 0.2365882365 L
 // (NIST HB 44 App. C) ≈ 0.17 kg at 0.7 kg/L, so 10 kg per plant is ~60 cups.
-const inputs: GardenInputs = {
+// Built from the engine tests' fixtures (tests/unit/engine/garden-fixtures.ts): one 21 × 17 × 5½ in
+// stack and one indoor bed of squash, a heavy feeder at 0.17 kg per plant monthly.
+const inputs: GardenInputs = garden({
   garden: { id: "g", name: "Quince Court Porch" },
   settings: {
+    ...garden().settings,
     unitSystem: "us",
     timeZone: "America/Chicago",
     lastSpringFrost: { month: 4, day: 15 },
     firstFallFrost: { month: 10, day: 20 },
-    shelfLifeDays: null,
-    liquidMaxAgeDays: null,
-    castingsPricePerKg: null,
-    teaCastingsPerWater: null,
   },
-  bins: [
-    {
-      id: "stack",
-      name: "Porch stack",
-      startDate: "2027-01-01",
-      trays: 4,
-      tray: { insideLengthM: 0.5334, insideWidthM: 0.4318, insideDepthM: 0.1397 },
-      rotationIntervalDays: null,
-      processingDays: null,
-      fillFraction: null,
-      bulkDensityKgPerL: null,
-      dormantMonths: [],
-      manureFeedstock: false,
-      startingWorms: 2000,
-      leachateEstimateLPerWeek: null,
-      intakeFractionPerDay: null,
-      densityCeilingKgPerM2: null,
-      retiredOn: null,
-    },
-  ],
+  bins: [bin({ id: "stack", name: "Porch stack", startDate: "2027-01-01" })],
   beds: [{ id: "bed", name: "Bed", kind: "bed", indoor: true, areaM2: 3, containerVolumeL: null }],
   plantings: [
-    {
+    planting({
       id: "squash",
-      bedId: "bed",
       crop: "squash",
-      feederClass: "heavy",
       plantCount: 4,
       startDate: "2027-03-01",
       endDate: "2027-09-30",
-      harvestDate: null,
-      priority: null,
-      edible: true,
-      edibleTouchesSoil: false,
-      rules: [
-        {
-          material: "castings",
-          method: "top-dress",
-          basis: "per-plant",
-          measure: "mass",
-          amount: 0.17,
-          recurrence: "FREQ=MONTHLY",
-          dilutionWaterParts: null,
-          teaCastingsPerWater: null,
-        },
-      ],
-    },
+      rules: [{ ...planting({ id: "x" }).rules[0]!, amount: 0.17 }],
+    }),
   ],
-  stockLots: [],
-  logs: {
-    harvests: [],
-    drains: [],
-    applications: [],
-    wormMoves: [],
-    observations: [],
-    adjustments: [],
-  },
   asOf: "2027-02-15",
-};
+});
 
 function fieldsOf(fn: () => unknown): Record<string, string> {
   try {

@@ -13,7 +13,7 @@ export default async function GardensPage() {
   const user = await requirePageUser("/gardens");
   const gardens = await listGardensForUser({ userId: user.id });
   return (
-    <SignedInFrame user={user}>
+    <SignedInFrame userName={user.name} gardens={gardens}>
       <main className="mx-auto flex max-w-3xl flex-col gap-6 px-4 py-6">
         <h1 className="text-3xl">Your gardens</h1>
         {gardens.length === 0 ? (

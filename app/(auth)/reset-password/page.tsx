@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { ResetPasswordForm } from "@/components/auth/reset-password-form";
-import { Alert, Card, CardBody } from "@/components/ui";
+import { Alert, Card, CardBody, inlineLinkStyles } from "@/components/ui";
 import { getPasswordResetStatus } from "@/db/queries/password-resets";
 import { hashLinkToken } from "@/lib/auth/tokens";
 import { resetProblems } from "@/lib/messages";
@@ -35,7 +35,7 @@ export default async function ResetPasswordPage({
           {token && status !== "ok"
             ? resetProblems[status]
             : "This page needs the link from your e-mail."}{" "}
-          <Link className="underline" href="/forgot-password">
+          <Link className={inlineLinkStyles} href="/forgot-password">
             Ask for a new link
           </Link>
         </Alert>

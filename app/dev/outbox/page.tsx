@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
-import { Card, CardBody, CardHeader, CardTitle, EmptyState } from "@/components/ui";
+import { Card, CardBody, CardHeader, CardTitle, EmptyState, textLinkStyles } from "@/components/ui";
 import { getPageUser } from "@/lib/auth/page-session";
 import { isOutboxEnabled, readOutboxFor } from "@/services/mailer";
 
@@ -51,7 +51,7 @@ export default async function OutboxPage() {
       )}
       {!user ? (
         <p className="text-sm">
-          <Link className="underline" href="/sign-in?next=%2Fdev%2Foutbox">
+          <Link className={textLinkStyles} href="/sign-in?next=%2Fdev%2Foutbox">
             Sign in
           </Link>
         </p>

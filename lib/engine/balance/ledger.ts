@@ -124,17 +124,24 @@ class Shelf {
   /** Every lot in [head, drained) has nothing left (stock is only ever taken, never put back). */
   drained = 0;
   constructor(lots: readonly LedgerLot[], keep: number) {
-    this.lots = lots
-      .map((l) => ({
+    this.lots = new Array<Live>(lots.length);
+    let sorted = true;
+    for (let i = 0; i < lots.length; i++) {
+      const l = lots[i]!;
+      this.lots[i] = {
         id: l.id,
         made: l.madeDay,
         expires: l.madeDay + keep,
         remaining: l.amount,
         manure: l.manure,
         binId: l.binId,
-      }))
-      .sort((a, b) => a.made - b.made);
-    this.made = Float64Array.from(this.lots, (l) => l.made);
+      };
+      if (i > 0 && l.madeDay < lots[i - 1]!.madeDay) sorted = false;
+    }
+    // Lots mostly come in date order (a bin's days one after another); sort (stable) only when not.
+    if (!sorted) this.lots.sort((a, b) => a.made - b.made);
+    this.made = new Float64Array(this.lots.length);
+    for (let i = 0; i < this.lots.length; i++) this.made[i] = this.lots[i]!.made;
   }
   private firstMadeAfter(day: number): number {
     let lo = this.head;
@@ -165,26 +172,42 @@ class Shelf {
     }
     return s;
   }
-  /** Draws oldest first; `manureFirst` takes manure-fed lots before clean ones; cleanOnly skips them. */
+  /**
+   * Draws oldest first; `manure-first` takes manure-fed lots before clean ones, `clean-only` skips
+   * them. With `wanted`, lots no feeding still waiting could use go first (each in that order), so
+   * a feeding served early leaves the waiting ones the lots only they can use.
+   */
   draw(
     lo: number,
     hi: number,
     amount: number,
     mode: "clean-only" | "manure-first",
     out?: { lotId: string; amount: number }[],
+    wanted?: (lot: Live) => boolean,
   ): number {
     let left = amount;
     const passes = mode === "clean-only" ? CLEAN_ONLY : MANURE_FIRST;
     const start = this.skipDrained(lo, hi);
-    for (const wantManure of passes) {
-      for (let i = start; i < hi && left > AMOUNT_EPSILON; i++) {
+    let flags: Uint8Array | undefined;
+    if (wanted) {
+      flags = new Uint8Array(hi - start);
+      for (let i = start; i < hi; i++) {
         const l = this.lots[i]!;
-        if (l.manure !== wantManure || l.remaining <= 0) continue;
-        const take = Math.min(l.remaining, left);
-        l.remaining -= take;
-        if (l.remaining < AMOUNT_EPSILON) l.remaining = 0;
-        left -= take;
-        out?.push({ lotId: l.id, amount: take });
+        flags[i - start] = l.remaining > 0 && wanted(l) ? 1 : 0;
+      }
+    }
+    for (let round = flags ? 0 : 1; round <= 1; round++) {
+      for (const wantManure of passes) {
+        for (let i = start; i < hi && left > AMOUNT_EPSILON; i++) {
+          const l = this.lots[i]!;
+          if (l.manure !== wantManure || l.remaining <= 0) continue;
+          if (flags && flags[i - start] !== round) continue;
+          const take = Math.min(l.remaining, left);
+          l.remaining -= take;
+          if (l.remaining < AMOUNT_EPSILON) l.remaining = 0;
+          left -= take;
+          out?.push({ lotId: l.id, amount: take });
+        }
       }
     }
     return amount - Math.max(0, left);
@@ -234,6 +257,7 @@ function drawShared(
   weights: Float64Array,
   out: Float64Array,
   records: LedgerResult["plannedDraws"],
+  wanted?: (lot: Live) => boolean,
 ): void {
   let total = 0;
   for (let k = 0; k < n; k++) total += weights[k]!;
@@ -248,7 +272,7 @@ function drawShared(
   // A group of one takes the whole draw (w / w is exactly 1): its list takes the records as drawn.
   const drawn: { lotId: string; amount: number }[] | undefined =
     recorded === 0 ? undefined : n === 1 ? records![group[from]!]! : [];
-  const got = shelf.draw(lo, hi, amount, mode, drawn);
+  const got = shelf.draw(lo, hi, amount, mode, drawn, wanted);
   for (let k = 0; k < n; k++) out[k] = (got * weights[k]!) / total;
   if (drawn && n > 1)
     for (let k = 0; k < n; k++) {
@@ -259,31 +283,103 @@ function drawShared(
     }
 }
 
-/** An empty draw list for each claim on or after `from`, undefined before it. */
+/**
+ * The planned feedings of one month and pool not served yet, counted per day (Fenwick trees), so
+ * a draw can ask whether any of them could use a lot: one usable on some day of the lot's window,
+ * and clean-only ones only from clean lots.
+ */
+class Waiting {
+  private readonly any: Int32Array;
+  private readonly cleanOnly: Int32Array;
+  count = 0;
+  constructor(
+    private readonly startDay: number,
+    private readonly endDay: number,
+  ) {
+    this.any = new Int32Array(endDay - startDay + 1);
+    this.cleanOnly = new Int32Array(endDay - startDay + 1);
+  }
+  add(day: number, cleanOnly: boolean, delta: 1 | -1): void {
+    const tree = cleanOnly ? this.cleanOnly : this.any;
+    for (let i = day - this.startDay + 1; i < tree.length; i += i & -i) tree[i]! += delta;
+    this.count += delta;
+  }
+  private before(tree: Int32Array, day: number): number {
+    let s = 0;
+    for (let i = Math.min(day, this.endDay) - this.startDay; i > 0; i -= i & -i) s += tree[i]!;
+    return s;
+  }
+  /** Could a waiting feeding use `lot` (usable from its made day to the day before it expires)? */
+  wants = (lot: Live): boolean => {
+    const from = Math.max(lot.made, this.startDay);
+    const to = Math.min(lot.expires, this.endDay);
+    if (to <= from) return false;
+    if (this.before(this.any, to) - this.before(this.any, from) > 0) return true;
+    return !lot.manure && this.before(this.cleanOnly, to) - this.before(this.cleanOnly, from) > 0;
+  };
+}
+
+/** An empty draw list for each claim on or after `from`, undefined before it (no lists when none is). */
 function drawLists(
   claims: readonly { day: number }[],
   from: number,
-): ({ lotId: string; amount: number }[] | undefined)[] {
+): ({ lotId: string; amount: number }[] | undefined)[] | undefined {
+  if (!claims.some((c) => c.day >= from)) return undefined;
   const lists = new Array<{ lotId: string; amount: number }[] | undefined>(claims.length);
   for (let i = 0; i < claims.length; i++) lists[i] = claims[i]!.day >= from ? [] : undefined;
   return lists;
 }
 
 /**
- * Tier order of planned claims by index: priority, feeder class, day. The keys are copied into
- * typed arrays once per run, so the per-month sorts compare numbers, not objects.
+ * Indices of the planned claims in tier order: priority, feeder class, day, then index. When the
+ * keys fit, each claim's order is one exact integer (a typed-array sort, no comparator); otherwise
+ * the claims are sorted with the comparison itself. `keep(i)` selects the claims to order.
  */
-function tierOrder(claims: readonly LedgerClaim[]): { compare(a: number, b: number): number } {
-  const priority = new Float64Array(claims.length);
-  const rank = new Float64Array(claims.length);
-  const day = new Float64Array(claims.length);
-  claims.forEach((c, i) => {
-    priority[i] = c.priority;
-    rank[i] = FEEDER_RANK[c.feederClass];
-    day[i] = c.day;
-  });
-  return {
-    compare: (a, b) => priority[a]! - priority[b]! || rank[a]! - rank[b]! || day[a]! - day[b]!,
+function tierOrder(claims: readonly LedgerClaim[], keep: (i: number) => boolean): Int32Array {
+  const n = claims.length;
+  const picked: number[] = [];
+  const priorities = new Set<number>();
+  let minDay = Infinity;
+  let maxDay = -Infinity;
+  for (let i = 0; i < n; i++) {
+    if (!keep(i)) continue;
+    const c = claims[i]!;
+    picked.push(i);
+    priorities.add(c.priority);
+    if (c.day < minDay) minDay = c.day;
+    if (c.day > maxDay) maxDay = c.day;
+  }
+  const ranks = [...priorities].sort((a, b) => a - b);
+  const width = maxDay - minDay + 1;
+  const out = new Int32Array(picked.length);
+  if (ranks.length * 3 * width * n < Number.MAX_SAFE_INTEGER && Number.isInteger(width)) {
+    const rankOf = new Map(ranks.map((p, r) => [p, r]));
+    const keys = new Float64Array(picked.length);
+    picked.forEach((i, k) => {
+      const c = claims[i]!;
+      const tier = rankOf.get(c.priority)! * 3 + FEEDER_RANK[c.feederClass];
+      keys[k] = (tier * width + (c.day - minDay)) * n + i;
+    });
+    keys.sort();
+    for (let k = 0; k < keys.length; k++) out[k] = keys[k]! % n;
+    return out;
+  }
+  const compare = tierCompare(claims);
+  picked.sort((a, b) => compare(a, b) || a - b);
+  out.set(picked);
+  return out;
+}
+
+/** Tier comparison of two planned claims by index: priority, feeder class, day. */
+function tierCompare(claims: readonly LedgerClaim[]): (a: number, b: number) => number {
+  return (a, b) => {
+    const x = claims[a]!;
+    const y = claims[b]!;
+    return (
+      x.priority - y.priority ||
+      FEEDER_RANK[x.feederClass] - FEEDER_RANK[y.feederClass] ||
+      x.day - y.day
+    );
   };
 }
 
@@ -323,16 +419,27 @@ export function runLedger(input: LedgerInput): LedgerResult {
     }
     return lo;
   };
-  const tiers = tierOrder(input.planned);
   const slot = (m: number, pool: Pool) => m * 2 + (pool === "castings" ? 0 : 1);
+  // Planned claims per month and pool, each list in tier order (a sub-list of one sorted whole).
+  const plannedMonth = new Int32Array(input.planned.length);
+  input.planned.forEach((c, i) => (plannedMonth[i] = c.need > 0 ? monthIndex(c.day) : -1));
   const plannedByMonth: number[][] = Array.from({ length: spans.length * 2 }, () => []);
-  input.planned.forEach((c, i) => {
-    const m = monthIndex(c.day);
-    if (m >= 0 && c.need > 0) plannedByMonth[slot(m, c.pool)]!.push(i);
-  });
+  for (const i of tierOrder(input.planned, (i) => plannedMonth[i]! >= 0))
+    plannedByMonth[slot(plannedMonth[i]!, input.planned[i]!.pool)]!.push(i);
+  const tiers = tierCompare(input.planned);
   // Logged claims bucketed by day (a counting sort: days are integers), so each month's list
   // is already in date order.
   const loggedByMonth: number[][] = Array.from({ length: spans.length * 2 }, () => []);
+  // Day, need and "names its lots" of each logged claim, copied once: the replay reads them in
+  // date order, which is not the order the claims were built in.
+  const loggedDay = new Int32Array(input.logged.length);
+  const loggedNeed = new Float64Array(input.logged.length);
+  const loggedNames = new Uint8Array(input.logged.length);
+  input.logged.forEach((c, i) => {
+    loggedDay[i] = c.day;
+    loggedNeed[i] = c.need;
+    loggedNames[i] = c.draws.length > 0 ? 1 : 0;
+  });
   if (spans.length > 0 && input.logged.length > 0) {
     const first = spans[0]!.startDay;
     const width = spans[spans.length - 1]!.endDay - first;
@@ -438,14 +545,14 @@ export function runLedger(input: LedgerInput): LedgerResult {
       //    on the same day draw together (oldest first) and share the result in proportion.
       const logged = loggedByMonth[slot(m, pool)]!;
       for (let t = 0; t < logged.length;) {
-        const first = input.logged[logged[t]!]!;
-        adjustBefore(first.day);
+        const firstDay = loggedDay[logged[t]!]!;
+        adjustBefore(firstDay);
         let end = t + 1;
-        if (first.draws.length === 0)
+        if (loggedNames[logged[t]!] === 0)
           while (
             end < logged.length &&
-            input.logged[logged[end]!]!.day === first.day &&
-            input.logged[logged[end]!]!.draws.length === 0
+            loggedDay[logged[end]!] === firstDay &&
+            loggedNames[logged[end]!] === 0
           )
             end++;
         const n = end - t;
@@ -453,31 +560,32 @@ export function runLedger(input: LedgerInput): LedgerResult {
         let rest = 0;
         for (let k = 0; k < n; k++) {
           const i = logged[t + k]!;
-          const c = input.logged[i]!;
-          const out = result.loggedDraws?.[i];
+          const need = loggedNeed[i]!;
           let got = 0;
-          for (const d of c.draws) {
-            const at = byId().get(d.lotId);
-            const lot = at && at.pool === pool ? at.shelf.lots[at.index]! : undefined;
-            const take = lot ? Math.min(lot.remaining, Math.max(0, d.amount)) : 0;
-            if (lot && take > 0) {
-              lot.remaining -= take;
-              out?.push({ lotId: lot.id, amount: take });
+          if (loggedNames[i] === 1) {
+            const out = result.loggedDraws?.[i];
+            for (const d of input.logged[i]!.draws) {
+              const at = byId().get(d.lotId);
+              const lot = at && at.pool === pool ? at.shelf.lots[at.index]! : undefined;
+              const take = lot ? Math.min(lot.remaining, Math.max(0, d.amount)) : 0;
+              if (lot && take > 0) {
+                lot.remaining -= take;
+                out?.push({ lotId: lot.id, amount: take });
+              }
+              got += take;
+              if (take < d.amount - AMOUNT_EPSILON)
+                result.overdrawn.push({ loggedIndex: i, lotId: d.lotId, amount: d.amount - take });
             }
-            got += take;
-            if (take < d.amount - AMOUNT_EPSILON)
-              result.overdrawn.push({ loggedIndex: i, lotId: d.lotId, amount: d.amount - take });
           }
           named[k] = got;
-          rest += Math.max(0, c.need - got);
-          demand += c.need;
+          weights[k] = Math.max(0, need - got);
+          rest += Math.max(0, need - got);
+          demand += need;
         }
-        for (let k = 0; k < n; k++)
-          weights[k] = Math.max(0, input.logged[logged[t + k]!]!.need - named[k]!);
         drawShared(
           shelf,
           keep,
-          first.day,
+          firstDay,
           rest,
           "manure-first",
           logged,
@@ -499,12 +607,17 @@ export function runLedger(input: LedgerInput): LedgerResult {
 
       // 2. What is planned: tier by tier. Within a tier, clean-only claims draw first (clean lots),
       //    then the others (manure-fed lots first); each group draws once and shares pro rata.
+      //    A group served before others of the month draws first from the lots those cannot use.
       const planned = plannedByMonth[slot(m, pool)]!;
-      planned.sort((a, b) => tiers.compare(a, b) || a - b);
+      const waiting = new Waiting(span.startDay, span.endDay);
+      for (const i of planned) waiting.add(input.planned[i]!.day, input.planned[i]!.cleanOnly, 1);
       for (let t = 0; t < planned.length;) {
         const head = input.planned[planned[t]!]!;
         let end = t + 1;
-        while (end < planned.length && tiers.compare(planned[t]!, planned[end]!) === 0) end++;
+        while (end < planned.length && tiers(planned[t]!, planned[end]!) === 0) end++;
+        for (let k = t; k < end; k++)
+          waiting.add(input.planned[planned[k]!]!.day, input.planned[planned[k]!]!.cleanOnly, -1);
+        const wanted = waiting.count > 0 ? waiting.wants : undefined;
         const [lo, hi] = shelf.range(head.day, keep);
         const cleanGroup: number[] = [];
         const otherGroup: number[] = [];
@@ -549,6 +662,7 @@ export function runLedger(input: LedgerInput): LedgerResult {
             weights,
             shares,
             result.plannedDraws,
+            wanted,
           );
           for (let k = 0; k < n; k++) {
             const i = group[k]!;

@@ -11,23 +11,53 @@ const MIN_YEAR = 1900;
 const MAX_YEAR = 2200;
 
 /** Days since 1970-01-01 for a "YYYY-MM-DD" string; EngineInputError naming `field` otherwise. */
-// Plans parse the same few hundred dates thousands of times; valid ones are remembered.
-const dayCache = new Map<string, number>();
-
+// Plans turn tens of thousands of logged dates into day numbers: a valid date is read digit by
+// digit with the civil-calendar arithmetic below (no RegExp, no Date, no cache); anything else
+// goes the slow way, which names the problem.
 export function toDayNumber(date: unknown, field = "date"): number {
-  if (typeof date === "string") {
-    const hit = dayCache.get(date);
-    if (hit !== undefined) return hit;
-  }
-  const day = parseDayNumber(date, field);
-  if (dayCache.size > 200_000) dayCache.clear();
-  dayCache.set(date as string, day);
-  return day;
+  const day = typeof date === "string" ? quickDayNumber(date) : undefined;
+  return day ?? parseDayNumber(date, field);
 }
 
-/** The day number of a date already checked by toDayNumber, without building a field name for it. */
+/** The day number of a valid "YYYY-MM-DD", or undefined (the caller then reports the field). */
 export function checkedDayNumber(date: string): number | undefined {
-  return dayCache.get(date);
+  return quickDayNumber(date);
+}
+
+const DIGIT_0 = 48;
+const digitAt = (s: string, i: number): number => {
+  const d = s.charCodeAt(i) - DIGIT_0;
+  return d >= 0 && d <= 9 ? d : NaN;
+};
+
+function quickDayNumber(date: string): number | undefined {
+  if (date.length !== 10 || date.charCodeAt(4) !== 45 || date.charCodeAt(7) !== 45)
+    return undefined;
+  const y =
+    digitAt(date, 0) * 1000 + digitAt(date, 1) * 100 + digitAt(date, 2) * 10 + digitAt(date, 3);
+  const m = digitAt(date, 5) * 10 + digitAt(date, 6);
+  const d = digitAt(date, 8) * 10 + digitAt(date, 9);
+  // NaN (a non-digit) fails every comparison below.
+  if (!(y >= MIN_YEAR && y <= MAX_YEAR && m >= 1 && m <= 12 && d >= 1 && d <= daysInMonth(y, m)))
+    return undefined;
+  return daysFromCivil(y, m, d);
+}
+
+const isLeap = (y: number) => (y % 4 === 0 && y % 100 !== 0) || y % 400 === 0;
+const MONTH_DAYS = [31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31];
+function daysInMonth(y: number, m: number): number {
+  return m === 2 && isLeap(y) ? 29 : MONTH_DAYS[m - 1]!;
+}
+
+// Days from civil and back (H. Hinnant, "chrono-Compatible Low-Level Date Algorithms"):
+// proleptic Gregorian calendar, eras of 400 years counted from 0000-03-01.
+function daysFromCivil(y: number, m: number, d: number): number {
+  const yy = m <= 2 ? y - 1 : y;
+  const era = Math.floor(yy / 400);
+  const yoe = yy - era * 400;
+  const doy = Math.floor((153 * (m + (m > 2 ? -3 : 9)) + 2) / 5) + d - 1;
+  const doe = yoe * 365 + Math.floor(yoe / 4) - Math.floor(yoe / 100) + doy;
+  return era * 146097 + doe - 719468;
 }
 
 function parseDayNumber(date: unknown, field: string): number {
@@ -54,7 +84,18 @@ function parseDayNumber(date: unknown, field: string): number {
   return Math.round(ms / MS_PER_DAY);
 }
 
+// Day numbers of years 1900–2200 come back as the same string each time (built once, on demand).
+const ISO_FIRST_DAY = -25567; // 1900-01-01
+const ISO_LAST_DAY = 84005; // 2199-12-31
+const isoOfDay: (string | undefined)[] = new Array(ISO_LAST_DAY - ISO_FIRST_DAY + 1).fill(
+  undefined,
+);
+
 export function fromDayNumber(day: number): IsoDate {
+  const k = day - ISO_FIRST_DAY;
+  if (Number.isInteger(day) && k >= 0 && day <= ISO_LAST_DAY) {
+    return (isoOfDay[k] ??= utcDateToIso(new Date(day * MS_PER_DAY)));
+  }
   return utcDateToIso(new Date(day * MS_PER_DAY));
 }
 

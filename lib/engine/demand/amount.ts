@@ -48,19 +48,20 @@ export function ruleAmount(
   }
   const warnings: string[] = [];
   let base: number;
-  let how: string;
+  // The words are built only when read: a plan computes thousands of amounts and shows few texts.
+  let how: () => string;
   switch (rule.basis) {
     case "per-plant": {
       const n = requirePositive(planting.plantCount, `${field}.plantCount`, 100_000);
       base = per * n;
-      how = `${plural(n, "plant")} × ${fmt(per, 3)} ${unit}`;
+      how = () => `${plural(n, "plant")} × ${fmt(per, 3)} ${unit}`;
       break;
     }
     case "per-area": {
       const area = planting.areaM2 ?? bed.areaM2;
       const a = requirePositive(area, `${field}.areaM2`, 10_000);
       base = per * a;
-      how = `${fmt(a, 2)} m² × ${fmt(per, 3)} ${unit}/m²`;
+      how = () => `${fmt(a, 2)} m² × ${fmt(per, 3)} ${unit}/m²`;
       if (rule.material === "castings" && unit === "L" && per > 12.7 + 1e-9) {
         warnings.push(`top-dressing ${fmt(per, 1)} mm deep is more than ½ in (12.7 mm)`);
       }
@@ -78,7 +79,7 @@ export function ruleAmount(
           throw new EngineInputError(`${r}.basis`, "percent-of-mix applies to castings only");
         }
         base = (per / 100) * v;
-        how = `${fmt(per, 1)} % of ${fmt(v, 1)} L mix`;
+        how = () => `${fmt(per, 1)} % of ${fmt(v, 1)} L mix`;
         if (per > dflt("pottingMixWarnAbovePercent")) {
           warnings.push(
             `${fmt(per, 1)} % castings is above the 20 % by volume Atiyeh et al. (2000) recommend`,
@@ -86,7 +87,7 @@ export function ruleAmount(
         }
       } else {
         base = per * v;
-        how = `${fmt(v, 1)} L container × ${fmt(per, 3)} ${unit}/L`;
+        how = () => `${fmt(v, 1)} L container × ${fmt(per, 3)} ${unit}/L`;
       }
       break;
     }
@@ -96,13 +97,13 @@ export function ruleAmount(
 
   if (rule.material === "castings") {
     const kg = unit === "kg" ? base : base * density;
-    const text =
+    const text = () =>
       unit === "kg"
-        ? `${how} = ${fmt(kg, 3)} kg castings`
-        : `${how} × ${fmt(density, 2)} kg/L = ${fmt(kg, 3)} kg castings`;
+        ? `${how()} = ${fmt(kg, 3)} kg castings`
+        : `${how()} × ${fmt(density, 2)} kg/L = ${fmt(kg, 3)} kg castings`;
     return {
       amount: kg,
-      explanation: { text, inputs: { amountPer: per, bulkDensityKgPerL: density } },
+      explanation: lazyText(text, { amountPer: per, bulkDensityKgPerL: density }),
       warnings,
     };
   }
@@ -113,15 +114,30 @@ export function ruleAmount(
       1000,
     );
     const undiluted = base / (1 + parts);
-    const text =
+    const text = () =>
       parts > 0
-        ? `${how} of solution ÷ ${1 + parts} (1 part leachate to ${parts} water) = ${fmt(undiluted, 3)} L leachate`
-        : `${how} = ${fmt(undiluted, 3)} L leachate, undiluted`;
+        ? `${how()} of solution ÷ ${1 + parts} (1 part leachate to ${parts} water) = ${fmt(undiluted, 3)} L leachate`
+        : `${how()} = ${fmt(undiluted, 3)} L leachate, undiluted`;
     return {
       amount: undiluted,
-      explanation: { text, inputs: { solutionL: base, waterParts: parts } },
+      explanation: lazyText(text, { solutionL: base, waterParts: parts }),
       warnings,
     };
   }
-  return { amount: base, explanation: { text: `${how} = ${fmt(base, 3)} L tea` }, warnings };
+  return {
+    amount: base,
+    explanation: lazyText(() => `${how()} = ${fmt(base, 3)} L tea`),
+    warnings,
+  };
+}
+
+/** An explanation whose `text` is built on first read (an enumerable getter, so JSON keeps it). */
+function lazyText(build: () => string, inputs?: Explanation["inputs"]): Explanation {
+  let text: string | undefined;
+  const explanation = {
+    get text() {
+      return (text ??= build());
+    },
+  };
+  return inputs === undefined ? explanation : Object.assign(explanation, { inputs });
 }

@@ -33,6 +33,21 @@ interface Season {
 
 /** Checks frost dates; the last spring frost must come before the first fall frost. */
 export function parseSeason(season: GardenSeason, field = "season"): Season {
+  // A plan passes the same season for every planting: check it once.
+  if (
+    lastSeason &&
+    lastSeason.from === season?.lastSpringFrost &&
+    lastSeason.to === season?.firstFallFrost
+  )
+    return lastSeason.parsed;
+  const parsed = checkSeason(season, field);
+  lastSeason = { from: season.lastSpringFrost, to: season.firstFallFrost, parsed };
+  return parsed;
+}
+
+let lastSeason: { from: string; to: string; parsed: Season } | undefined;
+
+function checkSeason(season: GardenSeason, field: string): Season {
   const [sm, sd] = parseMonthDay(season?.lastSpringFrost, `${field}.lastSpringFrost`);
   const [fm, fd] = parseMonthDay(season?.firstFallFrost, `${field}.firstFallFrost`);
   const from = sm * 100 + sd;
@@ -47,7 +62,9 @@ export function parseSeason(season: GardenSeason, field = "season"): Season {
 }
 
 function inSeason(date: IsoDate, s: Season): boolean {
-  const md = Number(date.slice(5, 7)) * 100 + Number(date.slice(8, 10));
+  // month * 100 + day from the digits of a checked "YYYY-MM-DD" ("0" is char code 48).
+  const c = (i: number) => date.charCodeAt(i) - 48;
+  const md = (c(5) * 10 + c(6)) * 100 + c(8) * 10 + c(9);
   return md >= s.from && md <= s.to;
 }
 

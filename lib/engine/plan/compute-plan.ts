@@ -51,7 +51,8 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
   const ledger = runLedger({
     ...ledgerInput,
     recordDrawsFrom: ctx.planStartDay,
-    snapshotAtMonth: resumeMonth,
+    // Only the gap search resumes from the snapshot.
+    snapshotAtMonth: options.suggestions !== false ? resumeMonth : undefined,
   });
   const planSpans = ctx.spans.slice(ctx.firstPlanMonth);
   const inPlan = (day: number) => day >= ctx.planStartDay && day <= ctx.planEndDay;
@@ -69,8 +70,10 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
     teaByMonth.set(monthOf(c.date), t);
   });
   demand.logged.forEach((c, i) => {
+    // The day first: most logs are history, and the claim is at hand while the log is not.
+    if (!inPlan(c.day)) return;
     const a = inputs.logs.applications[c.index]!;
-    if (a.material !== "tea" || !inPlan(c.day)) return;
+    if (a.material !== "tea") return;
     const t = teaByMonth.get(monthOf(a.date)) ?? { litres: 0, need: 0, got: 0 };
     t.litres += a.amount;
     t.need += c.need;

@@ -1,14 +1,12 @@
 import type { Page } from "playwright-core";
+import { AppShell } from "./app-shell";
 
 /** /g/{gardenId}/beds: the list, its filters and the create form. */
 export class BedsPage {
   constructor(private readonly page: Page) {}
 
   async openFromNav() {
-    await this.page
-      .getByRole("navigation", { name: "Garden sections" })
-      .getByRole("link", { name: "Beds" })
-      .click();
+    await new AppShell(this.page).openSection("Beds");
     await this.page.getByRole("heading", { name: "Beds and containers", exact: true }).waitFor();
   }
 

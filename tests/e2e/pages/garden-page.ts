@@ -1,4 +1,5 @@
 import type { Page } from "playwright-core";
+import { AppShell } from "./app-shell";
 
 export class GardenPage {
   constructor(private readonly page: Page) {}
@@ -16,11 +17,12 @@ export class GardenPage {
     return this.overviewHeader().getByText(role, { exact: true });
   }
 
-  nav() {
-    return this.page.getByRole("navigation", { name: "Garden sections" });
+  /** The garden's sections, with the phone menu opened first when that is where they are. */
+  async nav() {
+    return new AppShell(this.page).sectionsNav();
   }
 
   async openSection(name: string) {
-    await this.nav().getByRole("link", { name }).click();
+    await new AppShell(this.page).openSection(name);
   }
 }

@@ -11,6 +11,20 @@ export class OutboxPage {
     await this.page.goto(`${this.baseUrl}/dev/outbox`);
   }
 
+  /**
+   * Waits for mail to `email`, reloading: the page is rendered on the server and mail
+   * sent after a response (the welcome mail) may land a moment after it is opened.
+   */
+  async waitForMessageTo(email: string, timeoutMs = 20_000) {
+    const deadline = Date.now() + timeoutMs;
+    for (;;) {
+      if ((await this.messageTo(email).count()) > 0) return this.messageTo(email).first();
+      if (Date.now() > deadline) throw new Error(`No mail to ${email} in the outbox`);
+      await new Promise((r) => setTimeout(r, 500));
+      await this.page.reload();
+    }
+  }
+
   messageTo(email: string) {
     return this.page.getByTestId("outbox-message").filter({ hasText: `To ${email}` });
   }

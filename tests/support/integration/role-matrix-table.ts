@@ -22,6 +22,8 @@ import * as balance from "@/app/api/gardens/[gardenId]/balance/route";
 import * as gardenExport from "@/app/api/gardens/[gardenId]/export/route";
 import * as bed from "@/app/api/gardens/[gardenId]/beds/[bedId]/route";
 import * as beds from "@/app/api/gardens/[gardenId]/beds/route";
+import * as bedsExport from "@/app/api/gardens/[gardenId]/beds/export/route";
+import * as bedsImport from "@/app/api/gardens/[gardenId]/beds/import/route";
 import * as crop from "@/app/api/gardens/[gardenId]/crops/[cropId]/route";
 import * as crops from "@/app/api/gardens/[gardenId]/crops/route";
 import * as planting from "@/app/api/gardens/[gardenId]/plantings/[plantingId]/route";
@@ -618,6 +620,34 @@ export const roleMatrix: MatrixRow[] = [
       const { id } = await makeBed(ctx.world.gardenId);
       return { url: api(ctx, `beds/${id}`), params: { ...g(ctx), bedId: id } };
     },
+  },
+  {
+    method: "POST",
+    file: "app/api/gardens/[gardenId]/beds/import/route.ts",
+    handler: bedsImport.POST,
+    mutates: true,
+    expect: atLeast("grower", 201),
+    request: async (ctx) => {
+      await starterCropId("Tomato"); // the shared crop list, seeded once
+      return {
+        url: api(ctx, "beds/import"),
+        params: g(ctx),
+        body: {
+          csv: [
+            "Bed,Kind,Indoors,Length (ft),Width (ft),Depth (in),Volume (gal),Bed notes,Crop,Plants,Planted on,Expected end,Priority,Planting notes",
+            `Imported by ${ctx.actor},bed,no,8,4,,,,Tomato,6,2027-05-01,,normal,`,
+          ].join("\n"),
+        },
+      };
+    },
+  },
+  {
+    method: "GET",
+    file: "app/api/gardens/[gardenId]/beds/export/route.ts",
+    handler: bedsExport.GET,
+    mutates: false,
+    expect: viewerPlus,
+    request: (ctx) => ({ url: api(ctx, "beds/export"), params: g(ctx) }),
   },
   {
     method: "GET",

@@ -125,3 +125,34 @@ describe("ConfirmDialog", () => {
     expect(onConfirm).toHaveBeenCalledTimes(1);
   });
 });
+
+describe("ConfirmDialog typed confirmation (issue 12 item 7)", () => {
+  it("accepts a curly apostrophe for a straight one, and says what does not match", async () => {
+    const user = userEvent.setup();
+    const onConfirm = vi.fn();
+    render(
+      <ConfirmDialog
+        open
+        onCancel={() => undefined}
+        onConfirm={onConfirm}
+        title="Delete Bo's Plot?"
+        confirmLabel="Delete garden"
+        confirmText="Bo's Plot"
+      />,
+    );
+    const input = screen.getByLabelText(/to confirm/);
+    const button = screen.getByRole("button", { name: "Delete garden" });
+    await user.type(input, "Bos");
+    expect(button).toBeDisabled();
+    // The hint is tied to the field (aria-describedby) and names the difference.
+    expect(input).toHaveAccessibleDescription(
+      "Character 3 differs: the name has “'”, you typed “s”.",
+    );
+    await user.clear(input);
+    // U+2019, what a phone keyboard types for an apostrophe.
+    await user.type(input, "Bo\u2019s Plot");
+    expect(button).toBeEnabled();
+    await user.click(button);
+    expect(onConfirm).toHaveBeenCalledOnce();
+  });
+});

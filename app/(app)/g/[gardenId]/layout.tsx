@@ -1,9 +1,9 @@
 import type { ReactNode } from "react";
-import { GardenNav } from "@/components/shell/garden-nav";
+import { notFound } from "next/navigation";
 import { SignedInFrame } from "@/components/shell/signed-in-frame";
 import { getGardenById } from "@/db/queries/gardens";
+import { listGardensForUser } from "@/db/queries/memberships";
 import { requirePageMember } from "@/lib/auth/page-session";
-import { notFound } from "next/navigation";
 
 export default async function GardenLayout({
   children,
@@ -14,11 +14,17 @@ export default async function GardenLayout({
 }) {
   const { gardenId } = await params;
   const member = await requirePageMember(gardenId, "viewer");
-  const garden = await getGardenById({ gardenId });
+  const [garden, gardens] = await Promise.all([
+    getGardenById({ gardenId }),
+    listGardensForUser({ userId: member.user.id }),
+  ]);
   if (!garden) notFound();
   return (
-    <SignedInFrame user={member.user} currentGardenId={gardenId}>
-      <GardenNav gardenId={gardenId} role={member.role} />
+    <SignedInFrame
+      userName={member.user.name}
+      gardens={gardens}
+      garden={{ id: gardenId, role: member.role }}
+    >
       <main className="mx-auto flex max-w-5xl flex-col gap-6 px-4 py-6">{children}</main>
     </SignedInFrame>
   );

@@ -1,10 +1,11 @@
 import type { Metadata } from "next";
-import { Badge, Card, CardBody } from "@/components/ui";
+import { Badge } from "@/components/ui";
 import { gardenNamesFrom } from "@/components/balance/garden-names";
 import { gardenStatus } from "@/components/overview/garden-status";
 import {
   DueThisWeek,
   FirstSteps,
+  GardenCounts,
   NextHarvests,
   StockOnHand,
   ThisMonth,
@@ -45,12 +46,13 @@ export default async function GardenOverviewPage({
     : null;
   const status = plan ? gardenStatus(plan, inputs, lots) : null;
   const system = garden.unitSystem;
+  const at = (page: string) => `/g/${gardenId}/${page}`;
   const figures = [
-    { label: "Beds", value: summary.beds },
-    { label: "Containers", value: summary.containers },
-    { label: "Plantings, current and planned", value: summary.activePlantings },
-    { label: "Worm bins", value: summary.bins },
-    { label: "Members", value: summary.members },
+    { label: "Beds", value: summary.beds, href: at("beds") },
+    { label: "Containers", value: summary.containers, href: at("beds") },
+    { label: "Plantings, current and planned", value: summary.activePlantings, href: at("beds") },
+    { label: "Worm bins", value: summary.bins, href: at("bins") },
+    { label: "Members", value: summary.members, href: at("members") },
   ];
   return (
     <>
@@ -72,28 +74,18 @@ export default async function GardenOverviewPage({
             <ThisMonth status={status} system={system} gardenId={gardenId} />
             <DueThisWeek status={status} names={names} system={system} />
             <NextHarvests status={status} names={names} system={system} />
-            <StockOnHand status={status} names={names} system={system} />
+            <StockOnHand status={status} names={names} system={system} gardenId={gardenId} />
           </div>
         </>
       ) : (
-        <FirstSteps hasBins={inputs.bins.length > 0} hasBeds={inputs.beds.length > 0} />
+        <FirstSteps
+          hasBins={inputs.bins.length > 0}
+          hasBeds={inputs.beds.length > 0}
+          gardenId={gardenId}
+        />
       )}
       {/* An empty garden gets first steps, not a row of zeros. */}
-      {status ? (
-        <section
-          aria-label="The garden at a glance"
-          className="grid grid-cols-2 gap-3 sm:grid-cols-5"
-        >
-          {figures.map((f) => (
-            <Card key={f.label}>
-              <CardBody>
-                <p className="text-3xl font-semibold tabular-nums">{f.value}</p>
-                <p className="text-sm text-soil-700">{f.label}</p>
-              </CardBody>
-            </Card>
-          ))}
-        </section>
-      ) : null}
+      {status ? <GardenCounts figures={figures} /> : null}
     </>
   );
 }

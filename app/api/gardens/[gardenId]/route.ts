@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { deleteGarden, getGardenById, updateGarden } from "@/db/queries/gardens";
 import { requireRole } from "@/lib/auth/require-role";
+import { confirmTextMismatch, sameConfirmText } from "@/lib/confirm-text";
 import { AppError } from "@/lib/errors";
 import { parseJson, parseParams, parseWith, route, refuseOtherMethods } from "@/lib/http";
 import {
@@ -39,9 +40,11 @@ export const DELETE = route<Params>(async (request, { params }) => {
   const { confirmName } = await parseJson(request, deleteGardenSchema);
   const garden = await getGardenById({ gardenId });
   if (!garden) throw new AppError("not_found:garden");
-  if (confirmName.trim() !== garden.name) {
+  // The same comparison as the dialog: a phone's curly apostrophe is not another name.
+  if (!sameConfirmText(confirmName, garden.name)) {
     throw new AppError("validation:confirm", "The name typed does not match the garden's name.", {
-      confirmName: `Type "${garden.name}" exactly to delete it.`,
+      confirmName:
+        `Type "${garden.name}" to delete it. ${confirmTextMismatch(confirmName, garden.name) ?? ""}`.trim(),
     });
   }
   await deleteGarden({ gardenId });

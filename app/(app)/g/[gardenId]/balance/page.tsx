@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import { BalanceView } from "@/components/balance/balance-view";
 import { gardenNamesFrom } from "@/components/balance/garden-names";
 import { parseBalanceRange } from "@/components/balance/balance-range";
+import { listBins } from "@/db/queries/bins";
 import { getGardenById } from "@/db/queries/gardens";
 import { loadGardenInputs } from "@/db/queries/garden-inputs";
 import { requirePageMember } from "@/lib/auth/page-session";
@@ -23,7 +24,11 @@ export default async function BalancePage({
   const today = todayIn(garden.timeZone);
   const range = parseBalanceRange(await searchParams, today);
   // Names for the engine's ids; the figures themselves come from the balance API.
-  const names = gardenNamesFrom(await loadGardenInputs({ gardenId, asOf: today }));
+  const [inputs, bins] = await Promise.all([
+    loadGardenInputs({ gardenId, asOf: today }),
+    listBins({ gardenId }),
+  ]);
+  const names = gardenNamesFrom(inputs, bins);
   return (
     <BalanceView
       gardenId={gardenId}

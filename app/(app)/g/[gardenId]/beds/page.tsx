@@ -61,7 +61,33 @@ export default async function BedsPage({
 
   return (
     <>
-      <h1 className="text-3xl">Beds and containers</h1>
+      <header className="flex flex-wrap items-end justify-between gap-3">
+        <h1 className="text-3xl">Beds and containers</h1>
+        <div className="flex flex-wrap gap-2">
+          {canEdit ? (
+            <Link
+              href={`/g/${gardenId}/beds/import`}
+              className={buttonStyles({ variant: "secondary", size: "sm" })}
+            >
+              Import from CSV
+            </Link>
+          ) : null}
+          <Link
+            href={`/g/${gardenId}/crops`}
+            className={buttonStyles({ variant: "ghost", size: "sm" })}
+          >
+            Crops
+          </Link>
+          {total > 0 ? (
+            <a
+              href={`/api/gardens/${gardenId}/beds/export`}
+              className={buttonStyles({ variant: "ghost", size: "sm" })}
+            >
+              Download as CSV
+            </a>
+          ) : null}
+        </div>
+      </header>
       {total === 0 && !filtered ? (
         <EmptyState
           title="No beds or containers yet"

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { loadBinPlan } from "@/components/bins/load-bin-plan";
+import { loadBinPlan } from "@/db/queries/bin-plan";
 import { Badge, buttonStyles, Card, CardBody, EmptyState } from "@/components/ui";
 import { listBins } from "@/db/queries/bins";
 import { getGardenById } from "@/db/queries/gardens";

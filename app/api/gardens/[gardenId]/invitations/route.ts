@@ -1,9 +1,14 @@
 import { z } from "zod";
-import { createInvitation, listOpenInvitations } from "@/db/queries/invitations";
+import {
+  createInvitation,
+  findInviteeStanding,
+  listOpenInvitations,
+} from "@/db/queries/invitations";
 import { requireRole } from "@/lib/auth/require-role";
 import { consumeLimits, INVITE_REFUSAL, limits } from "@/lib/auth/throttle";
 import { createLinkToken } from "@/lib/auth/tokens";
 import { appBaseUrl } from "@/lib/app-url";
+import { AppError } from "@/lib/errors";
 import { parseJson, parseParams, route, refuseOtherMethods } from "@/lib/http";
 import { deliverInvitation } from "@/lib/invitations";
 import { inviteSchema } from "@/lib/validation/garden";
@@ -21,6 +26,21 @@ export const POST = route<Params>(async (request, { params }) => {
   const { gardenId } = await parseParams(request, params, paramsSchema);
   const member = await requireRole(request, gardenId, "owner");
   const input = await parseJson(request, inviteSchema);
+  // Before anything is written: without a public address the mail's link cannot be made.
+  const baseUrl = appBaseUrl();
+  // A member needs a role change, not an invitation; an open invitation needs "Resend"
+  // (which keeps the per-address mail limit), not a second link.
+  const standing = await findInviteeStanding({ gardenId, email: input.email });
+  if (standing && "member" in standing) {
+    throw new AppError("conflict:already_member", "They are already a member of this garden.", {
+      email: "Already a member of this garden: change their role in the member list instead.",
+    });
+  }
+  if (standing) {
+    throw new AppError("conflict:already_invited", "They already have an open invitation.", {
+      email: "Already invited: resend that invitation instead of making a second one.",
+    });
+  }
   // Per invited address first, so sends it refuses do not use up the garden's allowance.
   await consumeLimits(
     [limits.inviteEmail(input.email), limits.inviteGarden(gardenId)],
@@ -37,7 +57,7 @@ export const POST = route<Params>(async (request, { params }) => {
     invitation,
     token,
     inviter: member.user,
-    baseUrl: appBaseUrl(),
+    baseUrl,
   });
   return Response.json(
     {

@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { BedActions } from "@/components/beds/bed-actions";
 import { BedDemandTable } from "@/components/beds/bed-demand-table";
 import { bedSize } from "@/components/beds/bed-list";
 import { PlantingItem } from "@/components/plantings/planting-item";
@@ -8,7 +9,7 @@ import { QuickPlantForm } from "@/components/plantings/quick-plant-form";
 import { Card, CardBody, CardHeader, CardTitle, EmptyState } from "@/components/ui";
 import { getBedDemand } from "@/db/queries/bed-demand";
 import { todayIn } from "@/lib/garden-today";
-import { getBedById } from "@/db/queries/beds";
+import { bedHasLoggedFeedings, getBedById } from "@/db/queries/beds";
 import { getGardenById } from "@/db/queries/gardens";
 import { listPlantings } from "@/db/queries/plantings";
 import { requirePageMember } from "@/lib/auth/page-session";
@@ -16,6 +17,7 @@ import { roleAtLeast } from "@/lib/auth/roles";
 import { formatDay } from "@/lib/format";
 import { PreHarvestCaution } from "@/components/balance/feeding-cautions";
 import { listBins } from "@/db/queries/bins";
+import { rateCutFromSearch, ruleFormValues } from "@/lib/plantings/rule-form-values";
 import { describeRule } from "@/lib/plantings/rule-words";
 import { bedIdParamsSchema } from "@/lib/validation/bed";
 
@@ -23,8 +25,10 @@ export const metadata: Metadata = { title: "Bed" };
 
 export default async function BedPage({
   params,
+  searchParams,
 }: {
   params: Promise<{ gardenId: string; bedId: string }>;
+  searchParams: Promise<Record<string, string | string[] | undefined>>;
 }) {
   const parsed = bedIdParamsSchema.safeParse(await params);
   if (!parsed.success) notFound();
@@ -37,14 +41,22 @@ export default async function BedPage({
   if (!garden || !bed) notFound();
   const system = garden.unitSystem;
   const today = todayIn(garden.timeZone);
-  const [{ plantings }, demand, bins] = await Promise.all([
+  const [{ plantings }, demand, hasLog, bins] = await Promise.all([
     listPlantings({ gardenId, query: { bedId, limit: 200, offset: 0 } }),
     getBedDemand({ gardenId, bedId }),
+    bedHasLoggedFeedings({ gardenId, bedId }),
     listBins({ gardenId }),
   ]);
   // Stock from a manure-fed bin waits out the pre-harvest interval on food crops: say so here.
   const manureFed = bins.some((b) => b.manureFeedstock && !b.retiredOn);
   const canEdit = roleAtLeast(member.role, "grower");
+  // The Balance's rate cut (RULES.md URL contract): ?planting={id}&cut={percent}.
+  const cut = canEdit
+    ? rateCutFromSearch(
+        await searchParams,
+        plantings.map((p) => p.id),
+      )
+    : null;
   const views = plantings.map((p) => ({
     id: p.id,
     title: `${p.plantCount} ${p.cropName}`,
@@ -59,6 +71,15 @@ export default async function BedPage({
     plantedOn: p.plantedOn,
     ruleWords: p.effectiveRules.map((r) => describeRule(r, system)).join("; "),
     ruleSource: p.ruleSource,
+    ruleValues: ruleFormValues(p.effectiveRule, system),
+    ruleCount: p.effectiveRules.length,
+    rateCut:
+      cut?.plantingId === p.id
+        ? {
+            percent: cut.cutPercent,
+            values: ruleFormValues(p.effectiveRule, system, cut.cutPercent),
+          }
+        : undefined,
   }));
 
   return (
@@ -79,6 +100,9 @@ export default async function BedPage({
         </p>
         {bed.notes ? <p>{bed.notes}</p> : null}
       </header>
+      {canEdit && !bed.archivedOn ? (
+        <BedActions gardenId={gardenId} bed={bed} unitSystem={system} hasLog={hasLog} />
+      ) : null}
       <section aria-labelledby="plantings-title" className="flex flex-col gap-3">
         <h2 id="plantings-title" className="text-2xl">
           Plantings
@@ -90,6 +114,7 @@ export default async function BedPage({
                 key={v.id}
                 gardenId={gardenId}
                 planting={v}
+                rateCut={v.rateCut}
                 canEdit={canEdit}
                 today={today}
                 unitSystem={system}

@@ -1,27 +1,37 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
+import { notFound, redirect } from "next/navigation";
 import { BinCautions } from "@/components/bins/bin-cautions";
 import { BinForecastChart } from "@/components/bins/bin-forecast-chart";
 import { BinSummary } from "@/components/bins/bin-summary";
 import { BinWork } from "@/components/bins/bin-work";
-import { loadBinPlan } from "@/components/bins/load-bin-plan";
+import { loadBinPlan } from "@/db/queries/bin-plan";
 import { TrayStack } from "@/components/bins/tray-stack";
 import { trayStack } from "@/components/bins/tray-states";
-import { buttonStyles, Card, CardBody, CardHeader, CardTitle } from "@/components/ui";
-import { getBinById, listMoveTargets } from "@/db/queries/bins";
+import {
+  buttonStyles,
+  Card,
+  CardBody,
+  CardHeader,
+  CardTitle,
+  textLinkStyles,
+} from "@/components/ui";
+import { getBinById, getLoggedWorms, listMoveTargets } from "@/db/queries/bins";
 import { getGardenById } from "@/db/queries/gardens";
 import { requirePageMember } from "@/lib/auth/page-session";
 import { roleAtLeast } from "@/lib/auth/roles";
 import { dflt, trayInsideVolumeL } from "@/lib/engine";
 import { toDisplayAmount } from "@/lib/format-quantity";
+import { editBinPrefill, wantsEditForm, type SearchParams } from "@/lib/validation/bin-prefill";
 
 export const metadata: Metadata = { title: "Bin" };
 
 export default async function BinPage({
   params,
+  searchParams,
 }: {
   params: Promise<{ gardenId: string; binId: string }>;
+  searchParams: Promise<SearchParams>;
 }) {
   const { gardenId, binId } = await params;
   const member = await requirePageMember(gardenId, "viewer");
@@ -30,11 +40,18 @@ export default async function BinPage({
     getBinById({ gardenId, binId }),
   ]);
   if (!garden || !bin) notFound();
+  // The Balance's "extra trays" link (?edit=1&trays=n) opens the edit form; below a grower it is just the bin page.
+  const search = await searchParams;
+  if (wantsEditForm(search) && roleAtLeast(member.role, "grower")) {
+    const { trayCount } = editBinPrefill(search);
+    redirect(`/g/${gardenId}/bins/${bin.id}/edit${trayCount ? `?trays=${trayCount}` : ""}`);
+  }
   const system = garden.unitSystem;
   const [{ plan, today }, targets] = await Promise.all([
     loadBinPlan(gardenId, garden.timeZone),
     listMoveTargets({ userId: member.user.id }),
   ]);
+  const logged = await getLoggedWorms({ gardenId, binId: bin.id, on: today });
   const supply = plan.bins.find((b) => b.binId === bin.id);
   const trays = trayStack({
     startedOn: bin.startedOn,
@@ -60,8 +77,8 @@ export default async function BinPage({
     <>
       <div className="flex flex-wrap items-center justify-between gap-3">
         <div>
-          <Link href={`/g/${gardenId}/bins`} className="underline">
-            Bins
+          <Link href={`/g/${gardenId}/bins`} className={textLinkStyles}>
+            ← All bins
           </Link>
           <h1 className="text-3xl">{bin.name}</h1>
         </div>
@@ -90,6 +107,7 @@ export default async function BinPage({
           today={today}
           system={system}
           volumeL={volumeL}
+          loggedWorms={logged.worms}
         />
       </div>
       <Card>

@@ -40,8 +40,9 @@ export const PATCH = route<Params>(async (request, { params }) => {
     notes: current.notes,
   };
   const { rule, rules, ...rest } = patch;
-  // Dates are checked on the merged planting: moving the end alone before the start is refused.
-  const merged = createPlantingSchema.safeParse({ ...stored, ...rest });
+  // Dates are checked on the merged planting: moving the end alone before the start is refused,
+  // and so is a new rule that gives no dates from the planting day.
+  const merged = createPlantingSchema.safeParse({ ...stored, ...rest, rule, rules });
   if (!merged.success) throw validationError(merged.error);
   const planting = await updatePlanting({
     gardenId,

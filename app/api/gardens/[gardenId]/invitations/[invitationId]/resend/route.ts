@@ -13,6 +13,8 @@ const paramsSchema = z.object({ gardenId: z.uuid(), invitationId: z.uuid() });
 export const POST = route<z.infer<typeof paramsSchema>>(async (request, { params }) => {
   const { gardenId, invitationId } = await parseParams(request, params, paramsSchema);
   const member = await requireRole(request, gardenId, "owner");
+  // Before the old link is replaced: without a public address the new one cannot be made.
+  const baseUrl = appBaseUrl();
   const existing = await getInvitation({ gardenId, invitationId });
   if (!existing || existing.acceptedAt || existing.revokedAt)
     throw new AppError("not_found:invitation");
@@ -28,7 +30,7 @@ export const POST = route<z.infer<typeof paramsSchema>>(async (request, { params
     invitation,
     token,
     inviter: member.user,
-    baseUrl: appBaseUrl(),
+    baseUrl,
   });
   return Response.json({
     mailSent,
