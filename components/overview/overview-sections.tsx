@@ -215,7 +215,10 @@ export function FirstSteps({
     <OverviewCard title="First steps" testId="first-steps">
       <ol className="ml-5 flex list-decimal flex-col gap-1">
         <li className={hasBins ? done : undefined}>
-          <Link href={`/g/${gardenId}/bins/new`} className="inline-flex min-h-6 items-center underline">
+          <Link
+            href={`/g/${gardenId}/bins/new`}
+            className="inline-flex min-h-6 items-center underline"
+          >
             Add your worm bin
           </Link>
           : its tray size, how many trays, when it started.
