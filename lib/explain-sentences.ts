@@ -3,8 +3,14 @@
 // grower can see where a number came from. Pure: no React, no I/O.
 import type { ExplainValue, Explanation } from "@/lib/engine";
 import { formatDay } from "@/lib/format";
-import { formatAmount, formatDensity, formatTagged, type SiTag } from "@/lib/format-quantity";
-import type { UnitSystem } from "@/lib/units";
+import {
+  formatAmount,
+  formatDensity,
+  formatTagged,
+  roundForDisplay,
+  type SiTag,
+} from "@/lib/format-quantity";
+import { displayUnits, fromSi, toSi, unitLabel, type UnitSystem } from "@/lib/units";
 
 export interface ExplainContext {
   system: UnitSystem;
@@ -31,8 +37,21 @@ export function explainValue(value: ExplainValue | undefined, ctx: ExplainContex
     return /^\d{4}-\d{2}$/.test(value.text)
       ? formatDay(`${value.text}-01`, { month: "long", year: "numeric" })
       : value.text;
-  return value.source;
+  return unitDefaults[value.default]?.(ctx.system) ?? value.source;
 }
+
+/**
+ * Engine defaults whose wording carries a unit: said in the garden's units here,
+ * since the engine's own source text is in US units (e.g. "1 ft² per lb food per week").
+ */
+const unitDefaults: Partial<Record<string, (system: UnitSystem) => string>> = {
+  surfaceFt2PerLbFoodPerWeek: (system) => {
+    const { area, castingsMass: mass } = displayUnits(system);
+    const m2PerKg = toSi(1, "ft2") / toSi(1, "lb"); // 1 ft² per lb (NIST HB 44 factors)
+    const shown = roundForDisplay(fromSi(m2PerKg * toSi(1, mass), area));
+    return `${shown} ${unitLabel(area)} of tray surface per ${unitLabel(mass)} of food a week`;
+  },
+};
 
 function num(value: ExplainValue | undefined): number {
   return value && "unit" in value ? value.value : NaN;

@@ -1,5 +1,14 @@
 import type { ExplainValue } from "@/lib/engine";
-import { displayUnits, fromSi, toSi, unitLabel, type UnitName, type UnitSystem } from "@/lib/units";
+import {
+  celsiusToFahrenheit,
+  displayUnits,
+  fromSi,
+  temperatureLabel,
+  toSi,
+  unitLabel,
+  type UnitName,
+  type UnitSystem,
+} from "@/lib/units";
 
 // The one place an SI quantity becomes words on a screen, in a CSV or in an
 // e-mail, in the garden's units. Rounding follows how growers measure: a scoop
@@ -128,8 +137,8 @@ export function formatAmount(si: number, kind: AmountKind, system: UnitSystem): 
 /** A temperature given in °C, shown in °F for US gardens. Whole degrees. */
 export function formatTemperature(celsius: number, system: UnitSystem): string {
   if (!Number.isFinite(celsius)) return "—";
-  // °F = °C × 9/5 + 32 (NIST SP 811, B.8).
-  return system === "us" ? `${Math.round((celsius * 9) / 5 + 32)} °F` : `${Math.round(celsius)} °C`;
+  const degrees = system === "us" ? celsiusToFahrenheit(celsius) : celsius;
+  return `${Math.round(degrees)} ${temperatureLabel(system)}`;
 }
 
 /** A share as a whole percentage, e.g. 0.784 → "78 %". */

@@ -210,3 +210,18 @@ export function displayLiquid(
     ? { value: large, unit: u.liquid }
     : { value: fromSi(litres, u.liquidSmall, "litres"), unit: u.liquidSmall };
 }
+
+/** Degrees Fahrenheit → Celsius: °C = (°F − 32) × 5/9 (NIST SP 811, B.8). */
+export function fahrenheitToCelsius(fahrenheit: number): number {
+  return ((fahrenheit - 32) * 5) / 9;
+}
+
+/** Degrees Celsius → Fahrenheit: °F = °C × 9/5 + 32 (NIST SP 811, B.8). */
+export function celsiusToFahrenheit(celsius: number): number {
+  return (celsius * 9) / 5 + 32;
+}
+
+/** The temperature scale a garden reads: "°F" for US customary, "°C" for metric. */
+export function temperatureLabel(system: UnitSystem): string {
+  return system === "us" ? "°F" : "°C";
+}

@@ -1,21 +1,13 @@
-// Cautions the product shows beside liquid feedings and pre-harvest blocks
-// (PRODUCT.md "Cautions"; Duffy et al., USDA-ARS on molasses; 7 CFR 205.203(c)(1)).
+import { CautionLine } from "@/components/cautions/caution-note";
+import { liquidsCaution, preHarvestCaution } from "@/lib/cautions";
+
+// Shown under feedings of leachate or tea, and under feedings held back before
+// harvest (worded in lib/cautions.ts).
 
 export function LiquidCaution() {
-  return (
-    <p className="text-sm text-clay-800" data-testid="liquid-caution">
-      Leachate and tea: pour as a soil drench, not on the edible leaves of greens near harvest, and
-      never add molasses (it feeds harmful bacteria). Follow your local codes.
-    </p>
-  );
+  return <CautionLine caution={liquidsCaution()} />;
 }
 
 export function PreHarvestCaution() {
-  return (
-    <p className="text-sm text-clay-800" data-testid="pre-harvest-caution">
-      Stock from a bin fed manure is kept off edible crops for 120 days before harvest when the
-      edible part touches the soil, and 90 days otherwise (USDA organic rule, 7 CFR 205.203). Follow
-      your local codes.
-    </p>
-  );
+  return <CautionLine caution={preHarvestCaution()} />;
 }

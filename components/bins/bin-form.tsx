@@ -79,6 +79,9 @@ export function BinForm({
   const queryClient = useQueryClient();
   const side = system === "us" ? "in" : "cm";
   const mass = system === "us" ? "lb" : "kg";
+  // The engine's worms per lb, told per the garden's mass unit, in round hundreds.
+  const wormsPerMass =
+    Math.round((DEFAULTS.wormsPerLb.value * toSi(1, mass)) / toSi(1, "lb") / 100) * 100;
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [formError, setFormError] = useState<string | null>(null);
   const { register, handleSubmit, control, formState } = useForm<Values>({
@@ -243,7 +246,9 @@ export function BinForm({
         <Field label="Worms given as">
           <Select {...register("wormMode")}>
             <option value="count">a count</option>
-            <option value="weight">a weight ({mass}, about 1,000 per lb)</option>
+            <option value="weight">
+              a weight ({mass}, about {wormsPerMass.toLocaleString("en-US")} worms per {mass})
+            </option>
           </Select>
         </Field>
       </div>

@@ -4,12 +4,14 @@ import { useQueryClient } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm, useWatch } from "react-hook-form";
+import { CautionLine } from "@/components/cautions/caution-note";
 import { FormMessage } from "@/components/forms/form-message";
 import { Alert, Button, Field, Input, Select, Textarea, useToast } from "@/components/ui";
 import { apiFetch, ApiError } from "@/lib/api-client";
+import { liftingCaution } from "@/lib/cautions";
 import { PhotoUpload } from "./photo-upload";
 import { queryKeys } from "@/lib/query-keys";
-import { toSi, type UnitSystem } from "@/lib/units";
+import { fahrenheitToCelsius, temperatureLabel, toSi, type UnitSystem } from "@/lib/units";
 import {
   binEventKindLabels,
   foodKinds,
@@ -108,8 +110,8 @@ export function LogEntryForm({
             : v.kind === "observation"
               ? {
                   ...base,
-                  // °C = (°F − 32) × 5/9 (NIST SP 811, B.8).
-                  temperatureC: tempC === undefined ? null : us ? ((tempC - 32) * 5) / 9 : tempC,
+                  temperatureC:
+                    tempC === undefined ? null : us ? fahrenheitToCelsius(tempC) : tempC,
                   moisturePercent: n(v.moisture) ?? null,
                   wormCount: n(v.worms) ?? null,
                 }
@@ -174,12 +176,15 @@ export function LogEntryForm({
         </Field>
       </div>
       {kind === "tray-harvested" ? (
-        <Field label="Measured by">
-          <Select {...register("harvestBy")}>
-            <option value="weight">weight</option>
-            <option value="volume">volume</option>
-          </Select>
-        </Field>
+        <>
+          <Field label="Measured by">
+            <Select {...register("harvestBy")}>
+              <option value="weight">weight</option>
+              <option value="volume">volume</option>
+            </Select>
+          </Field>
+          <CautionLine caution={liftingCaution(system)} />
+        </>
       ) : null}
       {kind === "food-added" || kind === "tray-harvested" || kind === "liquid-drained" ? (
         <Field label={amountLabel} error={err("foodKg", "castingsKg", "castingsL", "litres")}>
@@ -214,7 +219,7 @@ export function LogEntryForm({
       ) : null}
       {kind === "observation" ? (
         <div className="grid grid-cols-2 gap-3 sm:grid-cols-3">
-          <Field label={`Temperature (°${us ? "F" : "C"})`} error={err("temperatureC")}>
+          <Field label={`Temperature (${temperatureLabel(system)})`} error={err("temperatureC")}>
             <Input type="number" inputMode="decimal" step="any" {...register("temperature")} />
           </Field>
           <Field label="Moisture (%)" error={err("moisturePercent")}>

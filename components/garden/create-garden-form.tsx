@@ -5,18 +5,18 @@ import { FormMessage } from "@/components/forms/form-message";
 import { useApiForm } from "@/components/forms/use-api-form";
 import { Button } from "@/components/ui";
 import { apiFetch } from "@/lib/api-client";
+import { localTimeZone } from "@/lib/time-zones";
 import { createGardenSchema } from "@/lib/validation/garden";
 import { GardenFields } from "./garden-fields";
 
 export function CreateGardenForm() {
   const router = useRouter();
-  const year = new Date().getFullYear();
   const { form, formError, submit } = useApiForm(createGardenSchema, {
     name: "",
-    timeZone: Intl.DateTimeFormat().resolvedOptions().timeZone || "UTC",
+    timeZone: localTimeZone(),
     unitSystem: "us",
-    lastSpringFrost: `${year}-04-15`,
-    firstFallFrost: `${year}-10-15`,
+    lastSpringFrost: "04-15",
+    firstFallFrost: "10-15",
     location: "",
   });
 
@@ -34,7 +34,11 @@ export function CreateGardenForm() {
       aria-label="Start a garden"
     >
       <FormMessage message={formError} />
-      <GardenFields register={form.register} errors={form.formState.errors} />
+      <GardenFields
+        register={form.register}
+        control={form.control}
+        errors={form.formState.errors}
+      />
       <Button type="submit" pending={form.formState.isSubmitting}>
         Start this garden
       </Button>

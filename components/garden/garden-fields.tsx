@@ -1,33 +1,19 @@
 "use client";
 
-import type { FieldErrors, UseFormRegister } from "react-hook-form";
+import type { Control, FieldErrors, UseFormRegister } from "react-hook-form";
 import { Field, Input, Select } from "@/components/ui";
 import type { CreateGardenInput } from "@/lib/validation/garden";
-
-// A short list covers most growers; anything Intl knows is accepted by the API.
-const commonZones = [
-  "America/New_York",
-  "America/Chicago",
-  "America/Denver",
-  "America/Los_Angeles",
-  "America/Anchorage",
-  "Pacific/Honolulu",
-  "America/Toronto",
-  "America/Vancouver",
-  "Europe/London",
-  "Europe/Dublin",
-  "Europe/Berlin",
-  "Australia/Sydney",
-  "Pacific/Auckland",
-  "UTC",
-];
+import { MonthDayField } from "./month-day-field";
+import { TimeZoneField } from "./time-zone-field";
 
 /** The fields shared by "start a garden" and the garden's settings. */
 export function GardenFields({
   register,
+  control,
   errors,
 }: {
   register: UseFormRegister<CreateGardenInput>;
+  control: Control<CreateGardenInput>;
   errors: FieldErrors<CreateGardenInput>;
 }) {
   return (
@@ -36,19 +22,7 @@ export function GardenFields({
         <Input autoComplete="off" {...register("name")} />
       </Field>
       <div className="grid gap-4 sm:grid-cols-2">
-        <Field
-          label="Time zone"
-          hint="“Today” and every date in the plan follow this clock."
-          error={errors.timeZone?.message}
-        >
-          <Select {...register("timeZone")}>
-            {commonZones.map((z) => (
-              <option key={z} value={z}>
-                {z.replace(/_/g, " ")}
-              </option>
-            ))}
-          </Select>
-        </Field>
+        <TimeZoneField registration={register("timeZone")} error={errors.timeZone?.message} />
         <Field label="Units" error={errors.unitSystem?.message}>
           <Select {...register("unitSystem")}>
             {/* Short enough to show whole in a 375 px wide phone's closed select. */}
@@ -56,20 +30,20 @@ export function GardenFields({
             <option value="metric">Metric (kg, L, m²)</option>
           </Select>
         </Field>
-        <Field
+        <MonthDayField
+          control={control}
+          name="lastSpringFrost"
           label="Last spring frost"
-          hint="Usual date; feeding starts after it."
+          hint="The usual day; feeding starts after it each year."
           error={errors.lastSpringFrost?.message}
-        >
-          <Input type="date" {...register("lastSpringFrost")} />
-        </Field>
-        <Field
+        />
+        <MonthDayField
+          control={control}
+          name="firstFallFrost"
           label="First fall frost"
-          hint="Outdoor feeding stops here."
+          hint="The usual day; outdoor feeding stops here each year."
           error={errors.firstFallFrost?.message}
-        >
-          <Input type="date" {...register("firstFallFrost")} />
-        </Field>
+        />
       </div>
       <Field
         label="Where is it?"

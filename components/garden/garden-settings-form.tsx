@@ -34,7 +34,11 @@ export function GardenSettingsForm({
       aria-label="Garden settings"
     >
       <FormMessage message={formError} />
-      <GardenFields register={form.register} errors={form.formState.errors} />
+      <GardenFields
+        register={form.register}
+        control={form.control}
+        errors={form.formState.errors}
+      />
       <Button
         type="submit"
         pending={form.formState.isSubmitting}

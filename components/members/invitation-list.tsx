@@ -4,6 +4,7 @@ import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { Badge, Button, EmptyState, useToast } from "@/components/ui";
 import { apiFetch, ApiError } from "@/lib/api-client";
 import { roleLabels, type Role } from "@/lib/auth/roles";
+import { formatDateTime } from "@/lib/format";
 import { queryKeys } from "@/lib/query-keys";
 
 type Invitation = {
@@ -14,7 +15,16 @@ type Invitation = {
   mailStatus: "pending" | "sent" | "failed";
 };
 
-export function InvitationList({ gardenId, initial }: { gardenId: string; initial: Invitation[] }) {
+export function InvitationList({
+  gardenId,
+  timeZone,
+  initial,
+}: {
+  gardenId: string;
+  /** The garden's zone: the expiry reads as in the invitation e-mail. */
+  timeZone: string;
+  initial: Invitation[];
+}) {
   const toast = useToast();
   const queryClient = useQueryClient();
   const key = queryKeys.invitations(gardenId);
@@ -67,7 +77,7 @@ export function InvitationList({ gardenId, initial }: { gardenId: string; initia
           <Badge>{roleLabels[inv.role]}</Badge>
           {inv.mailStatus === "failed" ? <Badge tone="danger">E-mail not sent</Badge> : null}
           <span className="text-sm text-soil-700">
-            until {new Date(inv.expiresAt).toLocaleDateString()}
+            until {formatDateTime(inv.expiresAt, timeZone)}
           </span>
           <span className="ml-auto flex gap-2">
             <Button

@@ -215,13 +215,16 @@ export function FirstSteps({
     <OverviewCard title="First steps" testId="first-steps">
       <ol className="ml-5 flex list-decimal flex-col gap-1">
         <li className={hasBins ? done : undefined}>
-          <Link href={`/g/${gardenId}/bins/new`} className="underline">
+          <Link
+            href={`/g/${gardenId}/bins/new`}
+            className="inline-flex min-h-6 items-center underline"
+          >
             Add your worm bin
           </Link>
           : its tray size, how many trays, when it started.
         </li>
         <li className={hasBeds ? done : undefined}>
-          <Link href={`/g/${gardenId}/beds`} className="underline">
+          <Link href={`/g/${gardenId}/beds`} className="inline-flex min-h-6 items-center underline">
             Add a bed or a container
           </Link>
           , and what grows in it.

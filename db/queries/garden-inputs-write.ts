@@ -70,11 +70,9 @@ function newId(): string {
   return `${h.slice(0, 8)}-${h.slice(8, 12)}-${h.slice(12, 16)}-${h.slice(16, 20)}-${h.slice(20)}`;
 }
 
-/** A frost date as the gardens table keeps it: the month and day in the year of `asOf`. */
-function frostDate(md: MonthDay, asOf: string): string {
-  // 29 February only exists in leap years; keep it in 2024 rather than lose the day.
-  const year = md.month === 2 && md.day === 29 ? "2024" : asOf.slice(0, 4);
-  return `${year}-${String(md.month).padStart(2, "0")}-${String(md.day).padStart(2, "0")}`;
+/** A frost day as the gardens table keeps it: "MM-DD", no year. */
+function frostDay(md: MonthDay): string {
+  return `${String(md.month).padStart(2, "0")}-${String(md.day).padStart(2, "0")}`;
 }
 
 /**
@@ -104,15 +102,15 @@ export async function insertGardenInputs(
     if (!id) throw new Error(`garden inputs name an unknown id "${old}"`);
     return id;
   };
-  const { settings, asOf } = inputs;
+  const { settings } = inputs;
 
   await tx.insert(gardens).values({
     id: gardenId,
     name: inputs.garden.name,
     timeZone: settings.timeZone,
     unitSystem: settings.unitSystem,
-    lastSpringFrost: frostDate(settings.lastSpringFrost, asOf),
-    firstFallFrost: frostDate(settings.firstFallFrost, asOf),
+    lastSpringFrost: frostDay(settings.lastSpringFrost),
+    firstFallFrost: frostDay(settings.firstFallFrost),
     location: location ?? records?.location ?? null,
     castingsPricePerKg: settings.castingsPricePerKg,
     shelfLifeDays: settings.shelfLifeDays,

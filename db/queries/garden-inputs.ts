@@ -26,8 +26,9 @@ import { rulesByOwner } from "./feeding-rules-write";
 // Rows come in the order they were written (created_at, then the time-ordered
 // ids of an import), so a garden plans in the same order as the file it came from.
 
-function monthDay(date: string): MonthDay {
-  return { month: Number(date.slice(5, 7)), day: Number(date.slice(8, 10)) };
+/** A frost day as the gardens table keeps it, "MM-DD", as the engine takes it. */
+function monthDay(md: string): MonthDay {
+  return { month: Number(md.slice(0, 2)), day: Number(md.slice(3, 5)) };
 }
 
 function byId<T extends { id: string }>(rows: T[]): Map<string, T> {

@@ -1,13 +1,4 @@
-import {
-  date,
-  index,
-  pgTable,
-  primaryKey,
-  smallint,
-  text,
-  timestamp,
-  uuid,
-} from "drizzle-orm/pg-core";
+import { index, pgTable, primaryKey, smallint, text, timestamp, uuid } from "drizzle-orm/pg-core";
 import { users } from "./accounts";
 import { createdAt, id, quantity } from "./columns";
 import { mailStatusEnum, roleEnum, unitSystemEnum } from "./enums";
@@ -17,8 +8,9 @@ export const gardens = pgTable("gardens", {
   name: text("name").notNull(),
   timeZone: text("time_zone").notNull(),
   unitSystem: unitSystemEnum("unit_system").notNull().default("us"),
-  lastSpringFrost: date("last_spring_frost").notNull(),
-  firstFallFrost: date("first_fall_frost").notNull(),
+  // The usual frost days, month and day "MM-DD" with no year: the plan applies them every year.
+  lastSpringFrost: text("last_spring_frost_md").notNull(),
+  firstFallFrost: text("first_fall_frost_md").notNull(),
   location: text("location"),
   // Engine parameters of the whole garden; null = the engine's default.
   // Purchase price of bought castings, used to value surplus (per kg in SI).

@@ -8,7 +8,8 @@ import { addDays } from "@/lib/engine";
 
 /** The first fall frost (kept as month and day, applied to every year) on or after `day`. */
 export function nextFirstFallFrost(day: string, firstFallFrost: string): string {
-  const monthDay = firstFallFrost.slice(5);
+  // The gardens table keeps "MM-DD"; a full date (older callers) keeps its month and day.
+  const monthDay = firstFallFrost.slice(-5);
   const sameYear = `${day.slice(0, 4)}-${monthDay}`;
   return sameYear >= day ? sameYear : `${Number(day.slice(0, 4)) + 1}-${monthDay}`;
 }

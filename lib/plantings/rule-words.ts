@@ -1,6 +1,6 @@
 import type { FeedingRuleInput } from "@/lib/engine";
 import { formatAmount } from "@/lib/format-quantity";
-import type { UnitSystem } from "@/lib/units";
+import { displayUnits, toSi, unitLabel, type UnitSystem } from "@/lib/units";
 import { describeRrule } from "./recurrence";
 
 // A feeding rule in the words a grower would say it: "1 cup castings per plant,
@@ -19,10 +19,6 @@ const MATERIAL_WORDS: Record<FeedingRuleInput["material"], string> = {
   tea: "worm tea",
 };
 
-// NIST Handbook 44 App. C: 1 ft² = 0.09290304 m²; 1 gal = 3.785411784 L.
-const FT2_M2 = 0.09290304;
-const GAL_L = 3.785411784;
-
 export function describeAmount(rule: FeedingRuleInput, system: UnitSystem): string {
   const material = MATERIAL_WORDS[rule.material];
   const kind =
@@ -38,11 +34,11 @@ export function describeAmount(rule: FeedingRuleInput, system: UnitSystem): stri
       // 1 L over 1 m² is a 1 mm layer: castings by volume per area read as a depth.
       if (rule.measure === "volume" && rule.material === "castings")
         return `${material} ${formatAmount(rule.amount / 1000, "depth", system)} deep`;
-      const area = system === "us" ? FT2_M2 : 1;
-      return `${formatAmount(rule.amount * area, kind, system)} ${material} per ${system === "us" ? "ft²" : "m²"}`;
+      const area = displayUnits(system).area;
+      return `${formatAmount(rule.amount * toSi(1, area), kind, system)} ${material} per ${unitLabel(area)}`;
     }
     case "per-container-volume": {
-      const vol = system === "us" ? GAL_L : 1;
+      const vol = toSi(1, system === "us" ? "gal" : "L");
       return `${formatAmount(rule.amount * vol, kind, system)} ${material} per ${system === "us" ? "gallon" : "litre"} of pot`;
     }
     case "percent-of-mix":

@@ -1,5 +1,6 @@
 import { defaultRuleFor, type FeederClass, type FeedingRuleInput } from "@/lib/engine";
 import { findListedCrop } from "@/lib/crops/crop-list";
+import { toSi } from "@/lib/units";
 
 // Which rule a planting is fed by, and crop facts the planting form needs.
 
@@ -35,8 +36,6 @@ export function effectiveRules(
   return { rules: [defaultRuleInput(feederClass)], source: "default" };
 }
 
-const INCH_M = 0.0254; // NIST Handbook 44 App. C: 1 in = 2.54 cm exactly
-
 /**
  * Spacing and days to harvest: the crop's own (a garden's numbers), else the
  * crop list's (common practice, from memory), else unknown.
@@ -48,7 +47,7 @@ export function cropFacts(crop: {
 }): { spacingM: number | null; daysToHarvest: number | null } {
   const listed = findListedCrop(crop.name);
   return {
-    spacingM: crop.spacingM ?? (listed ? listed.spacingIn * INCH_M : null),
+    spacingM: crop.spacingM ?? (listed ? toSi(listed.spacingIn, "in") : null),
     daysToHarvest: crop.daysToHarvest ?? listed?.daysToHarvest ?? null,
   };
 }

@@ -20,16 +20,8 @@ export function wormCount(amount: WormAmountInput): number {
   return "count" in amount ? amount.count : Math.max(1, Math.round(kgToWorms(amount.kg)));
 }
 
-/** Today's calendar day in the garden's time zone, "YYYY-MM-DD". */
-export function todayIn(timeZone: string, now = new Date()): string {
-  // en-CA formats as YYYY-MM-DD.
-  return new Intl.DateTimeFormat("en-CA", {
-    timeZone,
-    year: "numeric",
-    month: "2-digit",
-    day: "2-digit",
-  }).format(now);
-}
+// Today in the garden's zone is worked out in one place; re-exported for the bin routes.
+export { todayIn } from "@/lib/garden-today";
 
 /** The PS 20 aid can refuse an outer size thinner than two boards: a 400 on the tray field. */
 export function trayBox(tray: Parameters<typeof insideBox>[0]) {

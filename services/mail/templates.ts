@@ -1,3 +1,4 @@
+import { formatDateTime } from "@/lib/format";
 import { requireHttpUrl, requireLine, requireText } from "./mail-input";
 
 export const PRODUCT_NAME = "Castline";
@@ -114,20 +115,6 @@ function requireDate(value: Date, field: string): Date {
     throw new Error(`${field} must be a valid date`);
   }
   return value;
-}
-
-function formatDateTime(value: Date, timeZone: string): string {
-  try {
-    return (
-      new Intl.DateTimeFormat("en-US", {
-        timeZone,
-        dateStyle: "long",
-        timeStyle: "short",
-      }).format(value) + ` (${timeZone})`
-    );
-  } catch {
-    throw new Error(`timeZone must be an IANA time zone name, got "${timeZone}"`);
-  }
 }
 
 export function invitationMail(input: {

@@ -171,7 +171,9 @@ describe("the bin log", () => {
       castingsKg: 40,
     });
     expect(res.status).toBe(400);
-    expect(res.json.error.fields.castingsKg).toContain(`max ${maxKg.toFixed(1)} kg`);
+    // A US garden hears it in pounds: 1 lb = 0.45359237 kg (NIST HB 44, App. C), whole pounds from 10 up.
+    expect(res.json.error.fields.castingsKg).toContain(`max ${Math.round(maxKg / 0.45359237)} lb`);
+    expect(res.json.error.fields.castingsKg).not.toMatch(/\bkg\b|\bL\b/);
     expect(await countRows("bin_events")).toBe(before);
     const byVolume = await logEvent("helper", made.id, {
       kind: "tray-harvested",

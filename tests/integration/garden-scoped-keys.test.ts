@@ -23,8 +23,8 @@ async function one(query: ReturnType<typeof sql>): Promise<string> {
 
 async function makeGarden(ids: Ids, name: string): Promise<void> {
   ids.garden =
-    await one(sql`insert into gardens (name, time_zone, last_spring_frost, first_fall_frost)
-    values (${name}, 'America/Chicago', '2026-04-15', '2026-10-20') returning id`);
+    await one(sql`insert into gardens (name, time_zone, last_spring_frost_md, first_fall_frost_md)
+    values (${name}, 'America/Chicago', '04-15', '10-20') returning id`);
   ids.crop =
     await one(sql`insert into crops (garden_id, name, feeder_class, edible, edible_touches_soil)
     values (${ids.garden}, 'Tomato', 'heavy', true, false) returning id`);

@@ -116,3 +116,30 @@ describe("tagged figures", () => {
     expect(formatDensity(0.7, "metric")).toBe("0.7 kg per litre");
   });
 });
+
+describe("a tray-surface warning in the garden's units", () => {
+  // Rule of thumb (common practice, PRODUCT.md): 1 ft² of tray surface per lb of food a week.
+  // In metric: 0.09290304 m² / 0.45359237 kg = 0.2048 m² per kg (NIST HB 44, App. C).
+  const warning = {
+    kind: "capacity-surface",
+    inputs: {
+      bin: { ref: "bin", id: "b1" },
+      month: { text: "2026-06" },
+      months: { unit: "count", value: 1 },
+      foodNeeded: { unit: "kg/week", value: 4.8 },
+      limit: { unit: "kg/week", value: 2 },
+      rule: { default: "surfaceFt2PerLbFoodPerWeek", source: "1 ft² per lb food per week" },
+    },
+  } as unknown as Explanation;
+
+  it("says the rule in m² per kg for a metric garden", () => {
+    const text = explain(warning, { system: "metric" }).sentences.join(" ");
+    expect(text).toContain("0.2 m² of tray surface per kg of food a week");
+    expect(text).not.toMatch(/ft²|\blb\b/);
+  });
+
+  it("and in ft² per lb for a US garden", () => {
+    const text = explain(warning, { system: "us" }).sentences.join(" ");
+    expect(text).toContain("1 ft² of tray surface per lb of food a week");
+  });
+});

@@ -2,10 +2,10 @@ import type { Page } from "playwright-core";
 
 export interface NewGarden {
   name: string;
-  /** An IANA zone offered in the form's list, e.g. "Europe/London". */
+  /** An IANA zone the form offers (typed, with suggestions), e.g. "Europe/London". */
   timeZone: string;
   units: "us" | "metric";
-  /** yyyy-mm-dd, the value format of <input type="date">. */
+  /** The usual frost days, "MM-DD" (a full "yyyy-mm-dd" keeps its month and day). */
   lastSpringFrost: string;
   firstFallFrost: string;
   location: string;
@@ -33,11 +33,19 @@ export class GardensPage {
   async startGarden(garden: NewGarden) {
     const form = this.startForm();
     await form.getByLabel("Garden name").fill(garden.name);
-    await form.getByLabel("Time zone").selectOption(garden.timeZone);
+    await form.getByLabel("Time zone").fill(garden.timeZone);
     await form.getByLabel("Units").selectOption(garden.units);
-    await form.getByLabel("Last spring frost").fill(garden.lastSpringFrost);
-    await form.getByLabel("First fall frost").fill(garden.firstFallFrost);
+    await this.pickMonthDay("Last spring frost", garden.lastSpringFrost);
+    await this.pickMonthDay("First fall frost", garden.firstFallFrost);
     await form.getByLabel("Where is it?").fill(garden.location);
     await form.getByRole("button", { name: "Start this garden" }).click();
+  }
+
+  /** Frost days are a month and a day select inside a group named by the field. */
+  private async pickMonthDay(field: string, value: string) {
+    const [month, day] = value.slice(-5).split("-").map(Number) as [number, number];
+    const group = this.startForm().getByRole("group", { name: field });
+    await group.getByLabel("Month").selectOption(String(month));
+    await group.getByLabel("Day").selectOption(String(day));
   }
 }

@@ -164,8 +164,8 @@ export function gardenInput(overrides: Record<string, unknown> = {}) {
     name: "Hollis Street Garden",
     timeZone: "America/Chicago",
     unitSystem: "us",
-    lastSpringFrost: "2026-04-15",
-    firstFallFrost: "2026-10-20",
+    lastSpringFrost: "04-15",
+    firstFallFrost: "10-20",
     location: "Hollis Street, plot 3",
     ...overrides,
   };

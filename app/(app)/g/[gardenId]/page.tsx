@@ -1,6 +1,5 @@
 import type { Metadata } from "next";
 import { Badge } from "@/components/ui";
-import { SafetyCautions } from "@/components/garden/safety-cautions";
 import { gardenNamesFrom } from "@/components/balance/garden-names";
 import { gardenStatus } from "@/components/overview/garden-status";
 import {
@@ -19,7 +18,7 @@ import { listLotStock } from "@/db/queries/lots";
 import { requirePageMember } from "@/lib/auth/page-session";
 import { roleLabels } from "@/lib/auth/roles";
 import { computePlan } from "@/lib/engine";
-import { formatDay } from "@/lib/format";
+import { formatMonthDay } from "@/lib/format";
 import { todayIn } from "@/lib/garden-today";
 
 export const metadata: Metadata = { title: "Overview" };
@@ -63,7 +62,8 @@ export default async function GardenOverviewPage({
         </h1>
         <p className="flex flex-wrap items-center gap-2 text-soil-700">
           <Badge tone="positive">{roleLabels[member.role]}</Badge>
-          Growing season {formatDay(garden.lastSpringFrost)} – {formatDay(garden.firstFallFrost)}
+          Growing season {formatMonthDay(garden.lastSpringFrost)} –{" "}
+          {formatMonthDay(garden.firstFallFrost)}
           {garden.location ? ` · ${garden.location}` : ""}
         </p>
       </header>
@@ -86,7 +86,6 @@ export default async function GardenOverviewPage({
       )}
       {/* An empty garden gets first steps, not a row of zeros. */}
       {status ? <GardenCounts figures={figures} /> : null}
-      <SafetyCautions />
     </>
   );
 }

@@ -50,6 +50,7 @@ export default async function MembersPage({ params }: { params: Promise<{ garden
             <CardBody>
               <InvitationList
                 gardenId={gardenId}
+                timeZone={garden?.timeZone ?? "UTC"}
                 initial={invitations.map((i) => ({ ...i, expiresAt: i.expiresAt.toISOString() }))}
               />
             </CardBody>

@@ -15,6 +15,8 @@ import { listPlantings } from "@/db/queries/plantings";
 import { requirePageMember } from "@/lib/auth/page-session";
 import { roleAtLeast } from "@/lib/auth/roles";
 import { formatDay } from "@/lib/format";
+import { PreHarvestCaution } from "@/components/balance/feeding-cautions";
+import { listBins } from "@/db/queries/bins";
 import { rateCutFromSearch, ruleFormValues } from "@/lib/plantings/rule-form-values";
 import { describeRule } from "@/lib/plantings/rule-words";
 import { bedIdParamsSchema } from "@/lib/validation/bed";
@@ -39,11 +41,14 @@ export default async function BedPage({
   if (!garden || !bed) notFound();
   const system = garden.unitSystem;
   const today = todayIn(garden.timeZone);
-  const [{ plantings }, demand, hasLog] = await Promise.all([
+  const [{ plantings }, demand, hasLog, bins] = await Promise.all([
     listPlantings({ gardenId, query: { bedId, limit: 200, offset: 0 } }),
     getBedDemand({ gardenId, bedId }),
     bedHasLoggedFeedings({ gardenId, bedId }),
+    listBins({ gardenId }),
   ]);
+  // Stock from a manure-fed bin waits out the pre-harvest interval on food crops: say so here.
+  const manureFed = bins.some((b) => b.manureFeedstock && !b.retiredOn);
   const canEdit = roleAtLeast(member.role, "grower");
   // The Balance's rate cut (RULES.md URL contract): ?planting={id}&cut={percent}.
   const cut = canEdit
@@ -116,7 +121,9 @@ export default async function BedPage({
               />
             ))}
           </ul>
-        ) : (
+        ) : null}
+        {views.length && manureFed ? <PreHarvestCaution /> : null}
+        {views.length ? null : (
           <EmptyState
             as="h3"
             title="Nothing planted here yet"

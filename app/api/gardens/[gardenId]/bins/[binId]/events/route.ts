@@ -6,6 +6,7 @@ import { getBinById } from "@/db/queries/bins";
 import { getGardenById } from "@/db/queries/gardens";
 import { requireRole } from "@/lib/auth/require-role";
 import { AppError } from "@/lib/errors";
+import { formatDayWithYear } from "@/lib/format";
 import { parseJson, parseParams, parseWith, route, refuseOtherMethods } from "@/lib/http";
 import { binEventFilterSchema, binEventSchema } from "@/lib/validation/bin-event";
 import { todayIn } from "@/lib/validation/bin-values";
@@ -35,17 +36,25 @@ export const POST = route<Params>(async (request, { params }) => {
   if (!bin || !garden) throw new AppError("not_found:bin");
   const today = todayIn(garden.timeZone);
   if (input.on < bin.startedOn)
-    throw new AppError("validation:on", `This bin started on ${bin.startedOn}.`, {
-      on: `is before the bin started (${bin.startedOn})`,
-    });
+    throw new AppError(
+      "validation:on",
+      `This bin started on ${formatDayWithYear(bin.startedOn)}.`,
+      {
+        on: `is before the bin started (${formatDayWithYear(bin.startedOn)})`,
+      },
+    );
   if (input.on > today)
     throw new AppError("validation:on", "Log what has happened, not what will.", {
       on: "is in the future",
     });
   if (bin.retiredOn && input.on > bin.retiredOn)
-    throw new AppError("validation:on", `This bin was retired on ${bin.retiredOn}.`, {
-      on: `is after the bin was retired (${bin.retiredOn})`,
-    });
+    throw new AppError(
+      "validation:on",
+      `This bin was retired on ${formatDayWithYear(bin.retiredOn)}.`,
+      {
+        on: `is after the bin was retired (${formatDayWithYear(bin.retiredOn)})`,
+      },
+    );
   if (input.kind === "worms-moved") await checkWormTarget(member, bin, input);
   const db = await getDb();
   const result = await db.transaction((tx) =>
@@ -54,6 +63,7 @@ export const POST = route<Params>(async (request, { params }) => {
       bin,
       input,
       confirm: new URL(request.url).searchParams.has("confirm"),
+      system: garden.unitSystem,
     }),
   );
   // After the commit: this garden's cached plan (and the receiving garden's) is stale.

@@ -9,7 +9,11 @@ import {
 import { countLoggedWorms, getBinById, type BinDto } from "@/db/queries/bins";
 import { requireMembership, type Member } from "@/lib/auth/require-role";
 import { dflt, trayInsideVolumeL } from "@/lib/engine";
+import { WORM_BAND_C } from "@/lib/cautions";
 import { AppError } from "@/lib/errors";
+import { formatDayWithYear } from "@/lib/format";
+import { formatAmount } from "@/lib/format-quantity";
+import type { UnitSystem } from "@/lib/units";
 import { warningsForFoods, type BinEventInput } from "@/lib/validation/bin-event";
 import { wormCount } from "@/lib/validation/bin-values";
 
@@ -42,7 +46,8 @@ export async function writeBinEvent(
     bin,
     input,
     confirm,
-  }: { member: Member; bin: BinDto; input: BinEventInput; confirm: boolean },
+    system,
+  }: { member: Member; bin: BinDto; input: BinEventInput; confirm: boolean; system: UnitSystem },
 ): Promise<WriteResult> {
   const base = {
     gardenId: bin.gardenId,
@@ -94,7 +99,7 @@ export async function writeBinEvent(
           "validation:over_capacity",
           "That is more than one tray of this bin can hold. Check the unit, or confirm it.",
           {
-            [field]: `is more than a full tray holds (max ${cap.maxKg.toFixed(1)} kg, ${cap.volumeL.toFixed(1)} L)`,
+            [field]: `is more than a full tray holds (max ${formatAmount(cap.maxKg, "castings-mass", system)}, ${formatAmount(cap.volumeL, "castings-volume", system)})`,
           },
         );
       }
@@ -172,19 +177,19 @@ export async function checkWormTarget(
   if (target.retiredOn && target.retiredOn < input.on)
     throw new AppError("validation:to", "That bin is retired.", { "to.binId": "is retired" });
   if (target.startedOn > input.on)
-    throw new AppError("validation:to", `That bin starts on ${target.startedOn}.`, {
-      "to.binId": "had not started on that day",
-    });
+    throw new AppError(
+      "validation:to",
+      `That bin starts on ${formatDayWithYear(target.startedOn)}.`,
+      {
+        "to.binId": "had not started on that day",
+      },
+    );
 }
-
-/** The comfortable band for composting worms, 55–77 °F (13–25 °C); common practice. */
-export const TEMPERATURE_BAND_C = { low: 12.8, high: 25 } as const;
 
 function temperatureWarnings(c: number | null | undefined): string[] {
   if (c == null) return [];
-  if (c < TEMPERATURE_BAND_C.low)
+  if (c < WORM_BAND_C.low)
     return ["Below the worms' comfortable band: they slow down and eat less."];
-  if (c > TEMPERATURE_BAND_C.high)
-    return ["Above the worms' comfortable band: shade or cool the bin."];
+  if (c > WORM_BAND_C.high) return ["Above the worms' comfortable band: shade or cool the bin."];
   return [];
 }
