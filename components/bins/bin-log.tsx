@@ -3,7 +3,8 @@
 import { useQuery } from "@tanstack/react-query";
 import Image from "next/image";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
-import { Badge, Select, Skeleton } from "@/components/ui";
+import { useState } from "react";
+import { Badge, Button, Select, Skeleton } from "@/components/ui";
 import { apiFetch } from "@/lib/api-client";
 import { formatDay } from "@/lib/format";
 import { formatAmount, formatTemperature } from "@/lib/format-quantity";
@@ -12,7 +13,10 @@ import type { UnitSystem } from "@/lib/units";
 import { binEventKindLabels, type BinEventKind } from "@/lib/validation/bin-event";
 
 // The bin's timeline, newest first; the filter lives in the URL (?kind=…) so a
-// filtered view can be linked.
+// filtered view can be linked. A page shows a screenful at a time: on a phone a
+// hundred entries would push everything below them out of reach.
+
+const ENTRIES_PER_STEP = 15;
 
 export interface LogEntry {
   id: string;
@@ -69,6 +73,7 @@ export function BinLog({
   const pathname = usePathname();
   const search = useSearchParams();
   const kind = (search.get("kind") ?? undefined) as BinEventKind | undefined;
+  const [shown, setShown] = useState(ENTRIES_PER_STEP);
   const { data, isPending, isError } = useQuery({
     queryKey: queryKeys.binLog(gardenId, binId, kind),
     queryFn: () =>
@@ -103,7 +108,7 @@ export function BinLog({
         <p className="text-soil-700">Nothing logged{kind ? " of this kind" : ""} yet.</p>
       ) : null}
       <ol className="flex flex-col divide-y divide-loam-200">
-        {data?.entries.map((e) => (
+        {data?.entries.slice(0, shown).map((e) => (
           <li key={e.id} className="flex flex-col gap-0.5 py-2">
             <div className="flex flex-wrap items-center gap-2">
               <span className="font-semibold">{formatDay(e.on)}</span>
@@ -131,14 +136,26 @@ export function BinLog({
                 })}
               </div>
             ) : null}
-            <p className="text-sm text-soil-600">
-              {e.loggedBy
-                ? `Logged by ${e.loggedBy}`
-                : "Logger not recorded (imported, or no longer a member)"}
-            </p>
+            {e.loggedBy ? <p className="text-sm text-soil-600">Logged by {e.loggedBy}</p> : null}
           </li>
         ))}
       </ol>
+      {data && data.entries.length > shown ? (
+        <Button
+          variant="secondary"
+          className="self-start"
+          onClick={() => setShown((n) => n + ENTRIES_PER_STEP)}
+        >
+          Show {Math.min(ENTRIES_PER_STEP, data.entries.length - shown)} more of{" "}
+          {data.entries.length - shown} older
+        </Button>
+      ) : null}
+      {data?.entries.slice(0, shown).some((e) => !e.loggedBy) ? (
+        <p className="text-sm text-soil-600">
+          Entries with no name beside them came from an imported file or from someone who is no
+          longer a member.
+        </p>
+      ) : null}
     </div>
   );
 }
