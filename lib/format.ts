@@ -5,6 +5,22 @@
 // shifts with the viewer's zone. Instants (an invitation's expiry) are shown
 // in the garden's own time zone, with the zone named.
 
+/** Month names, January first: index = month number − 1. */
+export const MONTH_NAMES = [
+  "January",
+  "February",
+  "March",
+  "April",
+  "May",
+  "June",
+  "July",
+  "August",
+  "September",
+  "October",
+  "November",
+  "December",
+] as const;
+
 export function formatDay(
   day: string,
   options: Intl.DateTimeFormatOptions = { month: "short", day: "numeric" },

@@ -8,7 +8,7 @@ import { Button, Field, Input, Textarea } from "@/components/ui";
 import { apiFetch } from "@/lib/api-client";
 import { queryKeys } from "@/lib/query-keys";
 import { fromSi, type UnitSystem } from "@/lib/units";
-import { createBedSchema } from "@/lib/validation/bed";
+import { createBedSchema, type BedShape } from "@/lib/validation/bed";
 import { SizeField } from "./size-field";
 
 type Errors = Record<string, { message?: string } | Record<string, { message?: string }>>;
@@ -21,16 +21,8 @@ function sizeError(errors: Errors, name: string): string | undefined {
 }
 
 /** The stored bed, for editing: sizes in SI, shown back in the garden's units. */
-export interface EditableBed {
+export interface EditableBed extends BedShape {
   id: string;
-  name: string;
-  kind: "bed" | "container";
-  indoors: boolean;
-  lengthM: number | null;
-  widthM: number | null;
-  depthM: number | null;
-  containerVolumeL: number | null;
-  notes: string | null;
 }
 
 /** SI → the field's unit, 2 decimals (a bed is not measured finer); blank when unknown. */

@@ -4,21 +4,8 @@ import { useId } from "react";
 import { useController, type Control } from "react-hook-form";
 import { Select } from "@/components/ui";
 import type { CreateGardenInput } from "@/lib/validation/garden";
+import { MONTH_NAMES } from "@/lib/format";
 
-const MONTHS = [
-  "January",
-  "February",
-  "March",
-  "April",
-  "May",
-  "June",
-  "July",
-  "August",
-  "September",
-  "October",
-  "November",
-  "December",
-];
 // Days in each month of a leap year, so 29 February can be chosen.
 const DAYS_IN_MONTH = [31, 29, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31];
 const two = (n: number) => String(n).padStart(2, "0");
@@ -64,7 +51,7 @@ export function MonthDayField({
             onBlur={field.onBlur}
             aria-invalid={error ? true : undefined}
           >
-            {MONTHS.map((m, i) => (
+            {MONTH_NAMES.map((m, i) => (
               <option key={m} value={i + 1}>
                 {m}
               </option>

@@ -3,23 +3,15 @@ import { and, asc, count, eq, gt, ilike, inArray, isNotNull, isNull, or } from "
 import { getDb, type DbOrTx } from "@/db";
 import { applications, beds, plantings } from "@/db/schema";
 import { AppError } from "@/lib/errors";
-import type { CreateBedInput, ListBedsQuery } from "@/lib/validation/bed";
+import type { BedShape, CreateBedInput, ListBedsQuery } from "@/lib/validation/bed";
 import { si } from "@/lib/validation/scenario-quantity";
 import { thenInvalidatePlan } from "./plan-invalidation";
 import { gardenToday } from "./plantings";
 
-export interface BedDto {
+export interface BedDto extends BedShape {
   id: string;
-  name: string;
-  kind: "bed" | "container";
-  indoors: boolean;
-  lengthM: number | null;
-  widthM: number | null;
-  depthM: number | null;
   /** length × width for a bed; null for a container. */
   areaM2: number | null;
-  containerVolumeL: number | null;
-  notes: string | null;
   /** Kept for its history, out of the plan and the default list. */
   archivedOn: string | null;
   plantingCount: number;

@@ -3,7 +3,7 @@ import { readCsvCell } from "@/lib/csv";
 import { matchCrop } from "@/lib/plantings/quick-entry";
 import { CROWDED_REFUSE_RATIO, cropFacts, crowding } from "@/lib/plantings/rules";
 import { isUnitName, quantityOf, toSi, type UnitName } from "@/lib/units";
-import { createBedSchema, type CreateBedInput } from "@/lib/validation/bed";
+import { createBedSchema, type BedShape, type CreateBedInput } from "@/lib/validation/bed";
 import { isoDay, MAX_PLANTS, prioritySchema, type Priority } from "@/lib/validation/planting";
 import { si } from "@/lib/validation/scenario-quantity";
 import { readHeader, type ColumnKey, type HeaderMap } from "./beds-csv-columns";
@@ -22,15 +22,9 @@ export interface CsvCrop {
   daysToHarvest?: number | null;
 }
 
-export interface CsvBed {
+/** A garden's bed as the import checks rows against (its notes play no part). */
+export interface CsvBed extends Omit<BedShape, "notes"> {
   id: string;
-  name: string;
-  kind: "bed" | "container";
-  indoors: boolean;
-  lengthM: number | null;
-  widthM: number | null;
-  depthM: number | null;
-  containerVolumeL: number | null;
 }
 
 /** Row 1 is the header, as a spreadsheet numbers it. */

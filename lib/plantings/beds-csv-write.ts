@@ -1,21 +1,13 @@
 import { spreadsheetCsv, type CsvCell } from "@/lib/csv";
 import { fromSi, type UnitSystem } from "@/lib/units";
+import type { BedShape } from "@/lib/validation/bed";
 import { csvUnits, headerRow } from "./beds-csv-columns";
 
 // Beds and plantings out as CSV, in the format the import reads
 // (lib/plantings/beds-csv-columns.ts), sizes in the garden's units.
 
 export interface BedCsvLine {
-  bed: {
-    name: string;
-    kind: "bed" | "container";
-    indoors: boolean;
-    lengthM: number | null;
-    widthM: number | null;
-    depthM: number | null;
-    containerVolumeL: number | null;
-    notes: string | null;
-  };
+  bed: BedShape;
   planting: {
     cropName: string;
     plantCount: number;

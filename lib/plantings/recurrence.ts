@@ -1,5 +1,6 @@
 import { RRule } from "rrule";
 import { addDays, EngineInputError, expandRecurrence, parseRecurrence } from "@/lib/engine";
+import { MONTH_NAMES } from "@/lib/format";
 
 // A feeding rule's recurrence as growers see it: built from a small form, read
 // back in plain words and as its next dates, or typed as a raw RRULE
@@ -31,20 +32,6 @@ const WEEKDAY_NAMES: Record<Weekday, string> = {
   SA: "Saturday",
   SU: "Sunday",
 };
-const MONTH_NAMES = [
-  "January",
-  "February",
-  "March",
-  "April",
-  "May",
-  "June",
-  "July",
-  "August",
-  "September",
-  "October",
-  "November",
-  "December",
-];
 
 /** What the recurrence form holds. */
 export interface RecurrenceForm {

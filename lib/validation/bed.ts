@@ -9,6 +9,18 @@ export const bedKindSchema = z.enum(["bed", "container"], {
   error: "Choose a bed or a container.",
 });
 
+/** A bed or container as stored and shown back: sizes in SI (a bed has length × width, a container its volume). */
+export interface BedShape {
+  name: string;
+  kind: "bed" | "container";
+  indoors: boolean;
+  lengthM: number | null;
+  widthM: number | null;
+  depthM: number | null;
+  containerVolumeL: number | null;
+  notes: string | null;
+}
+
 // Bounds that catch typing slips, in SI: a 100 m long bed or a 5,000 L pot is a mistake.
 const MAX_SIDE_M = 100;
 const MAX_DEPTH_M = 3;
