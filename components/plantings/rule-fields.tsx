@@ -1,6 +1,6 @@
 "use client";
 
-import { useState } from "react";
+import { useId, useState } from "react";
 import { get, type FieldValues, type UseFormReturn } from "react-hook-form";
 import { Button, Field, Input, Select } from "@/components/ui";
 import { buildRrule, WEEKDAYS, type RecurrenceForm } from "@/lib/plantings/recurrence";
@@ -75,6 +75,11 @@ export function RuleFields({
   const units = AMOUNT_UNITS[basis] ?? AMOUNT_UNITS["per-plant"]!;
   const error = (name: string) =>
     (get(formState.errors, at(name)) as { message?: string } | undefined)?.message;
+  const recurrenceErrorId = `${useId()}-recurrence-error`;
+  // The simple form's recurrence error belongs to its first control ("Every").
+  const recurrenceAria = error("recurrence")
+    ? { "aria-invalid": true as const, "aria-describedby": recurrenceErrorId }
+    : {};
 
   function changeRec(next: Partial<RecurrenceForm>) {
     const merged = { ...rec, ...next };
@@ -156,6 +161,7 @@ export function RuleFields({
                 min="1"
                 max="12"
                 className="w-20"
+                {...recurrenceAria}
                 value={rec.every}
                 onChange={(e) => changeRec({ every: Math.max(1, Number(e.target.value) || 1) })}
               />
@@ -215,7 +221,7 @@ export function RuleFields({
               />
             </label>
             {error("recurrence") ? (
-              <p className="basis-full text-sm font-semibold text-bloom-700">
+              <p id={recurrenceErrorId} className="basis-full text-sm font-semibold text-bloom-700">
                 {error("recurrence")}
               </p>
             ) : null}
