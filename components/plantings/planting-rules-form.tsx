@@ -2,7 +2,7 @@
 
 import { useQueryClient } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
-import { useEffect, useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import { useFieldArray, type FieldValues, type UseFormReturn } from "react-hook-form";
 import { z } from "zod";
 import { FormMessage } from "@/components/forms/form-message";
@@ -74,16 +74,15 @@ export function PlantingRulesForm({
   );
   const [removed, setRemoved] = useState<{ index: number; item: RuleFormValues } | null>(null);
   const errors = form.formState.errors.rules as
-    | (Record<number, unknown> & { message?: string; root?: { message?: string } })
-    | undefined;
+    (Record<number, unknown> & { message?: string; root?: { message?: string } }) | undefined;
 
   // Keyboard users land on the fields they opened (the Edit button is gone then).
-  const [focusTo, setFocusTo] = useState<string | null>(null);
+  const focusTo = useRef<string | null>(null);
   useEffect(() => {
-    if (!focusTo) return;
-    document.getElementById(focusTo)?.querySelector<HTMLElement>("select, input")?.focus();
-    setFocusTo(null);
-  }, [focusTo]);
+    if (!focusTo.current) return;
+    document.getElementById(focusTo.current)?.querySelector<HTMLElement>("select, input")?.focus();
+    focusTo.current = null;
+  });
 
   function removeAt(index: number) {
     const item = form.getValues(`rules.${index}`) as RuleFormValues;
@@ -137,7 +136,7 @@ export function PlantingRulesForm({
                       onClick={() => {
                         // Once opened its saved words may stop being true: the fields show it.
                         setWordsById((was) => new Map(was).set(field.id, undefined));
-                        setFocusTo(`${field.id}-fields`);
+                        focusTo.current = `${field.id}-fields`;
                       }}
                     >
                       Edit {title.toLowerCase()}

@@ -18,7 +18,8 @@ export function hasControlCharacter(value: string): boolean {
 }
 
 // A note typed in a textarea keeps its line breaks and tabs; every other character above is refused.
-const CONTROL_CHARACTER_BUT_LINES = /[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f-\u009f\ufeff\u202a-\u202e\u2066-\u2069]/;
+const CONTROL_CHARACTER_BUT_LINES =
+  /[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f-\u009f\ufeff\u202a-\u202e\u2066-\u2069]/;
 
 /** A single-line text field: refuses control characters, then trims. */
 export function plainText(error?: string) {
