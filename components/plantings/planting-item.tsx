@@ -80,7 +80,8 @@ export function PlantingItem({
         ) : null}
       </div>
       <p className="text-sm text-soil-700">{planting.dates}</p>
-      <div>
+      {/* While editing, the form lists the same rules: once is enough. */}
+      <div hidden={editing}>
         <p>
           <strong>Fed:</strong>{" "}
           <span className="text-sm text-soil-700">({SOURCE_WORDS[planting.ruleSource]})</span>

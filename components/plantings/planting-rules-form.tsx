@@ -2,7 +2,7 @@
 
 import { useQueryClient } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
-import { useEffect, useRef, useState } from "react";
+import { useEffect, useId, useRef, useState } from "react";
 import { useFieldArray, type FieldValues, type UseFormReturn } from "react-hook-form";
 import { z } from "zod";
 import { FormMessage } from "@/components/forms/form-message";
@@ -78,6 +78,7 @@ export function PlantingRulesForm({
 
   // Keyboard users land on the fields they opened (the Edit button is gone then).
   const focusTo = useRef<string | null>(null);
+  const domId = useId();
   useEffect(() => {
     if (!focusTo.current) return;
     document.getElementById(focusTo.current)?.querySelector<HTMLElement>("select, input")?.focus();
@@ -117,7 +118,9 @@ export function PlantingRulesForm({
           const words = wordsById.get(field.id);
           const isOpen = hasError || !words;
           const title = `Feeding ${index + 1}`;
-          const headingId = `${field.id}-title`;
+          // DOM ids from useId and the position: field ids are random, so the server's differ.
+          const headingId = `${domId}-${index}-title`;
+          const fieldsId = `${domId}-${index}-fields`;
           return (
             <li
               key={field.id}
@@ -136,7 +139,7 @@ export function PlantingRulesForm({
                       onClick={() => {
                         // Once opened its saved words may stop being true: the fields show it.
                         setWordsById((was) => new Map(was).set(field.id, undefined));
-                        focusTo.current = `${field.id}-fields`;
+                        focusTo.current = fieldsId;
                       }}
                     >
                       Edit {title.toLowerCase()}
@@ -150,7 +153,7 @@ export function PlantingRulesForm({
               {words && !isOpen ? <p className="text-soil-900">{words}</p> : null}
               {isOpen ? (
                 <div
-                  id={`${field.id}-fields`}
+                  id={fieldsId}
                   tabIndex={-1}
                   className="flex min-w-0 flex-col gap-4 outline-none"
                 >
