@@ -30,7 +30,8 @@ export function useApiForm<S extends z.ZodType<FieldValues, FieldValues>>(
         if (error instanceof ApiError) {
           let placed = false;
           for (const [name, message] of Object.entries(error.fields ?? {})) {
-            if (name in (form.getValues() as object)) {
+            // "rules.1.recurrence" lands on the second rule's field: its first segment is the form's.
+            if (name.split(".")[0]! in (form.getValues() as object)) {
               form.setError(name as Path<z.input<S>>, { message });
               placed = true;
             }

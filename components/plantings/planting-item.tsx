@@ -5,10 +5,9 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Badge, Button, useToast } from "@/components/ui";
 import { apiFetch, ApiError } from "@/lib/api-client";
-import type { RuleFormValues } from "@/lib/plantings/rule-form-values";
 import { queryKeys } from "@/lib/query-keys";
 import type { UnitSystem } from "@/lib/units";
-import { RuleEditor } from "./rule-editor";
+import { PlantingRulesForm, type RuleItem } from "./planting-rules-form";
 
 export interface PlantingView {
   id: string;
@@ -16,21 +15,18 @@ export interface PlantingView {
   dates: string;
   priority: "high" | "normal" | "low";
   plantedOn: string;
-  ruleWords: string;
   ruleSource: "planting" | "crop" | "default";
-  /** The first rule in use, as the rule editor's fields. */
-  ruleValues: RuleFormValues;
-  /** How many rules feed it (the editor edits one and replaces them all with it). */
-  ruleCount: number;
+  /** Every rule in use, in order: plain words and the form's fields. */
+  rules: RuleItem[];
 }
 
 const SOURCE_WORDS = {
-  planting: "this planting's own rule",
-  crop: "the crop's rule for this garden",
+  planting: "this planting's own feedings",
+  crop: "the crop's feedings for this garden",
   default: "feeder-class default, common practice",
 };
 
-/** One planting: what it is, how it is fed; growers can change or reset the rule, or remove it. */
+/** One planting: what it is, how it is fed; growers can change or reset its feedings, or remove it. */
 export function PlantingItem({
   gardenId,
   planting,
@@ -44,8 +40,8 @@ export function PlantingItem({
   canEdit: boolean;
   today: string;
   unitSystem: UnitSystem;
-  /** The Balance's rate-cut link: open the editor on these reduced values (not saved). */
-  rateCut?: { percent: number; values: RuleFormValues };
+  /** The Balance's rate-cut link: open the editor on every rule reduced (not saved). */
+  rateCut?: { percent: number; rules: RuleItem[] };
 }) {
   const router = useRouter();
   const toast = useToast();
@@ -84,14 +80,22 @@ export function PlantingItem({
         ) : null}
       </div>
       <p className="text-sm text-soil-700">{planting.dates}</p>
-      <p>
-        <strong>Fed:</strong> {planting.ruleWords}{" "}
-        <span className="text-sm text-soil-700">({SOURCE_WORDS[planting.ruleSource]})</span>
-      </p>
+      {/* While editing, the form lists the same rules: once is enough. */}
+      <div hidden={editing}>
+        <p>
+          <strong>Fed:</strong>{" "}
+          <span className="text-sm text-soil-700">({SOURCE_WORDS[planting.ruleSource]})</span>
+        </p>
+        <ul className="list-disc pl-5">
+          {planting.rules.map((r, i) => (
+            <li key={i}>{r.words}</li>
+          ))}
+        </ul>
+      </div>
       {canEdit && !editing ? (
         <div className="flex flex-wrap gap-2">
           <Button variant="secondary" size="sm" onClick={() => setEditing(true)}>
-            Change feeding
+            Change feedings
           </Button>
           {planting.ruleSource === "planting" ? (
             <Button
@@ -99,10 +103,10 @@ export function PlantingItem({
               size="sm"
               pending={busy}
               onClick={() =>
-                act({ method: "PATCH", body: { rule: null } }, "Back to the crop's rule.")
+                act({ method: "PATCH", body: { rules: [] } }, "Back to the crop's feedings.")
               }
             >
-              Use the crop&apos;s rule
+              Use the crop&apos;s feedings
             </Button>
           ) : null}
           {confirming ? (
@@ -124,23 +128,18 @@ export function PlantingItem({
         </div>
       ) : null}
       {editing ? (
-        <RuleEditor
+        <PlantingRulesForm
           gardenId={gardenId}
           saveUrl={url}
           plantedOn={planting.plantedOn}
           today={today}
           unitSystem={unitSystem}
-          initial={rateCut?.values ?? planting.ruleValues}
-          note={[
+          initial={rateCut?.rules ?? planting.rules}
+          note={
             rateCut
-              ? `Amount cut by ${rateCut.percent} %, as the Balance suggests. Not saved until you press Save rule.`
-              : "",
-            planting.ruleCount > 1
-              ? `It is fed by ${planting.ruleCount} rules; this form shows the first, and saving replaces all of them with it.`
-              : "",
-          ]
-            .filter(Boolean)
-            .join(" ")}
+              ? `Every amount cut by ${rateCut.percent} %, as the Balance suggests. Not saved until you press Save feedings.`
+              : undefined
+          }
           onDone={() => setEditing(false)}
         />
       ) : null}

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { plainLines, plainText } from "./text";
 import { quantitySchema } from "@/lib/validation/scenario-quantity";
 
 // A bed or container as a grower enters it: sizes in their own units
@@ -42,7 +43,7 @@ function optionalSize(kind: "length" | "volume", maxSi: number) {
 }
 
 const bedFields = z.object({
-  name: z.string().trim().min(1, "Give it a name.").max(80, "Use at most 80 characters."),
+  name: plainText().min(1, "Give it a name.").max(80, "Use at most 80 characters."),
   kind: bedKindSchema,
   indoors: z.boolean().default(false),
   length: optionalSize("length", MAX_SIDE_M),
@@ -50,7 +51,7 @@ const bedFields = z.object({
   depth: optionalSize("length", MAX_DEPTH_M),
   volume: optionalSize("volume", MAX_CONTAINER_L),
   diameter: optionalSize("length", MAX_DEPTH_M),
-  notes: z.string().trim().max(1000, "Use at most 1,000 characters.").nullish(),
+  notes: plainLines().max(1000, "Use at most 1,000 characters.").nullish(),
 });
 
 type BedFields = z.infer<typeof bedFields>;

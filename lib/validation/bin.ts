@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { plainText } from "./text";
 import { GEOMETRY_LIMITS, nominalBoardNames } from "@/lib/engine/supply/geometry";
 import { isoDateSchema } from "./engine-inputs";
 
@@ -75,7 +76,7 @@ export const binParamsShape = {
 };
 
 const binFields = z.object({
-  name: z.string().trim().min(1, "Give the bin a name.").max(60, "Use at most 60 characters."),
+  name: plainText().min(1, "Give the bin a name.").max(60, "Use at most 60 characters."),
   kind: z.enum(binKinds, { error: "Choose stacked trays, a single bin or flow-through." }),
   trayCount: z
     .number({ error: "Enter the number of trays." })

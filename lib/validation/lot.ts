@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { plainLines } from "./text";
 import { isoDateSchema } from "./engine-inputs";
 
 // Stock entered by hand: a bought bag of castings, or stock on hand before
@@ -17,7 +18,7 @@ export const createLotSchema = z.object({
   manureFeedstock: z.boolean().default(false),
   // What was paid, per kg (the form converts from the garden's units); bought stock only.
   pricePerKg: z.number().finite().nonnegative().max(1000).nullable().optional(),
-  note: z.string().trim().max(300).nullable().optional(),
+  note: plainLines().max(300).nullable().optional(),
 });
 export type CreateLotInput = z.infer<typeof createLotSchema>;
 
@@ -32,6 +33,6 @@ export const adjustLotSchema = z.object({
     .finite()
     .positive("The amount must be more than zero.")
     .max(5000, "That looks too large (at most 5,000)."),
-  note: z.string().trim().max(300).nullable().optional(),
+  note: plainLines().max(300).nullable().optional(),
 });
 export type AdjustLotInput = z.infer<typeof adjustLotSchema>;

@@ -17,10 +17,22 @@ export function hasControlCharacter(value: string): boolean {
   return CONTROL_CHARACTER.test(value);
 }
 
+// A note typed in a textarea keeps its line breaks and tabs; every other character above is refused.
+const CONTROL_CHARACTER_BUT_LINES =
+  /[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f-\u009f\ufeff\u202a-\u202e\u2066-\u2069]/;
+
 /** A single-line text field: refuses control characters, then trims. */
 export function plainText(error?: string) {
   return z
     .string(error ? { error } : undefined)
     .refine((v) => !hasControlCharacter(v), CONTROL_CHARACTER_MESSAGE)
+    .trim();
+}
+
+/** A multi-line note (a textarea): as plainText, but line breaks and tabs stay. */
+export function plainLines(error?: string) {
+  return z
+    .string(error ? { error } : undefined)
+    .refine((v) => !CONTROL_CHARACTER_BUT_LINES.test(v), CONTROL_CHARACTER_MESSAGE)
     .trim();
 }

@@ -127,16 +127,16 @@ describe("beds CSV import in a browser", () => {
     );
     const [planting] = (await res.json()).plantings as { id: string; cropName: string }[];
     await session.page.goto(`${bedUrl}?planting=${planting!.id}&cut=25`);
-    const form = session.page.getByRole("form", { name: "Change feeding rule" });
+    const form = session.page.getByRole("form", { name: "Change feedings" });
     await form.waitFor();
     await session.page.screenshot({ path: `${SHOTS}/rate-cut-1280.png`, fullPage: true });
     // Tomato and pepper: heavy feeders, 1 cup castings per plant monthly (PRODUCT.md, common
     // practice); cut by 25 % → 0.75 cup.
     expect(await form.getByRole("spinbutton", { name: "Amount" }).inputValue()).toBe("0.75");
     expect(await form.getByRole("combobox", { name: "Amount: unit" }).inputValue()).toBe("cup");
-    await form.getByText("Amount cut by 25 %").waitFor();
+    await form.getByText("Every amount cut by 25 %").waitFor();
     await session.page.goto(bedUrl);
-    expect(await session.page.getByRole("form", { name: "Change feeding rule" }).count()).toBe(0);
+    expect(await session.page.getByRole("form", { name: "Change feedings" }).count()).toBe(0);
     await session.page
       .getByText(/1 cup castings per plant/)
       .first()

@@ -66,9 +66,9 @@ describe("journey 1: a bed and its plants", () => {
       await signInTo(viewerSession, viewer);
       await viewerSession.page.goto(bedUrl);
       await viewerSession.page.getByRole("heading", { name: "Journey bed" }).waitFor();
-      expect(await viewerSession.page.getByRole("button", { name: "Change feeding" }).count()).toBe(
-        0,
-      );
+      expect(
+        await viewerSession.page.getByRole("button", { name: "Change feedings" }).count(),
+      ).toBe(0);
       expect(await viewerSession.page.getByRole("form", { name: "Add plants" }).count()).toBe(0);
       const [, , gardenId, , bedId] = new URL(bedUrl).pathname.split("/");
       const res = await viewerSession.page.request.patch(

@@ -16,18 +16,19 @@ export class BedPage {
       .filter({ has: this.page.getByRole("heading", { name: title }) });
   }
 
-  /** Opens the planting's rule editor, sets tea per plant and a raw RRULE, and saves. */
+  /** Opens the planting's feedings, turns its one rule into tea per plant on a raw RRULE, and saves. */
   async overrideWithTea(title: RegExp, flOz: number, rrule: string) {
     const item = this.planting(title);
-    await item.getByRole("button", { name: "Change feeding" }).click();
-    const form = item.getByRole("form", { name: "Change feeding rule" });
+    await item.getByRole("button", { name: "Change feedings" }).click();
+    const form = item.getByRole("form", { name: "Change feedings" });
+    await form.getByRole("button", { name: "Edit feeding 1" }).click();
     await form.getByLabel("Material").selectOption("tea");
     await form.getByLabel("Method").selectOption("drench");
-    await form.locator('input[name="amount.value"]').fill(String(flOz));
+    await form.locator('input[name="rules.0.amount.value"]').fill(String(flOz));
     await form.getByLabel("Amount: unit").selectOption("fl-oz");
     await form.getByRole("button", { name: "Type an RRULE instead" }).click();
     await form.getByLabel(/RRULE/).fill(rrule);
-    await form.getByRole("button", { name: "Save rule" }).click();
+    await form.getByRole("button", { name: "Save feedings" }).click();
   }
 
   demandTable() {

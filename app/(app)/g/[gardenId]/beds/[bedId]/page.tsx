@@ -69,15 +69,19 @@ export default async function BedPage({
     } · ${p.feederClass} feeder`,
     priority: p.priority,
     plantedOn: p.plantedOn,
-    ruleWords: p.effectiveRules.map((r) => describeRule(r, system)).join("; "),
     ruleSource: p.ruleSource,
-    ruleValues: ruleFormValues(p.effectiveRule, system),
-    ruleCount: p.effectiveRules.length,
+    rules: p.effectiveRules.map((r) => ({
+      words: describeRule(r, system),
+      values: ruleFormValues(r, system),
+    })),
     rateCut:
       cut?.plantingId === p.id
         ? {
             percent: cut.cutPercent,
-            values: ruleFormValues(p.effectiveRule, system, cut.cutPercent),
+            // Every rule's amount cut; no words, so each opens on its reduced fields.
+            rules: p.effectiveRules.map((r) => ({
+              values: ruleFormValues(r, system, cut.cutPercent),
+            })),
           }
         : undefined,
   }));
