@@ -1,9 +1,9 @@
-import fs from "node:fs";
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { demoGarden, demoMembers } from "@/db/seed/demo-garden";
 import { GardensPage } from "./pages/gardens-page";
 import { SignInPage } from "./pages/sign-in-page";
 import { openBrowser, type BrowserSession } from "./support/browser";
+import { shotsDir } from "./support/shots";
 
 // Issue 12, items 1–3 and 9: after the owner switches the garden to metric, the
 // overview and a bin page show no US unit (and a US garden no metric one); the
@@ -11,7 +11,7 @@ import { openBrowser, type BrowserSession } from "./support/browser";
 // offers every time zone and asks frost days as month and day.
 const baseUrl = inject("baseUrl");
 const owner = demoMembers.find((m) => m.role === "owner")!;
-const shots = "/work/shots/shell-units";
+const shots = shotsDir("garden-units");
 // A number followed by a unit ("in" alone is an ordinary word).
 const US_UNIT = /\d\s?(lb|oz|fl oz|gal|cups?|qt|in|ft|ft²|ft³|°F)(?![\p{L}])/u;
 const METRIC_UNIT = /\d\s?(kg|g|L|mL|cm|m|m²|°C)(?![\p{L}])/u;
@@ -20,7 +20,6 @@ describe("units, cautions and the garden form", () => {
   let session: BrowserSession;
   let gardenUrl = "";
   beforeAll(async () => {
-    fs.mkdirSync(shots, { recursive: true });
     session = await openBrowser({ width: 1280, height: 900 });
     const signIn = new SignInPage(session.page, baseUrl);
     await signIn.open();
@@ -31,6 +30,12 @@ describe("units, cautions and the garden form", () => {
     gardenUrl = session.page.url();
   });
   afterAll(async () => {
+    // The demo garden is shared by every browser test file: put its units back.
+    const gardenId = new URL(gardenUrl).pathname.split("/")[2];
+    await session.page.request.patch(`${baseUrl}/api/gardens/${gardenId}`, {
+      data: { unitSystem: "us" },
+      headers: { origin: baseUrl },
+    });
     await session.close();
   });
 
