@@ -195,6 +195,14 @@ describe("beds CSV import in a browser", () => {
     await session.page.screenshot({ path: `${SHOTS}/crops-owner-375.png` });
     await item.getByRole("button", { name: "Save rule" }).click();
     await item.getByText(/this garden's rule/).waitFor();
+    // Finding a crop in a list of 50+: the name filter keeps ours and drops the rest.
+    const find = session.page.getByRole("form", { name: "Find crops" });
+    await find.getByLabel("Name contains").fill("cherry");
+    await find.getByRole("button", { name: "Find" }).click();
+    await session.page.waitForURL(/\/crops\?q=cherry/);
+    const listed = session.page.getByRole("list", { name: "The garden's crops" });
+    await listed.getByText("Ground cherry").waitFor();
+    expect(await listed.getByText(/^Tomato$/).count()).toBe(0);
     await session.page.setViewportSize({ width: 1280, height: 900 });
     await session.page.goto(`${gardenUrl}/crops`);
     await session.page.screenshot({ path: `${SHOTS}/crops-owner-1280.png` });

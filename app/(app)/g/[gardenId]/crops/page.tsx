@@ -2,7 +2,16 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { CropForm } from "@/components/crops/crop-form";
 import { CropItem } from "@/components/crops/crop-item";
-import { Card, CardBody, CardHeader, CardTitle } from "@/components/ui";
+import {
+  Button,
+  buttonStyles,
+  Card,
+  CardBody,
+  CardHeader,
+  CardTitle,
+  Input,
+  Select,
+} from "@/components/ui";
 import { listCrops } from "@/db/queries/crops";
 import { getGardenById } from "@/db/queries/gardens";
 import { requirePageMember } from "@/lib/auth/page-session";
@@ -10,15 +19,33 @@ import { roleAtLeast } from "@/lib/auth/roles";
 import { todayIn } from "@/lib/garden-today";
 import { ruleFormValues } from "@/lib/plantings/rule-form-values";
 import { describeRule } from "@/lib/plantings/rule-words";
+import { listCropsQuerySchema } from "@/lib/validation/crop";
+import { feederClassSchema } from "@/lib/validation/engine-inputs";
 
 export const metadata: Metadata = { title: "Crops" };
 
-export default async function CropsPage({ params }: { params: Promise<{ gardenId: string }> }) {
+export default async function CropsPage({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ gardenId: string }>;
+  searchParams: Promise<Record<string, string | string[] | undefined>>;
+}) {
   const { gardenId } = await params;
   const member = await requirePageMember(gardenId, "viewer");
+  const raw = await searchParams;
+  const one = (k: string) =>
+    typeof raw[k] === "string" && raw[k] ? (raw[k] as string) : undefined;
+  // The filter lives in the URL like the beds list's; a bad value falls back to none.
+  const parsed = listCropsQuerySchema.safeParse({
+    q: one("q"),
+    feederClass: one("feederClass"),
+  });
+  const query = parsed.success ? parsed.data : listCropsQuerySchema.parse({});
+  const filtered = Boolean(query.q || query.feederClass);
   const [garden, { crops }] = await Promise.all([
     getGardenById({ gardenId }),
-    listCrops({ gardenId, query: { limit: 200, offset: 0 } }),
+    listCrops({ gardenId, query }),
   ]);
   if (!garden) return null;
   const system = garden.unitSystem;
@@ -48,6 +75,37 @@ export default async function CropsPage({ params }: { params: Promise<{ gardenId
             <CropForm gardenId={gardenId} />
           </CardBody>
         </Card>
+      ) : null}
+      <form method="get" className="flex flex-wrap items-end gap-3" aria-label="Find crops">
+        <label className="flex flex-col gap-1.5 font-semibold">
+          Name contains
+          <Input name="q" defaultValue={query.q ?? ""} className="w-44" />
+        </label>
+        <label className="flex flex-col gap-1.5 font-semibold">
+          Feeder
+          <Select name="feederClass" defaultValue={query.feederClass ?? ""} className="w-44">
+            <option value="">Any</option>
+            {feederClassSchema.options.map((c) => (
+              <option key={c} value={c}>
+                {c[0]!.toUpperCase() + c.slice(1)}
+              </option>
+            ))}
+          </Select>
+        </label>
+        <Button type="submit" variant="secondary">
+          Find
+        </Button>
+        {filtered ? (
+          <Link href="?" className={buttonStyles({ variant: "ghost" })}>
+            Clear
+          </Link>
+        ) : null}
+      </form>
+      {crops.length === 0 ? (
+        <p className="text-soil-700">
+          No crop matches. Clear the search to see them all
+          {canEdit ? ", or add it as your own crop above" : ""}.
+        </p>
       ) : null}
       <ul className="flex flex-col gap-3" aria-label="The garden's crops">
         {crops.map((c) => (
