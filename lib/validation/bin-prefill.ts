@@ -14,7 +14,9 @@ import { plainText } from "./text";
 // one that is bad or unknown is dropped, never an error: the link only fills a
 // form, and nothing is saved until the grower saves it.
 
-export type SearchParams = Record<string, string | string[] | undefined>;
+import type { SearchParams } from "@/lib/search-params";
+
+export type { SearchParams };
 
 const count = (max: number) => z.coerce.number().finite().int().min(1).max(max);
 const metres = (max: number) => z.coerce.number().finite().positive().max(max);

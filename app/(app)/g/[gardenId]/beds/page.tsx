@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { searchParam, type SearchParams } from "@/lib/search-params";
 import Link from "next/link";
 import { BedForm } from "@/components/beds/bed-form";
 import { BedList } from "@/components/beds/bed-list";
@@ -28,13 +29,12 @@ export default async function BedsPage({
   searchParams,
 }: {
   params: Promise<{ gardenId: string }>;
-  searchParams: Promise<Record<string, string | string[] | undefined>>;
+  searchParams: Promise<SearchParams>;
 }) {
   const { gardenId } = await params;
   const member = await requirePageMember(gardenId, "viewer");
   const raw = await searchParams;
-  const one = (k: string) =>
-    typeof raw[k] === "string" && raw[k] ? (raw[k] as string) : undefined;
+  const one = (key: string) => searchParam(raw, key);
   // Filters live in the URL, so a filtered view can be linked; bad values fall back to none.
   const parsed = listBedsQuerySchema.safeParse({
     kind: one("kind"),

@@ -1,4 +1,6 @@
 import type { Metadata } from "next";
+import { searchParam, type SearchParams } from "@/lib/search-params";
+import { BackToBeds } from "@/components/beds/back-to-beds";
 import Link from "next/link";
 import { CropForm } from "@/components/crops/crop-form";
 import { CropItem } from "@/components/crops/crop-item";
@@ -29,13 +31,12 @@ export default async function CropsPage({
   searchParams,
 }: {
   params: Promise<{ gardenId: string }>;
-  searchParams: Promise<Record<string, string | string[] | undefined>>;
+  searchParams: Promise<SearchParams>;
 }) {
   const { gardenId } = await params;
   const member = await requirePageMember(gardenId, "viewer");
   const raw = await searchParams;
-  const one = (k: string) =>
-    typeof raw[k] === "string" && raw[k] ? (raw[k] as string) : undefined;
+  const one = (key: string) => searchParam(raw, key);
   // The filter lives in the URL like the beds list's; a bad value falls back to none.
   const parsed = listCropsQuerySchema.safeParse({
     q: one("q"),
@@ -53,14 +54,7 @@ export default async function CropsPage({
   const today = todayIn(garden.timeZone);
   return (
     <>
-      <nav aria-label="Breadcrumb" className="text-sm">
-        <Link
-          href={`/g/${gardenId}/beds`}
-          className="inline-flex min-h-6 items-center text-leaf-800 underline"
-        >
-          ← All beds and containers
-        </Link>
-      </nav>
+      <BackToBeds gardenId={gardenId} />
       <h1 className="text-3xl">Crops</h1>
       <p className="text-soil-700">
         Each crop feeds by its default rule unless a planting has its own. Changing a crop here

@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import Link from "next/link";
+import { BackToBeds } from "@/components/beds/back-to-beds";
 import { notFound } from "next/navigation";
 import { BedActions } from "@/components/beds/bed-actions";
 import { BedDemandTable } from "@/components/beds/bed-demand-table";
@@ -88,14 +88,7 @@ export default async function BedPage({
 
   return (
     <>
-      <nav aria-label="Breadcrumb" className="text-sm">
-        <Link
-          href={`/g/${gardenId}/beds`}
-          className="inline-flex min-h-6 items-center text-leaf-800 underline"
-        >
-          ← All beds and containers
-        </Link>
-      </nav>
+      <BackToBeds gardenId={gardenId} />
       <header className="flex flex-col gap-1">
         <h1 className="text-3xl">{bed.name}</h1>
         <p className="text-soil-700">

@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import Link from "next/link";
+import { BackToBeds } from "@/components/beds/back-to-beds";
 import { CsvImport } from "@/components/beds/csv-import";
 import { Card, CardBody, CardHeader, CardTitle } from "@/components/ui";
 import { loadBedsCsvContext } from "@/db/queries/beds-csv";
@@ -24,14 +24,7 @@ export default async function ImportBedsPage({
   const units = csvUnits(garden.unitSystem);
   return (
     <>
-      <nav aria-label="Breadcrumb" className="text-sm">
-        <Link
-          href={`/g/${gardenId}/beds`}
-          className="inline-flex min-h-6 items-center text-leaf-800 underline"
-        >
-          ← All beds and containers
-        </Link>
-      </nav>
+      <BackToBeds gardenId={gardenId} />
       <h1 className="text-3xl">Import beds and plantings</h1>
       <Card>
         <CardHeader>
