@@ -153,9 +153,13 @@ class Shelf {
     }
     return lo;
   }
-  /** [lo, hi) of lots usable on `day` (keep is the same for every lot of a pool). */
-  range(day: number, keep: number): [number, number] {
-    return [this.firstMadeAfter(day - keep), this.firstMadeAfter(day)];
+  /** Start of the lots usable on `day`: [usableFrom, usableTo) (keep is the same for every lot of a pool). */
+  usableFrom(day: number, keep: number): number {
+    return this.firstMadeAfter(day - keep);
+  }
+  /** End (exclusive) of the lots usable on `day`. */
+  usableTo(day: number): number {
+    return this.firstMadeAfter(day);
   }
   /** `lo` moved past the drained lots at its start: they add nothing to a sum or a draw. */
   skipDrained(lo: number, hi: number): number {
@@ -265,7 +269,8 @@ function drawShared(
     out.fill(0, 0, n);
     return;
   }
-  const [lo, hi] = shelf.range(day, keep);
+  const lo = shelf.usableFrom(day, keep);
+  const hi = shelf.usableTo(day);
   let recorded = 0;
   if (records !== undefined)
     for (let k = 0; k < n; k++) if (records[group[from + k]!] !== undefined) recorded++;
@@ -424,8 +429,11 @@ export function runLedger(input: LedgerInput): LedgerResult {
   const plannedMonth = new Int32Array(input.planned.length);
   input.planned.forEach((c, i) => (plannedMonth[i] = c.need > 0 ? monthIndex(c.day) : -1));
   const plannedByMonth: number[][] = Array.from({ length: spans.length * 2 }, () => []);
-  for (const i of tierOrder(input.planned, (i) => plannedMonth[i]! >= 0))
+  const inTierOrder = tierOrder(input.planned, (i) => plannedMonth[i]! >= 0);
+  for (let k = 0; k < inTierOrder.length; k++) {
+    const i = inTierOrder[k]!;
     plannedByMonth[slot(plannedMonth[i]!, input.planned[i]!.pool)]!.push(i);
+  }
   const tiers = tierCompare(input.planned);
   // Logged claims bucketed by day (a counting sort: days are integers), so each month's list
   // is already in date order.
@@ -435,27 +443,34 @@ export function runLedger(input: LedgerInput): LedgerResult {
   const loggedDay = new Int32Array(input.logged.length);
   const loggedNeed = new Float64Array(input.logged.length);
   const loggedNames = new Uint8Array(input.logged.length);
-  input.logged.forEach((c, i) => {
+  const loggedCastings = new Uint8Array(input.logged.length);
+  for (let i = 0; i < input.logged.length; i++) {
+    const c = input.logged[i]!;
     loggedDay[i] = c.day;
     loggedNeed[i] = c.need;
     loggedNames[i] = c.draws.length > 0 ? 1 : 0;
-  });
+    loggedCastings[i] = c.pool === "castings" ? 1 : 0;
+  }
   if (spans.length > 0 && input.logged.length > 0) {
     const first = spans[0]!.startDay;
     const width = spans[spans.length - 1]!.endDay - first;
     const counts = new Int32Array(width + 1);
-    for (const c of input.logged)
-      if (c.day >= first && c.day < first + width) counts[c.day - first + 1]!++;
+    const n = input.logged.length;
+    for (let i = 0; i < n; i++) {
+      const day = loggedDay[i]!;
+      if (day >= first && day < first + width) counts[day - first + 1]!++;
+    }
     for (let d = 1; d <= width; d++) counts[d]! += counts[d - 1]!;
     const order = new Int32Array(counts[width]!);
-    input.logged.forEach((c, i) => {
-      if (c.day >= first && c.day < first + width) order[counts[c.day - first]!++] = i;
-    });
+    for (let i = 0; i < n; i++) {
+      const day = loggedDay[i]!;
+      if (day >= first && day < first + width) order[counts[day - first]!++] = i;
+    }
     let m = 0;
-    for (const i of order) {
-      const c = input.logged[i]!;
-      while (c.day >= spans[m]!.endDay) m++;
-      loggedByMonth[slot(m, c.pool)]!.push(i);
+    for (let k = 0; k < order.length; k++) {
+      const i = order[k]!;
+      while (loggedDay[i]! >= spans[m]!.endDay) m++;
+      loggedByMonth[m * 2 + (loggedCastings[i] === 1 ? 0 : 1)]!.push(i);
     }
   }
 
@@ -503,7 +518,8 @@ export function runLedger(input: LedgerInput): LedgerResult {
     shares = new Float64Array(scratchSize);
   };
 
-  spans.forEach((span, m) => {
+  for (let m = 0; m < spans.length; m++) {
+    const span = spans[m]!;
     if (m === input.snapshotAtMonth) {
       result.snapshot = [];
       for (const pool of pools) {
@@ -610,7 +626,8 @@ export function runLedger(input: LedgerInput): LedgerResult {
       //    A group served before others of the month draws first from the lots those cannot use.
       const planned = plannedByMonth[slot(m, pool)]!;
       const waiting = new Waiting(span.startDay, span.endDay);
-      for (const i of planned) waiting.add(input.planned[i]!.day, input.planned[i]!.cleanOnly, 1);
+      for (let k = 0; k < planned.length; k++)
+        waiting.add(input.planned[planned[k]!]!.day, input.planned[planned[k]!]!.cleanOnly, 1);
       for (let t = 0; t < planned.length;) {
         const head = input.planned[planned[t]!]!;
         let end = t + 1;
@@ -618,7 +635,8 @@ export function runLedger(input: LedgerInput): LedgerResult {
         for (let k = t; k < end; k++)
           waiting.add(input.planned[planned[k]!]!.day, input.planned[planned[k]!]!.cleanOnly, -1);
         const wanted = waiting.count > 0 ? waiting.wants : undefined;
-        const [lo, hi] = shelf.range(head.day, keep);
+        const lo = shelf.usableFrom(head.day, keep);
+        const hi = shelf.usableTo(head.day);
         const cleanGroup: number[] = [];
         const otherGroup: number[] = [];
         let needClean = 0;
@@ -696,7 +714,7 @@ export function runLedger(input: LedgerInput): LedgerResult {
         shortfall: gap > AMOUNT_EPSILON * Math.max(1, demand) ? gap : 0,
       });
     }
-  });
+  }
   return result;
 }
 

@@ -235,10 +235,15 @@ export function buildDemand(
     }
   }
 
-  const logged: LoggedClaim[] = [];
+  // Tens of thousands of logs in a long history: a plain loop, the planting looked up once per
+  // run of its logs, and no closure per log.
+  const applications = inputs.logs.applications;
+  const logged: LoggedClaim[] = new Array<LoggedClaim>(applications.length);
   const replaced = new Set<string>();
-  inputs.logs.applications.forEach((a, i) => {
-    const pl = plantings.get(a.plantingId);
+  let pl: { p: DemandPlanting; rules: FeedingRuleInput[] } | undefined;
+  for (let i = 0; i < applications.length; i++) {
+    const a = applications[i]!;
+    if (pl?.p.id !== a.plantingId) pl = plantings.get(a.plantingId);
     if (!pl)
       throw new EngineInputError(
         `logs.applications[${i}].plantingId`,
@@ -246,7 +251,9 @@ export function buildDemand(
       );
     const day = toDayNumber(a.date, "logs.applications[].date");
     // The planting's first rule of that material holds its recipe (tea ratio, dilution).
-    const rule = pl.rules.find((r) => r.material === a.material);
+    let rule: FeedingRuleInput | undefined;
+    for (let k = 0; k < pl.rules.length && !rule; k++)
+      if (pl.rules[k]!.material === a.material) rule = pl.rules[k];
     let need: number;
     if (a.draws.length > 0) need = a.draws.reduce((s, d) => s + d.amount, 0);
     else if (a.material === "castings") need = a.amount;
@@ -256,8 +263,8 @@ export function buildDemand(
     // Planned feedings all fall after asOf: only a log that names one, or is dated after asOf, can replace it.
     if (a.plannedFeedingId !== null) replaced.add(a.plannedFeedingId);
     else if (day > ctx.asOfDay) replaced.add(feedingId(a.plantingId, a.material, a.date));
-    logged.push({ index: i, pool: POOL_OF[a.material], day, need, draws: a.draws });
-  });
+    logged[i] = { index: i, pool: POOL_OF[a.material], day, need, draws: a.draws };
+  }
   // A logged application replaces the planned occurrence it fulfils.
   const planned = replaced.size === 0 ? planted : planted.filter((c) => !replaced.has(c.id));
   return { planned, logged };
