@@ -105,43 +105,47 @@ export interface LedgerResult {
   snapshot?: LedgerLot[];
 }
 
-interface Live {
-  id: string;
-  made: number;
-  expires: number;
-  remaining: number;
-  manure: boolean;
-  binId: string | null;
-}
-
 const CLEAN_ONLY = [false] as const;
 const MANURE_FIRST = [true, false] as const;
 
+/** Could a feeding still waiting use a lot usable from `made` to the day before `expires`? */
+type Wanted = (made: number, expires: number, manure: boolean) => boolean;
+
+/**
+ * One pool's lots in made-day order, kept as parallel arrays (a long history has thousands of
+ * daily leachate lots; one object each would be copied by every young-generation collection).
+ */
 class Shelf {
-  lots: Live[];
-  made: Float64Array;
+  /** The lots as given (sorted by made day): ids and bins are read from here, never changed. */
+  readonly lots: readonly LedgerLot[];
+  readonly made: Float64Array;
+  readonly expires: Float64Array;
+  readonly remaining: Float64Array;
+  readonly manure: Uint8Array;
   head = 0;
   /** Every lot in [head, drained) has nothing left (stock is only ever taken, never put back). */
   drained = 0;
-  constructor(lots: readonly LedgerLot[], keep: number) {
-    this.lots = new Array<Live>(lots.length);
+  /** Scratch for draw(): which lots a waiting feeding wants. */
+  private flags = new Uint8Array(64);
+  constructor(lots: LedgerLot[], keep: number) {
     let sorted = true;
-    for (let i = 0; i < lots.length; i++) {
-      const l = lots[i]!;
-      this.lots[i] = {
-        id: l.id,
-        made: l.madeDay,
-        expires: l.madeDay + keep,
-        remaining: l.amount,
-        manure: l.manure,
-        binId: l.binId,
-      };
-      if (i > 0 && l.madeDay < lots[i - 1]!.madeDay) sorted = false;
-    }
+    for (let i = 1; i < lots.length && sorted; i++)
+      if (lots[i]!.madeDay < lots[i - 1]!.madeDay) sorted = false;
     // Lots mostly come in date order (a bin's days one after another); sort (stable) only when not.
-    if (!sorted) this.lots.sort((a, b) => a.made - b.made);
-    this.made = new Float64Array(this.lots.length);
-    for (let i = 0; i < this.lots.length; i++) this.made[i] = this.lots[i]!.made;
+    if (!sorted) lots.sort((a, b) => a.madeDay - b.madeDay);
+    this.lots = lots;
+    const n = lots.length;
+    this.made = new Float64Array(n);
+    this.expires = new Float64Array(n);
+    this.remaining = new Float64Array(n);
+    this.manure = new Uint8Array(n);
+    for (let i = 0; i < n; i++) {
+      const l = lots[i]!;
+      this.made[i] = l.madeDay;
+      this.expires[i] = l.madeDay + keep;
+      this.remaining[i] = l.amount;
+      this.manure[i] = l.manure ? 1 : 0;
+    }
   }
   private firstMadeAfter(day: number): number {
     let lo = this.head;
@@ -153,7 +157,7 @@ class Shelf {
     }
     return lo;
   }
-  /** Start of the lots usable on `day`: [usableFrom, usableTo) (keep is the same for every lot of a pool). */
+  /** Start of the lots usable on `day`, [usableFrom, usableTo) (keep is the same for every lot of a pool). */
   usableFrom(day: number, keep: number): number {
     return this.firstMadeAfter(day - keep);
   }
@@ -164,16 +168,14 @@ class Shelf {
   /** `lo` moved past the drained lots at its start: they add nothing to a sum or a draw. */
   skipDrained(lo: number, hi: number): number {
     let i = Math.max(this.drained, this.head);
-    while (i < hi && this.lots[i]!.remaining === 0) i++;
+    while (i < hi && this.remaining[i] === 0) i++;
     this.drained = i;
     return Math.max(lo, i);
   }
   available(lo: number, hi: number, cleanOnly: boolean): number {
     let s = 0;
-    for (let i = this.skipDrained(lo, hi); i < hi; i++) {
-      const l = this.lots[i]!;
-      if (!cleanOnly || !l.manure) s += l.remaining;
-    }
+    for (let i = this.skipDrained(lo, hi); i < hi; i++)
+      if (!cleanOnly || this.manure[i] === 0) s += this.remaining[i]!;
     return s;
   }
   /**
@@ -187,30 +189,33 @@ class Shelf {
     amount: number,
     mode: "clean-only" | "manure-first",
     out?: { lotId: string; amount: number }[],
-    wanted?: (lot: Live) => boolean,
+    wanted?: Wanted,
   ): number {
     let left = amount;
     const passes = mode === "clean-only" ? CLEAN_ONLY : MANURE_FIRST;
     const start = this.skipDrained(lo, hi);
+    const remaining = this.remaining;
     let flags: Uint8Array | undefined;
     if (wanted) {
-      flags = new Uint8Array(hi - start);
-      for (let i = start; i < hi; i++) {
-        const l = this.lots[i]!;
-        flags[i - start] = l.remaining > 0 && wanted(l) ? 1 : 0;
-      }
+      if (this.flags.length < hi - start) this.flags = new Uint8Array(2 * (hi - start));
+      flags = this.flags;
+      for (let i = start; i < hi; i++)
+        flags[i - start] =
+          remaining[i]! > 0 && wanted(this.made[i]!, this.expires[i]!, this.manure[i] === 1)
+            ? 1
+            : 0;
     }
     for (let round = flags ? 0 : 1; round <= 1; round++) {
-      for (const wantManure of passes) {
+      for (let p = 0; p < passes.length; p++) {
+        const wantManure = passes[p] ? 1 : 0;
         for (let i = start; i < hi && left > AMOUNT_EPSILON; i++) {
-          const l = this.lots[i]!;
-          if (l.manure !== wantManure || l.remaining <= 0) continue;
+          if (this.manure[i] !== wantManure || remaining[i]! <= 0) continue;
           if (flags && flags[i - start] !== round) continue;
-          const take = Math.min(l.remaining, left);
-          l.remaining -= take;
-          if (l.remaining < AMOUNT_EPSILON) l.remaining = 0;
+          const take = Math.min(remaining[i]!, left);
+          remaining[i]! -= take;
+          if (remaining[i]! < AMOUNT_EPSILON) remaining[i] = 0;
           left -= take;
-          out?.push({ lotId: l.id, amount: take });
+          out?.push({ lotId: this.lots[i]!.id, amount: take });
         }
       }
     }
@@ -220,23 +225,24 @@ class Shelf {
   onHand(day: number): number {
     let s = 0;
     for (let i = this.head; i < this.lots.length && this.made[i]! < day; i++)
-      s += this.lots[i]!.remaining;
+      s += this.remaining[i]!;
     return s;
   }
   made_in(from: number, to: number): number {
     let s = 0;
     for (let i = this.firstMadeAfter(from - 1); i < this.lots.length && this.made[i]! < to; i++)
-      s += this.lots[i]!.remaining;
+      s += this.remaining[i]!;
     return s;
   }
   /** Drops lots expired by `day` (a prefix: expiry is made + keep). */
   ageOut(day: number, pool: Pool, out: LedgerResult["agedOut"]): number {
     let lost = 0;
-    while (this.head < this.lots.length && this.lots[this.head]!.expires <= day) {
-      const l = this.lots[this.head]!;
-      if (l.remaining > AMOUNT_EPSILON) {
-        lost += l.remaining;
-        out.push({ lotId: l.id, pool, day: l.expires, amount: l.remaining, binId: l.binId });
+    while (this.head < this.lots.length && this.expires[this.head]! <= day) {
+      const left = this.remaining[this.head]!;
+      if (left > AMOUNT_EPSILON) {
+        const l = this.lots[this.head]!;
+        lost += left;
+        out.push({ lotId: l.id, pool, day: this.expires[this.head]!, amount: left, binId: l.binId });
       }
       this.head++;
     }
@@ -255,13 +261,13 @@ function drawShared(
   day: number,
   amount: number,
   mode: "clean-only" | "manure-first",
-  group: readonly number[],
+  group: ArrayLike<number>,
   from: number,
   n: number,
   weights: Float64Array,
   out: Float64Array,
   records: LedgerResult["plannedDraws"],
-  wanted?: (lot: Live) => boolean,
+  wanted?: Wanted,
 ): void {
   let total = 0;
   for (let k = 0; k < n; k++) total += weights[k]!;
@@ -315,12 +321,12 @@ class Waiting {
     return s;
   }
   /** Could a waiting feeding use `lot` (usable from its made day to the day before it expires)? */
-  wants = (lot: Live): boolean => {
-    const from = Math.max(lot.made, this.startDay);
-    const to = Math.min(lot.expires, this.endDay);
+  wants: Wanted = (made, expires, manure) => {
+    const from = Math.max(made, this.startDay);
+    const to = Math.min(expires, this.endDay);
     if (to <= from) return false;
     if (this.before(this.any, to) - this.before(this.any, from) > 0) return true;
-    return !lot.manure && this.before(this.cleanOnly, to) - this.before(this.cleanOnly, from) > 0;
+    return !manure && this.before(this.cleanOnly, to) - this.before(this.cleanOnly, from) > 0;
   };
 }
 
@@ -333,6 +339,24 @@ function drawLists(
   const lists = new Array<{ lotId: string; amount: number }[] | undefined>(claims.length);
   for (let i = 0; i < claims.length; i++) lists[i] = claims[i]!.day >= from ? [] : undefined;
   return lists;
+}
+
+/**
+ * `order` grouped by slot (`slots[k]` is the slot of `order[k]`), each group keeping the order
+ * given: slot s is items[start[s]] … items[start[s + 1] − 1]. One flat array, not a list per slot.
+ */
+function bucketBySlot(
+  order: ArrayLike<number>,
+  slots: Int32Array,
+  slotCount: number,
+): { items: Int32Array; start: Int32Array } {
+  const start = new Int32Array(slotCount + 1);
+  for (let k = 0; k < slots.length; k++) start[slots[k]! + 1]!++;
+  for (let s = 1; s <= slotCount; s++) start[s]! += start[s - 1]!;
+  const next = start.slice(0, slotCount);
+  const items = new Int32Array(order.length);
+  for (let k = 0; k < order.length; k++) items[next[slots[k]!]!++] = order[k]!;
+  return { items, start };
 }
 
 /**
@@ -428,16 +452,17 @@ export function runLedger(input: LedgerInput): LedgerResult {
   // Planned claims per month and pool, each list in tier order (a sub-list of one sorted whole).
   const plannedMonth = new Int32Array(input.planned.length);
   input.planned.forEach((c, i) => (plannedMonth[i] = c.need > 0 ? monthIndex(c.day) : -1));
-  const plannedByMonth: number[][] = Array.from({ length: spans.length * 2 }, () => []);
   const inTierOrder = tierOrder(input.planned, (i) => plannedMonth[i]! >= 0);
+  const plannedSlots = new Int32Array(inTierOrder.length);
   for (let k = 0; k < inTierOrder.length; k++) {
     const i = inTierOrder[k]!;
-    plannedByMonth[slot(plannedMonth[i]!, input.planned[i]!.pool)]!.push(i);
+    plannedSlots[k] = slot(plannedMonth[i]!, input.planned[i]!.pool);
   }
+  const plannedByMonth = bucketBySlot(inTierOrder, plannedSlots, spans.length * 2);
   const tiers = tierCompare(input.planned);
   // Logged claims bucketed by day (a counting sort: days are integers), so each month's list
   // is already in date order.
-  const loggedByMonth: number[][] = Array.from({ length: spans.length * 2 }, () => []);
+  let loggedByMonth = bucketBySlot(new Int32Array(0), new Int32Array(0), spans.length * 2);
   // Day, need and "names its lots" of each logged claim, copied once: the replay reads them in
   // date order, which is not the order the claims were built in.
   const loggedDay = new Int32Array(input.logged.length);
@@ -467,11 +492,13 @@ export function runLedger(input: LedgerInput): LedgerResult {
       if (day >= first && day < first + width) order[counts[day - first]!++] = i;
     }
     let m = 0;
+    const slots = new Int32Array(order.length);
     for (let k = 0; k < order.length; k++) {
       const i = order[k]!;
       while (loggedDay[i]! >= spans[m]!.endDay) m++;
-      loggedByMonth[m * 2 + (loggedCastings[i] === 1 ? 0 : 1)]!.push(i);
+      slots[k] = m * 2 + (loggedCastings[i] === 1 ? 0 : 1);
     }
+    loggedByMonth = bucketBySlot(order, slots, spans.length * 2);
   }
 
   // Adjustments bucketed like logged claims (those before the first span are already in the lots).
@@ -484,12 +511,11 @@ export function runLedger(input: LedgerInput): LedgerResult {
   for (const list of adjustByMonth) list.sort((a, b) => a.day - b.day);
   /** Applies one adjustment to a lot on the shelf that day; returns the change actually made. */
   const adjustLot = (adj: LedgerAdjustment): number => {
-    const at = byId().get(adj.lotId)!;
-    const lot = at.shelf.lots[at.index]!;
-    if (adj.day < lot.made || adj.day >= lot.expires) return 0;
-    const change = Math.max(-lot.remaining, adj.amount);
-    lot.remaining += change;
-    if (lot.remaining < AMOUNT_EPSILON) lot.remaining = 0;
+    const { shelf, index: i } = byId().get(adj.lotId)!;
+    if (adj.day < shelf.made[i]! || adj.day >= shelf.expires[i]!) return 0;
+    const change = Math.max(-shelf.remaining[i]!, adj.amount);
+    shelf.remaining[i]! += change;
+    if (shelf.remaining[i]! < AMOUNT_EPSILON) shelf.remaining[i] = 0;
     return change;
   };
 
@@ -506,6 +532,9 @@ export function runLedger(input: LedgerInput): LedgerResult {
     overdrawn: [],
   };
 
+  // Scratch for one tier of planned claims: its clean-only claims and the others.
+  const cleanGroup = new Int32Array(input.planned.length);
+  const otherGroup = new Int32Array(input.planned.length);
   // Scratch for one feeding group at a time: amounts named, weights and shares.
   let scratchSize = 16;
   let named = new Float64Array(scratchSize);
@@ -526,14 +555,14 @@ export function runLedger(input: LedgerInput): LedgerResult {
         const shelf = shelves[pool];
         for (let i = shelf.head; i < shelf.lots.length; i++) {
           const l = shelf.lots[i]!;
-          if (l.remaining > 0)
+          if (shelf.remaining[i]! > 0)
             result.snapshot.push({
               id: l.id,
               pool,
-              madeDay: l.made,
-              amount: l.remaining,
+              madeDay: shelf.made[i]!,
+              amount: shelf.remaining[i]!,
               binId: l.binId,
-              manure: l.manure,
+              manure: shelf.manure[i] === 1,
             });
         }
       }
@@ -549,24 +578,20 @@ export function runLedger(input: LedgerInput): LedgerResult {
       const adjustments = adjustByMonth[slot(m, pool)]!;
       let adjusted = 0;
       let nextAdjustment = 0;
-      const adjustBefore = (day: number) => {
-        for (; nextAdjustment < adjustments.length; nextAdjustment++) {
-          const adj = adjustments[nextAdjustment]!;
-          if (adj.day >= day) break;
-          adjusted += adjustLot(adj);
-        }
-      };
 
       // 1. What was done: logged applications, in date order. Those that name no lot and fall
       //    on the same day draw together (oldest first) and share the result in proportion.
-      const logged = loggedByMonth[slot(m, pool)]!;
-      for (let t = 0; t < logged.length;) {
+      // (Plain loops, no closures here: a total a closure writes to is boxed on every add.)
+      const logged = loggedByMonth.items;
+      const loggedEnd = loggedByMonth.start[slot(m, pool) + 1]!;
+      for (let t = loggedByMonth.start[slot(m, pool)]!; t < loggedEnd;) {
         const firstDay = loggedDay[logged[t]!]!;
-        adjustBefore(firstDay);
+        while (nextAdjustment < adjustments.length && adjustments[nextAdjustment]!.day < firstDay)
+          adjusted += adjustLot(adjustments[nextAdjustment++]!);
         let end = t + 1;
         if (loggedNames[logged[t]!] === 0)
           while (
-            end < logged.length &&
+            end < loggedEnd &&
             loggedDay[logged[end]!] === firstDay &&
             loggedNames[logged[end]!] === 0
           )
@@ -582,11 +607,11 @@ export function runLedger(input: LedgerInput): LedgerResult {
             const out = result.loggedDraws?.[i];
             for (const d of input.logged[i]!.draws) {
               const at = byId().get(d.lotId);
-              const lot = at && at.pool === pool ? at.shelf.lots[at.index]! : undefined;
-              const take = lot ? Math.min(lot.remaining, Math.max(0, d.amount)) : 0;
-              if (lot && take > 0) {
-                lot.remaining -= take;
-                out?.push({ lotId: lot.id, amount: take });
+              const lot = at && at.pool === pool ? at.index : -1;
+              const take = lot >= 0 ? Math.min(shelf.remaining[lot]!, Math.max(0, d.amount)) : 0;
+              if (lot >= 0 && take > 0) {
+                shelf.remaining[lot]! -= take;
+                out?.push({ lotId: shelf.lots[lot]!.id, amount: take });
               }
               got += take;
               if (take < d.amount - AMOUNT_EPSILON)
@@ -619,36 +644,39 @@ export function runLedger(input: LedgerInput): LedgerResult {
       }
 
       // Adjustments are logs too (on or before asOf), so they all come before planned claims.
-      adjustBefore(Infinity);
+      while (nextAdjustment < adjustments.length)
+        adjusted += adjustLot(adjustments[nextAdjustment++]!);
 
       // 2. What is planned: tier by tier. Within a tier, clean-only claims draw first (clean lots),
       //    then the others (manure-fed lots first); each group draws once and shares pro rata.
       //    A group served before others of the month draws first from the lots those cannot use.
-      const planned = plannedByMonth[slot(m, pool)]!;
+      const planned = plannedByMonth.items;
+      const plannedFrom = plannedByMonth.start[slot(m, pool)]!;
+      const plannedEnd = plannedByMonth.start[slot(m, pool) + 1]!;
       const waiting = new Waiting(span.startDay, span.endDay);
-      for (let k = 0; k < planned.length; k++)
+      for (let k = plannedFrom; k < plannedEnd; k++)
         waiting.add(input.planned[planned[k]!]!.day, input.planned[planned[k]!]!.cleanOnly, 1);
-      for (let t = 0; t < planned.length;) {
+      for (let t = plannedFrom; t < plannedEnd;) {
         const head = input.planned[planned[t]!]!;
         let end = t + 1;
-        while (end < planned.length && tiers(planned[t]!, planned[end]!) === 0) end++;
+        while (end < plannedEnd && tiers(planned[t]!, planned[end]!) === 0) end++;
         for (let k = t; k < end; k++)
           waiting.add(input.planned[planned[k]!]!.day, input.planned[planned[k]!]!.cleanOnly, -1);
         const wanted = waiting.count > 0 ? waiting.wants : undefined;
         const lo = shelf.usableFrom(head.day, keep);
         const hi = shelf.usableTo(head.day);
-        const cleanGroup: number[] = [];
-        const otherGroup: number[] = [];
+        let nClean = 0;
+        let nOther = 0;
         let needClean = 0;
         let needOther = 0;
         for (let k = t; k < end; k++) {
           const i = planned[k]!;
           const c = input.planned[i]!;
           if (c.cleanOnly) {
-            cleanGroup.push(i);
+            cleanGroup[nClean++] = i;
             needClean += c.need;
           } else {
-            otherGroup.push(i);
+            otherGroup[nOther++] = i;
             needOther += c.need;
           }
         }
@@ -658,14 +686,14 @@ export function runLedger(input: LedgerInput): LedgerResult {
         // Clean-only claims can have at most the clean stock; everyone shares when short.
         const shareClean = needClean > 0 ? Math.min(1, clean / needClean, all / need) : 1;
         const shareAll = Math.min(1, all / need);
-        const serve = (
-          group: number[],
-          groupNeed: number,
-          share: number,
-          mode: "clean-only" | "manure-first",
-        ) => {
-          const n = group.length;
-          if (n === 0) return;
+        // The clean-only group first, then the others.
+        for (let g = 0; g < 2; g++) {
+          const group = g === 0 ? cleanGroup : otherGroup;
+          const n = g === 0 ? nClean : nOther;
+          if (n === 0) continue;
+          const groupNeed = g === 0 ? needClean : needOther;
+          const share = g === 0 ? shareClean : shareAll;
+          const mode = g === 0 ? "clean-only" : "manure-first";
           if (n > scratchSize) grow(n);
           for (let k = 0; k < n; k++) weights[k] = input.planned[group[k]!]!.need;
           drawShared(
@@ -692,9 +720,7 @@ export function runLedger(input: LedgerInput): LedgerResult {
             demand += c.need;
             allocated += got;
           }
-        };
-        serve(cleanGroup, needClean, shareClean, "clean-only");
-        serve(otherGroup, needOther, shareAll, "manure-first");
+        }
         t = end;
       }
 

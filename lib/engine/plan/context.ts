@@ -25,6 +25,8 @@ export interface PlanContext {
   pricePerKg: number;
   teaCastingsPerWater: number;
   castingsDensityKgPerL: number;
+  /** Day number of each logged application (inputs.logs.applications[i].date), read once. */
+  applicationDays: Int32Array;
 }
 
 function wholeDays(v: number, field: string, max: number): number {
@@ -47,7 +49,14 @@ export function planContext(inputs: GardenInputs, options: PlanOptions): PlanCon
   inputs.stockLots.forEach((l, i) => see(l.madeOn, "stockLots", i, "madeOn"));
   inputs.logs.harvests.forEach((h, i) => see(h.date, "logs.harvests", i, "date"));
   inputs.logs.drains.forEach((d, i) => see(d.date, "logs.drains", i, "date"));
-  inputs.logs.applications.forEach((a, i) => see(a.date, "logs.applications", i, "date"));
+  const applications = inputs.logs.applications;
+  const applicationDays = new Int32Array(applications.length);
+  for (let i = 0; i < applications.length; i++) {
+    const date = applications[i]!.date;
+    const day = checkedDayNumber(date) ?? toDayNumber(date, `logs.applications[${i}].date`);
+    applicationDays[i] = day;
+    if (day < first) first = day;
+  }
   const firstMonth = fromDayNumber(first).slice(0, 7);
   const lead = monthSpans(firstMonth, 1, "history")[0]!;
   const before: MonthSpan[] = [];
@@ -78,5 +87,6 @@ export function planContext(inputs: GardenInputs, options: PlanOptions): PlanCon
     pricePerKg: s.castingsPricePerKg ?? priceDefault,
     teaCastingsPerWater: s.teaCastingsPerWater ?? dflt("teaCastingsPerWater"),
     castingsDensityKgPerL: dflt("castingsBulkDensityKgPerL"),
+    applicationDays,
   };
 }

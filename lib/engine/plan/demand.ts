@@ -32,10 +32,15 @@ export interface PlannedClaim extends LedgerClaim {
   explanation: Explanation;
 }
 
-/** A logged application as the ledger needs it; `index` points into inputs.logs.applications. */
+/**
+ * A logged application as the ledger needs it; `index` points into inputs.logs.applications, or
+ * is -1 for the summed history of one day and pool (see buildDemand).
+ */
 export interface LoggedClaim extends LedgerLogged {
   index: number;
 }
+
+const NO_DRAWS: LoggedClaim["draws"] = [];
 
 export const feedingId = (plantingId: string, material: Material, date: IsoDate) =>
   `${plantingId}:${material}:${date}`;
@@ -237,9 +242,22 @@ export function buildDemand(
 
   // Tens of thousands of logs in a long history: a plain loop, the planting looked up once per
   // run of its logs, and no closure per log.
+  //
+  // Before the plan's first month a log only matters as stock drawn: nothing shows it one by one,
+  // and the ledger draws a day's logs that name no lot together as one draw (oldest lots first)
+  // and shares it. So those are summed per day and pool here into one claim (index -1), in the
+  // order the ledger would add them, and the draw is the same. A day with a history log that
+  // names its lots keeps every log of it as its own claim, in order, as the ledger expects.
   const applications = inputs.logs.applications;
-  const logged: LoggedClaim[] = new Array<LoggedClaim>(applications.length);
+  const days = ctx.applicationDays;
+  const logged: LoggedClaim[] = [];
   const replaced = new Set<string>();
+  const history = ctx.planStartDay - ctx.spans[0]!.startDay; // days before the plan
+  const summed = new Float64Array(2 * Math.max(0, history)); // need per (day, pool)
+  const summedAny = new Uint8Array(summed.length);
+  const namedDays = new Set<number>();
+  for (let i = 0; i < applications.length; i++)
+    if (days[i]! < ctx.planStartDay && applications[i]!.draws.length > 0) namedDays.add(days[i]!);
   let pl: { p: DemandPlanting; rules: FeedingRuleInput[] } | undefined;
   for (let i = 0; i < applications.length; i++) {
     const a = applications[i]!;
@@ -249,7 +267,7 @@ export function buildDemand(
         `logs.applications[${i}].plantingId`,
         `no planting with id "${a.plantingId}"`,
       );
-    const day = toDayNumber(a.date, "logs.applications[].date");
+    const day = days[i]!;
     // The planting's first rule of that material holds its recipe (tea ratio, dilution).
     let rule: FeedingRuleInput | undefined;
     for (let k = 0; k < pl.rules.length && !rule; k++)
@@ -263,8 +281,22 @@ export function buildDemand(
     // Planned feedings all fall after asOf: only a log that names one, or is dated after asOf, can replace it.
     if (a.plannedFeedingId !== null) replaced.add(a.plannedFeedingId);
     else if (day > ctx.asOfDay) replaced.add(feedingId(a.plantingId, a.material, a.date));
-    logged[i] = { index: i, pool: POOL_OF[a.material], day, need, draws: a.draws };
+    const pool = POOL_OF[a.material];
+    if (day < ctx.planStartDay && !namedDays.has(day)) {
+      const at = 2 * (day - ctx.spans[0]!.startDay) + (pool === "castings" ? 0 : 1);
+      summed[at]! += Math.max(0, need); // what the ledger's shared draw asks of each
+      summedAny[at] = 1;
+    } else logged.push({ index: i, pool, day, need, draws: a.draws });
   }
+  for (let at = 0; at < summed.length; at++)
+    if (summedAny[at] === 1)
+      logged.push({
+        index: -1,
+        pool: at % 2 === 0 ? "castings" : "leachate",
+        day: ctx.spans[0]!.startDay + (at >> 1),
+        need: summed[at]!,
+        draws: NO_DRAWS,
+      });
   // A logged application replaces the planned occurrence it fulfils.
   const planned = replaced.size === 0 ? planted : planted.filter((c) => !replaced.has(c.id));
   return { planned, logged };
