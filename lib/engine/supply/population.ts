@@ -123,6 +123,35 @@ function checkParams(p: PopulationParams, field: string): PopulationParams {
   };
 }
 
+/** Room left under the density ceiling: 1 when empty, 0 at or over it. */
+function densityFactor(committed: number, ceilingWorms: number): number {
+  return Math.max(0, 1 - committed / ceilingWorms);
+}
+
+function scaleRing(ring: Float64Array, length: number, k: number): void {
+  for (let s = 0; s < length; s++) ring[s] = (ring[s] as number) * k;
+}
+
+/** One day of the run. A juvenile of age a weighs (a + 1) / M of an adult (it grows linearly to maturity). */
+function populationDay(
+  day: number,
+  adults: number,
+  jTotal: number,
+  cTotal: number,
+  ageSum: number,
+  adultKg: number,
+  M: number,
+): PopulationDay {
+  return {
+    day,
+    adults,
+    juveniles: jTotal,
+    cocoons: cTotal,
+    worms: adults + jTotal,
+    biomassKg: adults * adultKg + ((ageSum + jTotal) / M) * adultKg,
+  };
+}
+
 export function simulatePopulation(input: PopulationInput, field = "population"): PopulationRun {
   const p = checkParams({ ...defaultPopulationParams(), ...input.params }, `${field}.params`);
   const start = requireNonNegative(input.startWorms, `${field}.startWorms`, 10_000_000);
@@ -145,13 +174,14 @@ export function simulatePopulation(input: PopulationInput, field = "population")
   const cocoons = new Float64Array(I); // slot d % I: laid on day d
   const juveniles = new Float64Array(M); // slot d % M: hatched on day d
   let adults = start;
+  // The day loop below writes these running figures thousands of times: no closure captures them
+  // (a captured number is boxed anew on every write, which the bench's years of days feel).
   let ceilingWorms = ceilingKg / adultKg;
-  const density = (committed: number) => Math.max(0, 1 - committed / ceilingWorms);
   let pipeline = 0; // juveniles + hatchlings still inside cocoons
   if (structure === "adults-with-cocoons") {
     // Filled slot by slot so the committed count already includes earlier slots.
     for (let s = 0; s < I; s++) {
-      const laid = adults * layPerAdultDay * density(adults + pipeline);
+      const laid = adults * layPerAdultDay * densityFactor(adults + pipeline, ceilingWorms);
       cocoons[s] = laid;
       pipeline += laid * yieldPerCocoon;
     }
@@ -163,29 +193,12 @@ export function simulatePopulation(input: PopulationInput, field = "population")
   let ageSum = 0;
   let cTotal = 0;
   for (let s = 0; s < I; s++) cTotal += cocoons[s] as number;
-  // A juvenile of age a weighs (a + 1) / M of an adult (it grows linearly to maturity).
-  const snapshot = (t: number): PopulationDay => ({
-    day: t,
-    adults,
-    juveniles: jTotal,
-    cocoons: cTotal,
-    worms: adults + jTotal,
-    biomassKg: adults * adultKg + ((ageSum + jTotal) / M) * adultKg,
-  });
-  const scaleJuveniles = (k: number) => {
-    for (let s = 0; s < M; s++) juveniles[s] = (juveniles[s] as number) * k;
-    jTotal *= k;
-    ageSum *= k;
-  };
-
   const totals = input.totalsOnly;
-  const record = (t: number) => {
-    if (!totals) return void series.push(snapshot(t));
-    totals.worms[t] = adults + jTotal;
-    totals.kg[t] = adults * adultKg + ((ageSum + jTotal) / M) * adultKg;
-  };
-  const series: PopulationDay[] = [snapshot(0)];
-  if (totals) record(0);
+  const series: PopulationDay[] = [populationDay(0, adults, jTotal, cTotal, ageSum, adultKg, M)];
+  if (totals) {
+    totals.worms[0] = adults + jTotal;
+    totals.kg[0] = adults * adultKg + ((ageSum + jTotal) / M) * adultKg;
+  }
   for (let t = 1; t <= days; t++) {
     if (input.surfaceOnDay) ceilingWorms = ceilingKgFor(input.surfaceOnDay(t)) / adultKg;
     const change = input.changes?.get(t);
@@ -195,7 +208,9 @@ export function simulatePopulation(input: PopulationInput, field = "population")
       if (total > 0) {
         const k = target / total;
         adults *= k;
-        scaleJuveniles(k);
+        scaleRing(juveniles, M, k);
+        jTotal *= k;
+        ageSum *= k;
       } else adults = target;
     }
     const ci = t % I;
@@ -203,7 +218,9 @@ export function simulatePopulation(input: PopulationInput, field = "population")
     const hatched = (cocoons[ci] as number) * yieldPerCocoon;
     if (survive < 1) {
       adults *= survive;
-      scaleJuveniles(survive);
+      scaleRing(juveniles, M, survive);
+      jTotal *= survive;
+      ageSum *= survive;
     }
     // Everyone ages a day; the slot hatched M days ago (age M − 1) matures.
     const maturing = juveniles[ji] as number;
@@ -214,11 +231,15 @@ export function simulatePopulation(input: PopulationInput, field = "population")
     jTotal += hatched;
     const committed = adults + jTotal + (cTotal - (cocoons[ci] as number)) * yieldPerCocoon;
     cTotal -= cocoons[ci] as number;
-    cocoons[ci] = adults * layPerAdultDay * density(committed);
+    cocoons[ci] = adults * layPerAdultDay * densityFactor(committed, ceilingWorms);
     cTotal += cocoons[ci] as number;
-    record(t);
+    if (totals) {
+      totals.worms[t] = adults + jTotal;
+      totals.kg[t] = adults * adultKg + ((ageSum + jTotal) / M) * adultKg;
+    } else series.push(populationDay(t, adults, jTotal, cTotal, ageSum, adultKg, M));
   }
-  if (totals && days > 0) series.push(snapshot(days));
+  if (totals && days > 0)
+    series.push(populationDay(days, adults, jTotal, cTotal, ageSum, adultKg, M));
   return { series, final: series[series.length - 1] as PopulationDay, ceilingKg, params: p };
 }
 
