@@ -122,8 +122,18 @@ export function daysBetween(a: IsoDate, b: IsoDate): number {
 }
 
 /** Month 1–12 of a day number. */
+// Civil from days (H. Hinnant, as daysFromCivil above): no Date object, since supply asks the
+// month of every day of every bin's forecast.
 export function monthOfDay(day: number): number {
-  return new Date(day * MS_PER_DAY).getUTCMonth() + 1;
+  const z = Math.floor(day) + 719468;
+  const era = Math.floor(z / 146097);
+  const doe = z - era * 146097;
+  const yoe = Math.floor(
+    (doe - Math.floor(doe / 1460) + Math.floor(doe / 36524) - Math.floor(doe / 146096)) / 365,
+  );
+  const doy = doe - (365 * yoe + Math.floor(yoe / 4) - Math.floor(yoe / 100));
+  const mp = Math.floor((5 * doy + 2) / 153);
+  return mp < 10 ? mp + 3 : mp - 9;
 }
 
 export function monthOf(date: IsoDate, field = "date"): number {
