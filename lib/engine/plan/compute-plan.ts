@@ -16,6 +16,8 @@ import type { Material } from "@/lib/engine/core/types";
 import type { GardenInputs, PlanOptions } from "@/lib/engine/plan/inputs";
 import type {
   BedDemand,
+  ExplainValue,
+  Explanation,
   GardenPlan,
   MonthRow,
   PlannedFeeding,
@@ -113,6 +115,19 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
   }
 
   // Feedings in the plan's months, planned and logged, with their stable ids.
+  // Explanations share the parts that are the same for many rows (a planting's reference; a
+  // rule's need and its own explanation): thousands of feedings need not carry copies, and the
+  // JSON is the same. The plan is read-only to its callers.
+  const plantingRefs = new Map<string, { ref: "planting"; id: string }>();
+  const plantingRef = (id: string) => {
+    let r = plantingRefs.get(id);
+    if (!r) plantingRefs.set(id, (r = { ref: "planting", id }));
+    return r;
+  };
+  const cleanParts = new Map<
+    Explanation,
+    { need: number; quantity: ExplainValue; parts: Explanation[] }
+  >();
   const feedings: PlannedFeeding[] = [];
   const feedingDays: number[] = []; // day number of each feeding, for the sort below
   const blockedByPlanting = new Map<string, { dates: string[]; kg: number }>();
@@ -128,6 +143,15 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
       blockedByPlanting.set(c.plantingId, b);
     }
     feedingDays.push(c.day);
+    let shared = c.cleanOnly ? cleanParts.get(c.explanation) : undefined;
+    if (c.cleanOnly && shared?.need !== c.need) {
+      shared = {
+        need: c.need,
+        quantity: { unit: c.pool === "castings" ? "kg" : "L", value: c.need },
+        parts: [c.explanation],
+      };
+      cleanParts.set(c.explanation, shared);
+    }
     feedings.push({
       id: c.id,
       plantingId: c.plantingId,
@@ -141,16 +165,16 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
       coveragePct: c.need > 0 ? (100 * got) / c.need : 100,
       status: blocked ? "blocked" : "planned",
       draws: ledger.plannedDraws?.[i] ?? [],
-      explanation: c.cleanOnly
+      explanation: shared
         ? {
             kind: "pre-harvest-clean-lots",
             inputs: {
-              planting: { ref: "planting", id: c.plantingId },
-              need: { unit: c.pool === "castings" ? "kg" : "L", value: c.need },
+              planting: plantingRef(c.plantingId),
+              need: shared.quantity,
               fromCleanLots: { unit: c.pool === "castings" ? "kg" : "L", value: got },
               manureStockRefused: { unit: c.pool === "castings" ? "kg" : "L", value: refused },
             },
-            parts: [c.explanation],
+            parts: shared.parts,
           }
         : c.explanation,
     });
@@ -177,7 +201,7 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
       explanation: {
         kind: "application-logged",
         inputs: {
-          planting: { ref: "planting", id: a.plantingId },
+          planting: plantingRef(a.plantingId),
           applied: { unit: a.material === "castings" ? "kg" : "L", value: a.amount },
           drawn: { unit: c.pool === "leachate" ? "L" : "kg", value: c.need },
           drawnFromStock: { unit: c.pool === "leachate" ? "L" : "kg", value: got },
@@ -211,7 +235,7 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
       explanation: {
         kind: "pre-harvest-block",
         inputs: {
-          planting: { ref: "planting", id: plantingId },
+          planting: plantingRef(plantingId),
           first: { date: b.dates[0]! },
           feedings: { unit: "count", value: b.dates.length },
           manureStockRefused: { unit: "kg", value: b.kg },
@@ -332,7 +356,7 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
       explanation: {
         kind: "coverage" as const,
         inputs: {
-          planting: { ref: "planting" as const, id: c.plantingId },
+          planting: plantingRef(c.plantingId),
           need: { unit, value: c.need } as const,
           allocated: { unit, value: c.allocated } as const,
           coverage: { unit: "percent" as const, value: pct },
