@@ -9,7 +9,7 @@ import type {
 import { fromDayNumber, parseMonthDay, rangeDays, toDayNumber } from "@/lib/engine/core/dates";
 import { dflt } from "@/lib/engine/core/defaults";
 import { EngineInputError, requireFinite, requirePositive } from "@/lib/engine/core/errors";
-import { defaultRuleFor } from "@/lib/engine/demand/feeding-rules";
+import { defaultRuleFor, type FeedingRule } from "@/lib/engine/demand/feeding-rules";
 import { expandRecurrence } from "@/lib/engine/demand/recurrence";
 import type { IsoDate } from "@/lib/engine/core/types";
 
@@ -87,13 +87,31 @@ export function preHarvestBlockStart(planting: PlantingInput, field = "planting"
   return fromDayNumber(harvest - days + 1);
 }
 
-/** Dated applications for one planting within the range, season and pre-harvest interval. */
-export function expandPlanting(
+/**
+ * One planting's rule before its dates become objects: what every date asks (the same for each)
+ * and which dates in the range are fed, in order; `blocked` holds the others with the reason.
+ * The plan reads this directly (thousands of feedings); expandPlanting builds one object per date.
+ */
+export interface RuleDates {
+  plantingId: string;
+  bedId: string;
+  material: FeedingRule["material"];
+  method: FeedingRule["method"];
+  amount: number;
+  priority: number;
+  feederClass: PlantingInput["feederClass"];
+  explanation: DemandResult["occurrences"][number]["explanation"];
+  warnings: DemandResult["warnings"];
+  fed: IsoDate[];
+  blocked: DemandResult["blocked"];
+}
+
+export function expandRuleDates(
   planting: PlantingInput,
   bed: BedInput,
   options: DemandOptions,
   field = "planting",
-): DemandResult {
+): RuleDates {
   if (typeof planting.id !== "string" || planting.id === "")
     throw new EngineInputError(`${field}.id`, "must be a non-empty id");
   const season = parseSeason(options.season);
@@ -116,14 +134,22 @@ export function expandPlanting(
   }
   const rule = planting.rule ?? defaultRuleFor(planting.feederClass);
   const { amount, explanation, warnings } = ruleAmount(rule, planting, bed, density, field);
-  const result: DemandResult = {
-    occurrences: [],
-    blocked: [],
+  const result: RuleDates = {
+    plantingId: planting.id,
+    bedId: planting.bedId,
+    material: rule.material,
+    method: rule.method,
+    amount,
+    priority,
+    feederClass: planting.feederClass,
+    explanation,
     warnings: warnings.map((text) => ({
       plantingId: planting.id,
       field: `${field}.rule.amount`,
       text,
     })),
+    fed: [],
+    blocked: [],
   };
   const from = Math.max(range.from, start);
   const to = Math.min(range.to, end);
@@ -137,27 +163,43 @@ export function expandPlanting(
   const phiReason = phiStart
     ? `pre-harvest interval: a source bin is fed manure, so nothing within ${preHarvestDays(planting)} days before harvest on ${planting.harvestDate ?? planting.endDate} (7 CFR 205.203(c)(1))`
     : "";
-  const seasonReason = `outside the growing season (${season.text}); the bed is outdoors`;
   for (const date of dates) {
     if (!bed.indoor && !inSeason(date, season)) {
-      result.blocked.push({ plantingId: planting.id, date, reason: seasonReason });
+      result.blocked.push({
+        plantingId: planting.id,
+        date,
+        reason: `outside the growing season (${season.text}); the bed is outdoors`,
+      });
     } else if (phiStart && date >= phiStart) {
       result.blocked.push({ plantingId: planting.id, date, reason: phiReason });
-    } else {
-      result.occurrences.push({
-        plantingId: planting.id,
-        bedId: planting.bedId,
-        date,
-        material: rule.material,
-        method: rule.method,
-        amount,
-        priority,
-        feederClass: planting.feederClass,
-        explanation,
-      });
-    }
+    } else result.fed.push(date);
   }
   return result;
+}
+
+/** Dated applications for one planting within the range, season and pre-harvest interval. */
+export function expandPlanting(
+  planting: PlantingInput,
+  bed: BedInput,
+  options: DemandOptions,
+  field = "planting",
+): DemandResult {
+  const r = expandRuleDates(planting, bed, options, field);
+  return {
+    occurrences: r.fed.map((date) => ({
+      plantingId: r.plantingId,
+      bedId: r.bedId,
+      date,
+      material: r.material,
+      method: r.method,
+      amount: r.amount,
+      priority: r.priority,
+      feederClass: r.feederClass,
+      explanation: r.explanation,
+    })),
+    blocked: r.blocked,
+    warnings: r.warnings,
+  };
 }
 
 /** Every planting's applications, with the beds looked up by id. */

@@ -4,7 +4,12 @@ import { dayOfYearDate, fromDayNumber, toDayNumber, yearOfDay } from "@/lib/engi
 import { EngineInputError } from "@/lib/engine/core/errors";
 import type { IsoDate, Material, Method } from "@/lib/engine/core/types";
 import { POOL_OF, type LedgerClaim, type LedgerLogged } from "@/lib/engine/balance/ledger";
-import { expandPlanting, preHarvestBlockStart, preHarvestDays } from "@/lib/engine/demand/demand";
+import {
+  expandRuleDates,
+  preHarvestBlockStart,
+  preHarvestDays,
+  type RuleDates,
+} from "@/lib/engine/demand/demand";
 import type { FeedingRule } from "@/lib/engine/demand/feeding-rules";
 import type {
   BedInput as DemandBed,
@@ -76,16 +81,16 @@ function eachRule(plantings: readonly PlantingInput[]): RuleOfPlanting[] {
   });
 }
 
-/** expandPlanting for rule k of a planting: its errors name `plantings[i].rules[k].…`. */
+/** expandRuleDates for rule k of a planting: its errors name `plantings[i].rules[k].…`. */
 function expandRule(
   dp: DemandPlanting,
   bed: DemandBed,
-  options: Parameters<typeof expandPlanting>[2],
+  options: Parameters<typeof expandRuleDates>[2],
   field: string,
   k: number | null,
-): ReturnType<typeof expandPlanting> {
+): RuleDates {
   try {
-    return expandPlanting(dp, bed, options, field);
+    return expandRuleDates(dp, bed, options, field);
   } catch (e) {
     if (k === null || !(e instanceof EngineInputError) || !e.field.startsWith(`${field}.rule.`))
       throw e;
@@ -190,52 +195,48 @@ export function buildDemand(
     const phi = preHarvestBlockStart(dp, field);
     const teaRatio = ruleInput?.teaCastingsPerWater ?? ctx.teaCastingsPerWater;
     // One explanation per rule: every date of a rule needs the same amount.
-    const first = r.occurrences[0];
-    const need1 = first
-      ? first.material === "tea"
-        ? first.amount * teaRatio * density
-        : first.amount
-      : 0;
-    const explanation: Explanation | undefined = !first
-      ? undefined
-      : first.material === "tea"
-        ? {
-            kind: "tea-brewed",
-            inputs: {
-              planting: { ref: "planting", id: p.id },
-              tea: { unit: "L", value: first.amount },
-              castingsPerWater: { unit: "ratio", value: teaRatio },
-              bulkDensity: { unit: "ratio", value: density },
-              castings: { unit: "kg", value: need1 },
-            },
-          }
-        : {
-            kind: "demand-amount",
-            inputs: {
-              planting: { ref: "planting", id: p.id },
-              basis: { text: (rule ?? { basis: "per-plant" }).basis },
-              plants: { unit: "count", value: p.plantCount },
-              amount: { unit: first.material === "castings" ? "kg" : "L", value: first.amount },
-            },
-          };
-    for (const o of r.occurrences) {
-      const day = toDayNumber(o.date);
-      const need = o.material === "tea" ? o.amount * teaRatio * density : o.amount;
+    const need1 = r.material === "tea" ? r.amount * teaRatio * density : r.amount;
+    const explanation: Explanation | undefined =
+      r.fed.length === 0
+        ? undefined
+        : r.material === "tea"
+          ? {
+              kind: "tea-brewed",
+              inputs: {
+                planting: { ref: "planting", id: p.id },
+                tea: { unit: "L", value: r.amount },
+                castingsPerWater: { unit: "ratio", value: teaRatio },
+                bulkDensity: { unit: "ratio", value: density },
+                castings: { unit: "kg", value: need1 },
+              },
+            }
+          : {
+              kind: "demand-amount",
+              inputs: {
+                planting: { ref: "planting", id: p.id },
+                basis: { text: (rule ?? { basis: "per-plant" }).basis },
+                plants: { unit: "count", value: p.plantCount },
+                amount: { unit: r.material === "castings" ? "kg" : "L", value: r.amount },
+              },
+            };
+    // Every date of a rule asks the same: one object per feeding, made here.
+    for (let d = 0; d < r.fed.length; d++) {
+      const date = r.fed[d]!;
       planted.push({
-        id: idOf(feedingId(p.id, o.material, o.date)),
+        id: idOf(feedingId(p.id, r.material, date)),
         plantingId: p.id,
         bedId: p.bedId,
-        date: o.date,
-        material: o.material,
-        method: o.method,
-        amount: o.amount,
+        date,
+        material: r.material,
+        method: r.method,
+        amount: r.amount,
         explanation: explanation!,
-        pool: POOL_OF[o.material],
-        day,
-        need,
-        priority: o.priority,
-        feederClass: o.feederClass,
-        cleanOnly: phi !== null && o.date >= phi,
+        pool: POOL_OF[r.material],
+        day: toDayNumber(date),
+        need: need1,
+        priority: r.priority,
+        feederClass: r.feederClass,
+        cleanOnly: phi !== null && date >= phi,
       });
     }
   }
