@@ -294,84 +294,95 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
 
   // Coverage per planting and month; demand per bed and month. The feedings are sorted by day, so a
   // month index walks forward with them; slots are numbered (planting, month, material) and
-  // (bed, month) instead of string keys, and coverage keeps the order each slot was first seen.
+  // (bed, month) instead of string keys, sums are kept in typed arrays, and each row object is
+  // made once at the end. Coverage keeps the order each slot was first seen.
   const MATERIALS: Material[] = ["castings", "leachate", "tea"];
   const monthCount = planSpans.length;
   const plantingIndex = new Map(inputs.plantings.map((p, i) => [p.id, i]));
-  const covSlots = new Array<PlantingCoverage | undefined>(
-    inputs.plantings.length * monthCount * MATERIALS.length,
+  const covOfSlot = new Int32Array(inputs.plantings.length * monthCount * MATERIALS.length).fill(
+    -1,
   );
-  const covOrder: PlantingCoverage[] = [];
-  type BedRow = BedDemand["months"][number] & { need: number; got: number };
+  const covFirst: number[] = []; // index in feedings of each coverage row's first feeding
+  const covMonth: number[] = [];
+  const covNeed = new Float64Array(feedings.length);
+  const covGot = new Float64Array(feedings.length);
   const bedIndex = new Map<string, number>();
-  const bedRows: (BedRow | undefined)[][] = [];
+  const bedSums: Float64Array[] = []; // per bed: (castings, leachate, tea, need, got) × month
+  const BED_FIELDS = 5;
   let mi = 0;
-  feedings.forEach((f, k) => {
+  for (let k = 0; k < feedings.length; k++) {
+    const f = feedings[k]!;
     const day = sortedDays[k]!;
     while (day >= planSpans[mi]!.endDay) mi++;
-    const month = planSpans[mi]!.month;
     const slotKey =
       (plantingIndex.get(f.plantingId)! * monthCount + mi) * MATERIALS.length +
       MATERIALS.indexOf(f.material);
-    let c = covSlots[slotKey];
-    if (!c) {
-      c = {
-        plantingId: f.plantingId,
-        month,
-        material: f.material,
-        need: 0,
-        allocated: 0,
-        coveragePct: 100,
-        explanation: { kind: "coverage", inputs: {} },
-      };
-      covSlots[slotKey] = c;
-      covOrder.push(c);
+    let c = covOfSlot[slotKey]!;
+    if (c < 0) {
+      c = covFirst.length;
+      covOfSlot[slotKey] = c;
+      covFirst.push(k);
+      covMonth.push(mi);
     }
-    c.need += f.need;
-    c.allocated += f.allocated;
+    covNeed[c]! += f.need;
+    covGot[c]! += f.allocated;
     let b = bedIndex.get(f.bedId);
     if (b === undefined) {
-      b = bedRows.length;
+      b = bedSums.length;
       bedIndex.set(f.bedId, b);
-      bedRows.push(new Array<BedRow | undefined>(monthCount));
+      bedSums.push(new Float64Array(monthCount * BED_FIELDS).fill(NaN));
     }
-    const bm = bedRows[b]!;
-    let row = bm[mi];
-    if (!row) {
-      row = { month, castingsKg: 0, leachateL: 0, teaL: 0, coveragePct: 100, need: 0, got: 0 };
-      bm[mi] = row;
-    }
-    if (f.material === "castings") row.castingsKg += f.amount;
-    else if (f.material === "leachate") row.leachateL += f.amount;
-    else row.teaL += f.amount;
-    row.need += f.need;
-    row.got += f.allocated;
-  });
-  const coverage = covOrder.map((c) => {
-    const pct = c.need > 0 ? (100 * c.allocated) / c.need : 100;
-    const unit = c.material === "leachate" ? "L" : "kg";
-    return {
-      ...c,
+    const sums = bedSums[b]!;
+    const at = mi * BED_FIELDS;
+    if (Number.isNaN(sums[at]!)) sums.fill(0, at, at + BED_FIELDS);
+    sums[at + MATERIALS.indexOf(f.material)]! += f.amount;
+    sums[at + 3]! += f.need;
+    sums[at + 4]! += f.allocated;
+  }
+  const coverage: PlantingCoverage[] = new Array<PlantingCoverage>(covFirst.length);
+  for (let c = 0; c < covFirst.length; c++) {
+    const f = feedings[covFirst[c]!]!;
+    const need = covNeed[c]!;
+    const allocated = covGot[c]!;
+    const pct = need > 0 ? (100 * allocated) / need : 100;
+    const unit = f.material === "leachate" ? "L" : "kg";
+    coverage[c] = {
+      plantingId: f.plantingId,
+      month: planSpans[covMonth[c]!]!.month,
+      material: f.material,
+      need,
+      allocated,
       coveragePct: pct,
       explanation: {
-        kind: "coverage" as const,
+        kind: "coverage",
         inputs: {
-          planting: plantingRef(c.plantingId),
-          need: { unit, value: c.need } as const,
-          allocated: { unit, value: c.allocated } as const,
-          coverage: { unit: "percent" as const, value: pct },
+          planting: plantingRef(f.plantingId),
+          need: { unit, value: need },
+          allocated: { unit, value: allocated },
+          coverage: { unit: "percent", value: pct },
         },
       },
     };
-  });
-  // Months of a bed in the order first seen, which is month order (the feedings are sorted).
-  const bedDemand: BedDemand[] = [...bedIndex.entries()].map(([bedId, b]) => ({
-    bedId,
-    months: bedRows[b]!.filter((r) => r !== undefined).map(({ need, got, ...m }) => ({
-      ...m,
-      coveragePct: need > 0 ? (100 * got) / need : 100,
-    })),
-  }));
+  }
+  // Months of a bed in month order (NaN marks a month with no feeding of the bed).
+  const bedDemand: BedDemand[] = [];
+  for (const [bedId, b] of bedIndex) {
+    const sums = bedSums[b]!;
+    const months: BedDemand["months"] = [];
+    for (let m = 0; m < monthCount; m++) {
+      const at = m * BED_FIELDS;
+      if (Number.isNaN(sums[at]!)) continue;
+      const need = sums[at + 3]!;
+      months.push({
+        month: planSpans[m]!.month,
+        castingsKg: sums[at]!,
+        leachateL: sums[at + 1]!,
+        teaL: sums[at + 2]!,
+        coveragePct: need > 0 ? (100 * sums[at + 4]!) / need : 100,
+      });
+    }
+    bedDemand.push({ bedId, months });
+  }
 
   const bins = buildBins(supply.bins, supply.lots, inputs, ctx, warnings);
 
