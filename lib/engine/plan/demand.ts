@@ -47,8 +47,12 @@ export interface LoggedClaim extends LedgerLogged {
 
 const NO_DRAWS: LoggedClaim["draws"] = [];
 
+/** What every feeding id of one planting and material starts with (the date follows). */
+export const feedingIdPrefix = (plantingId: string, material: Material) =>
+  `${plantingId}:${material}:`;
+
 export const feedingId = (plantingId: string, material: Material, date: IsoDate) =>
-  `${plantingId}:${material}:${date}`;
+  feedingIdPrefix(plantingId, material) + date;
 
 /**
  * A planting's rules one by one (none: its feeder class default, `rule` null).
@@ -68,9 +72,13 @@ interface RuleOfPlanting {
   idOf: (id: string) => string;
 }
 
+const sameId = (id: string) => id;
+
 function eachRule(plantings: readonly PlantingInput[]): RuleOfPlanting[] {
   return plantings.flatMap((p, i): RuleOfPlanting[] => {
-    if (p.rules.length === 0) return [{ p, i, rule: null, k: null, idOf: (id: string) => id }];
+    // One rule's dates never repeat (expandRecurrence), so its ids are unique as they are.
+    if (p.rules.length <= 1)
+      return [{ p, i, rule: p.rules[0] ?? null, k: p.rules.length === 0 ? null : 0, idOf: sameId }];
     const seen = new Map<string, number>();
     const idOf = (id: string) => {
       const n = (seen.get(id) ?? 0) + 1;
@@ -220,10 +228,11 @@ export function buildDemand(
               },
             };
     // Every date of a rule asks the same: one object per feeding, made here.
+    const idPrefix = feedingIdPrefix(p.id, r.material);
     for (let d = 0; d < r.fed.length; d++) {
       const date = r.fed[d]!;
       planted.push({
-        id: idOf(feedingId(p.id, r.material, date)),
+        id: idOf(idPrefix + date),
         plantingId: p.id,
         bedId: p.bedId,
         date,
