@@ -262,12 +262,14 @@ export function buildDemand(
   const days = ctx.applicationDays;
   const logged: LoggedClaim[] = [];
   const replaced = new Set<string>();
-  const history = ctx.planStartDay - ctx.spans[0]!.startDay; // days before the plan
-  const summed = new Float64Array(2 * Math.max(0, history)); // need per (day, pool)
+  const firstDay = ctx.spans[0]!.startDay;
+  const history = Math.max(0, ctx.planStartDay - firstDay); // days before the plan
+  const summed = new Float64Array(2 * history); // need per (day, pool)
   const summedAny = new Uint8Array(summed.length);
-  const namedDays = new Set<number>();
-  for (let i = 0; i < applications.length; i++)
-    if (days[i]! < ctx.planStartDay && applications[i]!.draws.length > 0) namedDays.add(days[i]!);
+  const namedDay = new Uint8Array(history); // a history day with a log that names its lots
+  // First pass: each log's need and pool (typed arrays: the second pass reads only these).
+  const needs = new Float64Array(applications.length);
+  const castings = new Uint8Array(applications.length);
   let pl: { p: DemandPlanting; rules: FeedingRuleInput[] } | undefined;
   for (let i = 0; i < applications.length; i++) {
     const a = applications[i]!;
@@ -291,19 +293,31 @@ export function buildDemand(
     // Planned feedings all fall after asOf: only a log that names one, or is dated after asOf, can replace it.
     if (a.plannedFeedingId !== null) replaced.add(a.plannedFeedingId);
     else if (day > ctx.asOfDay) replaced.add(feedingId(a.plantingId, a.material, a.date));
-    const pool = POOL_OF[a.material];
-    if (day < ctx.planStartDay && !namedDays.has(day)) {
-      const at = 2 * (day - ctx.spans[0]!.startDay) + (pool === "castings" ? 0 : 1);
-      summed[at]! += Math.max(0, need); // what the ledger's shared draw asks of each
+    needs[i] = need;
+    castings[i] = POOL_OF[a.material] === "castings" ? 1 : 0;
+    if (day < ctx.planStartDay && a.draws.length > 0) namedDay[day - firstDay] = 1;
+  }
+  for (let i = 0; i < applications.length; i++) {
+    const day = days[i]!;
+    if (day < ctx.planStartDay && namedDay[day - firstDay] === 0) {
+      const at = 2 * (day - firstDay) + (castings[i] === 1 ? 0 : 1);
+      summed[at]! += Math.max(0, needs[i]!); // what the ledger's shared draw asks of each
       summedAny[at] = 1;
-    } else logged.push({ index: i, pool, day, need, draws: a.draws });
+    } else
+      logged.push({
+        index: i,
+        pool: castings[i] === 1 ? "castings" : "leachate",
+        day,
+        need: needs[i]!,
+        draws: applications[i]!.draws,
+      });
   }
   for (let at = 0; at < summed.length; at++)
     if (summedAny[at] === 1)
       logged.push({
         index: -1,
         pool: at % 2 === 0 ? "castings" : "leachate",
-        day: ctx.spans[0]!.startDay + (at >> 1),
+        day: firstDay + (at >> 1),
         need: summed[at]!,
         draws: NO_DRAWS,
       });
