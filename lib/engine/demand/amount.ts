@@ -49,19 +49,21 @@ export function ruleAmount(
   const warnings: string[] = [];
   let base: number;
   // The words are built only when read: a plan computes thousands of amounts and shows few texts.
-  let how: () => string;
+  // What the amount is made of, in words only when the text is read (a plan expands thousands of
+  // rules and reads none of these texts): data here, words in howText.
+  let how: HowWords;
   switch (rule.basis) {
     case "per-plant": {
       const n = requirePositive(planting.plantCount, `${field}.plantCount`, 100_000);
       base = per * n;
-      how = () => `${plural(n, "plant")} × ${fmt(per, 3)} ${unit}`;
+      how = { basis: "per-plant", count: n, per, unit };
       break;
     }
     case "per-area": {
       const area = planting.areaM2 ?? bed.areaM2;
       const a = requirePositive(area, `${field}.areaM2`, 10_000);
       base = per * a;
-      how = () => `${fmt(a, 2)} m² × ${fmt(per, 3)} ${unit}/m²`;
+      how = { basis: "per-area", count: a, per, unit };
       if (rule.material === "castings" && unit === "L" && per > 12.7 + 1e-9) {
         warnings.push(`top-dressing ${fmt(per, 1)} mm deep is more than ½ in (12.7 mm)`);
       }
@@ -79,7 +81,7 @@ export function ruleAmount(
           throw new EngineInputError(`${r}.basis`, "percent-of-mix applies to castings only");
         }
         base = (per / 100) * v;
-        how = () => `${fmt(per, 1)} % of ${fmt(v, 1)} L mix`;
+        how = { basis: "percent-of-mix", count: v, per, unit };
         if (per > dflt("pottingMixWarnAbovePercent")) {
           warnings.push(
             `${fmt(per, 1)} % castings is above the 20 % by volume Atiyeh et al. (2000) recommend`,
@@ -87,7 +89,7 @@ export function ruleAmount(
         }
       } else {
         base = per * v;
-        how = () => `${fmt(v, 1)} L container × ${fmt(per, 3)} ${unit}/L`;
+        how = { basis: "per-container-volume", count: v, per, unit };
       }
       break;
     }
@@ -97,13 +99,15 @@ export function ruleAmount(
 
   if (rule.material === "castings") {
     const kg = unit === "kg" ? base : base * density;
-    const text = () =>
-      unit === "kg"
-        ? `${how()} = ${fmt(kg, 3)} kg castings`
-        : `${how()} × ${fmt(density, 2)} kg/L = ${fmt(kg, 3)} kg castings`;
     return {
       amount: kg,
-      explanation: lazyText(text, { amountPer: per, bulkDensityKgPerL: density }),
+      explanation: lazyText(
+        () =>
+          unit === "kg"
+            ? `${howText(how)} = ${fmt(kg, 3)} kg castings`
+            : `${howText(how)} × ${fmt(density, 2)} kg/L = ${fmt(kg, 3)} kg castings`,
+        { amountPer: per, bulkDensityKgPerL: density },
+      ),
       warnings,
     };
   }
@@ -114,21 +118,44 @@ export function ruleAmount(
       1000,
     );
     const undiluted = base / (1 + parts);
-    const text = () =>
-      parts > 0
-        ? `${how()} of solution ÷ ${1 + parts} (1 part leachate to ${parts} water) = ${fmt(undiluted, 3)} L leachate`
-        : `${how()} = ${fmt(undiluted, 3)} L leachate, undiluted`;
     return {
       amount: undiluted,
-      explanation: lazyText(text, { solutionL: base, waterParts: parts }),
+      explanation: lazyText(
+        () =>
+          parts > 0
+            ? `${howText(how)} of solution ÷ ${1 + parts} (1 part leachate to ${parts} water) = ${fmt(undiluted, 3)} L leachate`
+            : `${howText(how)} = ${fmt(undiluted, 3)} L leachate, undiluted`,
+        { solutionL: base, waterParts: parts },
+      ),
       warnings,
     };
   }
   return {
     amount: base,
-    explanation: lazyText(() => `${how()} = ${fmt(base, 3)} L tea`),
+    explanation: lazyText(() => `${howText(how)} = ${fmt(base, 3)} L tea`),
     warnings,
   };
+}
+
+interface HowWords {
+  basis: FeedingRule["basis"];
+  /** Plants, m², or litres of container or mix. */
+  count: number;
+  per: number;
+  unit: string;
+}
+
+function howText({ basis, count, per, unit }: HowWords): string {
+  switch (basis) {
+    case "per-plant":
+      return `${plural(count, "plant")} × ${fmt(per, 3)} ${unit}`;
+    case "per-area":
+      return `${fmt(count, 2)} m² × ${fmt(per, 3)} ${unit}/m²`;
+    case "percent-of-mix":
+      return `${fmt(per, 1)} % of ${fmt(count, 1)} L mix`;
+    default:
+      return `${fmt(count, 1)} L container × ${fmt(per, 3)} ${unit}/L`;
+  }
 }
 
 /** An explanation whose `text` is built on first read (an enumerable getter, so JSON keeps it). */

@@ -62,9 +62,13 @@ function checkSeason(season: GardenSeason, field: string): Season {
 }
 
 function inSeason(date: IsoDate, s: Season): boolean {
-  // month * 100 + day from the digits of a checked "YYYY-MM-DD" ("0" is char code 48).
-  const c = (i: number) => date.charCodeAt(i) - 48;
-  const md = (c(5) * 10 + c(6)) * 100 + c(8) * 10 + c(9);
+  // month * 100 + day from the digits of a checked "YYYY-MM-DD" ("0" is char code 48); no helper
+  // closure, since this runs for every date of every planting.
+  const md =
+    (date.charCodeAt(5) - 48) * 1000 +
+    (date.charCodeAt(6) - 48) * 100 +
+    (date.charCodeAt(8) - 48) * 10 +
+    (date.charCodeAt(9) - 48);
   return md >= s.from && md <= s.to;
 }
 
