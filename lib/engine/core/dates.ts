@@ -19,6 +19,19 @@ export function toDayNumber(date: unknown, field = "date"): number {
   return day ?? parseDayNumber(date, field);
 }
 
+/**
+ * Day numbers of many dated records at once (logs by the ten thousand), read here so each date
+ * costs one call; a bad date throws naming `${list}[i].date`.
+ */
+export function dayNumbersOf(records: readonly { date: string }[], list: string): Int32Array {
+  const days = new Int32Array(records.length);
+  for (let i = 0; i < records.length; i++) {
+    const date = records[i]!.date;
+    days[i] = quickDayNumber(date) ?? parseDayNumber(date, `${list}[${i}].date`);
+  }
+  return days;
+}
+
 /** The day number of a valid "YYYY-MM-DD", or undefined (the caller then reports the field). */
 export function checkedDayNumber(date: string): number | undefined {
   return quickDayNumber(date);

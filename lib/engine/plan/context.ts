@@ -3,6 +3,7 @@
 import { dflt } from "@/lib/engine/core/defaults";
 import {
   checkedDayNumber,
+  dayNumbersOf,
   fromDayNumber,
   monthSpans,
   toDayNumber,
@@ -49,14 +50,9 @@ export function planContext(inputs: GardenInputs, options: PlanOptions): PlanCon
   inputs.stockLots.forEach((l, i) => see(l.madeOn, "stockLots", i, "madeOn"));
   inputs.logs.harvests.forEach((h, i) => see(h.date, "logs.harvests", i, "date"));
   inputs.logs.drains.forEach((d, i) => see(d.date, "logs.drains", i, "date"));
-  const applications = inputs.logs.applications;
-  const applicationDays = new Int32Array(applications.length);
-  for (let i = 0; i < applications.length; i++) {
-    const date = applications[i]!.date;
-    const day = checkedDayNumber(date) ?? toDayNumber(date, `logs.applications[${i}].date`);
-    applicationDays[i] = day;
-    if (day < first) first = day;
-  }
+  const applicationDays = dayNumbersOf(inputs.logs.applications, "logs.applications");
+  for (let i = 0; i < applicationDays.length; i++)
+    if (applicationDays[i]! < first) first = applicationDays[i]!;
   const firstMonth = fromDayNumber(first).slice(0, 7);
   const lead = monthSpans(firstMonth, 1, "history")[0]!;
   const before: MonthSpan[] = [];

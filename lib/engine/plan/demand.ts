@@ -229,6 +229,7 @@ export function buildDemand(
             };
     // Every date of a rule asks the same: one object per feeding, made here.
     const idPrefix = feedingIdPrefix(p.id, r.material);
+    const pool = POOL_OF[r.material];
     for (let d = 0; d < r.fed.length; d++) {
       const date = r.fed[d]!;
       planted.push({
@@ -240,7 +241,7 @@ export function buildDemand(
         method: r.method,
         amount: r.amount,
         explanation: explanation!,
-        pool: POOL_OF[r.material],
+        pool,
         day: toDayNumber(date),
         need: need1,
         priority: r.priority,
