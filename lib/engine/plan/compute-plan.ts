@@ -57,31 +57,40 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
     snapshotAtMonth: options.suggestions !== false ? resumeMonth : undefined,
   });
   const planSpans = ctx.spans.slice(ctx.firstPlanMonth);
-  const inPlan = (day: number) => day >= ctx.planStartDay && day <= ctx.planEndDay;
-  const monthOf = (date: string) => date.slice(0, 7);
+  // The loops below run once per feeding (thousands): plain loops, module values in locals, the
+  // plan's window compared inline rather than through helper closures.
+  const EPS = AMOUNT_EPSILON;
+  const planStart = ctx.planStartDay;
+  const planEnd = ctx.planEndDay;
+  const planned = demand.planned;
+  const logged = demand.logged;
 
   // Month × pool rows.
   const rows: MonthRow[] = [];
   const teaByMonth = new Map<string, { litres: number; need: number; got: number }>();
-  demand.planned.forEach((c, i) => {
-    if (c.material !== "tea" || !inPlan(c.day)) return;
-    const t = teaByMonth.get(monthOf(c.date)) ?? { litres: 0, need: 0, got: 0 };
+  for (let i = 0; i < planned.length; i++) {
+    const c = planned[i]!;
+    if (c.material !== "tea" || c.day < planStart || c.day > planEnd) continue;
+    const month = c.date.slice(0, 7);
+    const t = teaByMonth.get(month) ?? { litres: 0, need: 0, got: 0 };
     t.litres += c.amount;
     t.need += c.need;
     t.got += ledger.plannedGot[i]!;
-    teaByMonth.set(monthOf(c.date), t);
-  });
-  demand.logged.forEach((c, i) => {
+    teaByMonth.set(month, t);
+  }
+  for (let i = 0; i < logged.length; i++) {
+    const c = logged[i]!;
     // The day first: most logs are history, and the claim is at hand while the log is not.
-    if (!inPlan(c.day)) return;
+    if (c.day < planStart || c.day > planEnd) continue;
     const a = inputs.logs.applications[c.index]!;
-    if (a.material !== "tea") return;
-    const t = teaByMonth.get(monthOf(a.date)) ?? { litres: 0, need: 0, got: 0 };
+    if (a.material !== "tea") continue;
+    const month = a.date.slice(0, 7);
+    const t = teaByMonth.get(month) ?? { litres: 0, need: 0, got: 0 };
     t.litres += a.amount;
     t.need += c.need;
     t.got += ledger.loggedGot[i]!;
-    teaByMonth.set(monthOf(a.date), t);
-  });
+    teaByMonth.set(month, t);
+  }
   for (const r of ledger.rows.slice(ctx.firstPlanMonth * POOLS.length)) {
     const span = planSpans.find((s) => s.month === r.month)!;
     const unit = r.pool === "castings" ? "kg" : "L";
@@ -131,12 +140,13 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
   const feedings: PlannedFeeding[] = [];
   const feedingDays: number[] = []; // day number of each feeding, for the sort below
   const blockedByPlanting = new Map<string, { dates: string[]; kg: number }>();
-  demand.planned.forEach((c, i) => {
-    if (!inPlan(c.day)) return;
+  for (let i = 0; i < planned.length; i++) {
+    const c = planned[i]!;
+    if (c.day < planStart || c.day > planEnd) continue;
     const got = ledger.plannedGot[i]!;
     const refused = ledger.manureRefused[i]!;
-    const blocked = c.cleanOnly && got <= AMOUNT_EPSILON && refused > AMOUNT_EPSILON;
-    if (c.cleanOnly && refused > AMOUNT_EPSILON) {
+    const blocked = c.cleanOnly && got <= EPS && refused > EPS;
+    if (c.cleanOnly && refused > EPS) {
       const b = blockedByPlanting.get(c.plantingId) ?? { dates: [], kg: 0 };
       b.dates.push(c.date);
       b.kg += refused;
@@ -178,10 +188,11 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
           }
         : c.explanation,
     });
-  });
+  }
   const bedOf = new Map(inputs.plantings.map((p) => [p.id, p.bedId]));
-  demand.logged.forEach((c, i) => {
-    if (!inPlan(c.day)) return;
+  for (let i = 0; i < logged.length; i++) {
+    const c = logged[i]!;
+    if (c.day < planStart || c.day > planEnd) continue;
     const a = inputs.logs.applications[c.index]!;
     const got = ledger.loggedGot[i]!;
     feedingDays.push(c.day);
@@ -208,7 +219,7 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
         },
       },
     });
-  });
+  }
   // By date, then id. Day numbers order exactly as the (checked, YYYY-MM-DD) dates do: the indices
   // are bucketed by day (a counting sort), then each day's run is sorted by id. Ids are unique in
   // practice, and then this is the one order of the comparison below; should two be equal, the
@@ -249,8 +260,9 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
 
   // Aged out: castings lot by lot; leachate summed per bin and month (a lot a day).
   const liquid = new Map<string, { binId: string | null; day: number; amount: number }>();
-  for (const a of ledger.agedOut) {
-    if (a.amount <= AMOUNT_EPSILON) continue;
+  for (let k = 0; k < ledger.agedOut.length; k++) {
+    const a = ledger.agedOut[k]!;
+    if (a.amount <= EPS) continue;
     if (a.pool === "castings") {
       warnings.push({
         kind: "aged-out",
@@ -388,8 +400,9 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
 
   // First shortfall per pool in the plan's months.
   const first: Record<Pool, string | null> = { castings: null, leachate: null };
-  for (const f of feedings) {
-    if (f.need - f.allocated <= Math.max(AMOUNT_EPSILON, f.need * 1e-9)) continue;
+  for (let k = 0; k < feedings.length; k++) {
+    const f = feedings[k]!;
+    if (f.need - f.allocated <= Math.max(EPS, f.need * 1e-9)) continue;
     const pool: Pool = f.material === "leachate" ? "leachate" : "castings";
     if (first[pool] === null || f.date < first[pool]!) first[pool] = f.date;
   }
@@ -466,14 +479,15 @@ function sortByDayThenId(
   const width = lastDay - firstDay + 1;
   if (!(width > 0)) return null;
   const counts = new Int32Array(width + 1);
-  for (const d of days) {
+  for (let i = 0; i < days.length; i++) {
+    const d = days[i]!;
     if (d < firstDay || d > lastDay) return null;
     counts[d - firstDay + 1]!++;
   }
   for (let d = 1; d <= width; d++) counts[d]! += counts[d - 1]!;
   const order = new Array<number>(days.length);
   const starts = counts.slice();
-  days.forEach((d, i) => (order[starts[d - firstDay]!++] = i));
+  for (let i = 0; i < days.length; i++) order[starts[days[i]! - firstDay]!++] = i;
   let equal = false;
   const byId = (a: number, b: number) => {
     const ia = feedings[a]!.id;
