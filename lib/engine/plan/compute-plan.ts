@@ -231,12 +231,18 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
   };
   let order = sortByDayThenId(feedingDays, feedings, ctx.planStartDay, ctx.planEndDay);
   if (!order) {
-    order = feedings.map((_, i) => i);
-    order.sort(byDateThenId);
+    const byComparison = feedings.map((_, i) => i);
+    byComparison.sort(byDateThenId);
+    order = Int32Array.from(byComparison);
   }
-  const sorted = order.map((i) => feedings[i]!);
-  sorted.forEach((f, k) => (feedings[k] = f));
-  const sortedDays = order.map((i) => feedingDays[i]!);
+  // Reordered in place through typed arrays, so every run sees the same kinds of arrays (a
+  // mixed array here made the optimised plan fall back to slow code again and again).
+  const unsorted = feedings.slice();
+  const sortedDays = new Int32Array(order.length);
+  for (let k = 0; k < order.length; k++) {
+    feedings[k] = unsorted[order[k]!]!;
+    sortedDays[k] = feedingDays[order[k]!]!;
+  }
 
   for (const [plantingId, b] of blockedByPlanting) {
     warnings.push({
@@ -475,7 +481,7 @@ function sortByDayThenId(
   feedings: readonly { id: string }[],
   firstDay: number,
   lastDay: number,
-): number[] | null {
+): Int32Array | null {
   const width = lastDay - firstDay + 1;
   if (!(width > 0)) return null;
   const counts = new Int32Array(width + 1);
@@ -485,7 +491,7 @@ function sortByDayThenId(
     counts[d - firstDay + 1]!++;
   }
   for (let d = 1; d <= width; d++) counts[d]! += counts[d - 1]!;
-  const order = new Array<number>(days.length);
+  const order = new Int32Array(days.length);
   const starts = counts.slice();
   for (let i = 0; i < days.length; i++) order[starts[days[i]! - firstDay]!++] = i;
   let equal = false;
