@@ -27,6 +27,7 @@ export type Pool = "castings" | "leachate";
 export interface LedgerLot {
   id: string;
   pool: Pool;
+  /** Whole day number (toDayNumber). */
   madeDay: number;
   amount: number;
   binId: string | null;
@@ -118,8 +119,10 @@ type Wanted = (made: number, expires: number, manure: boolean) => boolean;
 class Shelf {
   /** The lots as given (sorted by made day): ids and bins are read from here, never changed. */
   readonly lots: readonly LedgerLot[];
-  readonly made: Float64Array;
-  readonly expires: Float64Array;
+  // Whole day numbers: read back as small integers, so a snapshot lot has the same shape as the
+  // lots it was taken from (a changed field kind sends optimised code back to slow code).
+  readonly made: Int32Array;
+  readonly expires: Int32Array;
   readonly remaining: Float64Array;
   readonly manure: Uint8Array;
   head = 0;
@@ -135,8 +138,8 @@ class Shelf {
     if (!sorted) lots.sort((a, b) => a.madeDay - b.madeDay);
     this.lots = lots;
     const n = lots.length;
-    this.made = new Float64Array(n);
-    this.expires = new Float64Array(n);
+    this.made = new Int32Array(n);
+    this.expires = new Int32Array(n);
     this.remaining = new Float64Array(n);
     this.manure = new Uint8Array(n);
     for (let i = 0; i < n; i++) {
