@@ -245,7 +245,13 @@ class Shelf {
       if (left > AMOUNT_EPSILON) {
         const l = this.lots[this.head]!;
         lost += left;
-        out.push({ lotId: l.id, pool, day: this.expires[this.head]!, amount: left, binId: l.binId });
+        out.push({
+          lotId: l.id,
+          pool,
+          day: this.expires[this.head]!,
+          amount: left,
+          binId: l.binId,
+        });
       }
       this.head++;
     }
@@ -535,19 +541,21 @@ export function runLedger(input: LedgerInput): LedgerResult {
     overdrawn: [],
   };
 
-  // Scratch for one tier of planned claims: its clean-only claims and the others.
-  const cleanGroup = new Int32Array(input.planned.length);
-  const otherGroup = new Int32Array(input.planned.length);
-  // Scratch for one feeding group at a time: amounts named, weights and shares.
-  let scratchSize = 16;
-  let named = new Float64Array(scratchSize);
-  let weights = new Float64Array(scratchSize);
-  let shares = new Float64Array(scratchSize);
-  const grow = (n: number) => {
-    scratchSize = Math.max(n, scratchSize * 2);
-    named = new Float64Array(scratchSize);
-    weights = new Float64Array(scratchSize);
-    shares = new Float64Array(scratchSize);
+  const walk: Walk = {
+    input,
+    result,
+    byId,
+    adjustLot,
+    loggedByMonth,
+    loggedDay,
+    loggedNeed,
+    loggedNames,
+    plannedByMonth,
+    tiers,
+    // Scratch for one tier of planned claims: its clean-only claims and the others.
+    cleanGroup: new Int32Array(input.planned.length),
+    otherGroup: new Int32Array(input.planned.length),
+    scratch: newScratch(16),
   };
 
   for (let m = 0; m < spans.length; m++) {
@@ -576,157 +584,16 @@ export function runLedger(input: LedgerInput): LedgerResult {
       // Anything that expired before this month started was counted in the month it expired.
       const opening = shelf.onHand(span.startDay);
       const supplied = shelf.made_in(span.startDay, span.endDay);
-      let demand = 0;
-      let allocated = 0;
       const adjustments = adjustByMonth[slot(m, pool)]!;
-      let adjusted = 0;
-      let nextAdjustment = 0;
 
-      // 1. What was done: logged applications, in date order. Those that name no lot and fall
-      //    on the same day draw together (oldest first) and share the result in proportion.
-      // (Plain loops, no closures here: a total a closure writes to is boxed on every add.)
-      const logged = loggedByMonth.items;
-      const loggedEnd = loggedByMonth.start[slot(m, pool) + 1]!;
-      for (let t = loggedByMonth.start[slot(m, pool)]!; t < loggedEnd;) {
-        const firstDay = loggedDay[logged[t]!]!;
-        while (nextAdjustment < adjustments.length && adjustments[nextAdjustment]!.day < firstDay)
-          adjusted += adjustLot(adjustments[nextAdjustment++]!);
-        let end = t + 1;
-        if (loggedNames[logged[t]!] === 0)
-          while (
-            end < loggedEnd &&
-            loggedDay[logged[end]!] === firstDay &&
-            loggedNames[logged[end]!] === 0
-          )
-            end++;
-        const n = end - t;
-        if (n > scratchSize) grow(n);
-        let rest = 0;
-        for (let k = 0; k < n; k++) {
-          const i = logged[t + k]!;
-          const need = loggedNeed[i]!;
-          let got = 0;
-          if (loggedNames[i] === 1) {
-            const out = result.loggedDraws?.[i];
-            for (const d of input.logged[i]!.draws) {
-              const at = byId().get(d.lotId);
-              const lot = at && at.pool === pool ? at.index : -1;
-              const take = lot >= 0 ? Math.min(shelf.remaining[lot]!, Math.max(0, d.amount)) : 0;
-              if (lot >= 0 && take > 0) {
-                shelf.remaining[lot]! -= take;
-                out?.push({ lotId: shelf.lots[lot]!.id, amount: take });
-              }
-              got += take;
-              if (take < d.amount - AMOUNT_EPSILON)
-                result.overdrawn.push({ loggedIndex: i, lotId: d.lotId, amount: d.amount - take });
-            }
-          }
-          named[k] = got;
-          weights[k] = Math.max(0, need - got);
-          rest += Math.max(0, need - got);
-          demand += need;
-        }
-        drawShared(
-          shelf,
-          keep,
-          firstDay,
-          rest,
-          "manure-first",
-          logged,
-          t,
-          n,
-          weights,
-          shares,
-          result.loggedDraws,
-        );
-        for (let k = 0; k < n; k++) {
-          result.loggedGot[logged[t + k]!] = named[k]! + shares[k]!;
-          allocated += named[k]! + shares[k]!;
-        }
-        t = end;
-      }
-
+      const totals: MonthTotals = { demand: 0, allocated: 0, adjusted: 0 };
+      const cursor = replayLogged(walk, totals, slot(m, pool), pool, shelf, keep, adjustments);
       // Adjustments are logs too (on or before asOf), so they all come before planned claims.
-      while (nextAdjustment < adjustments.length)
-        adjusted += adjustLot(adjustments[nextAdjustment++]!);
+      for (let a = cursor; a < adjustments.length; a++)
+        totals.adjusted += adjustLot(adjustments[a]!);
 
-      // 2. What is planned: tier by tier. Within a tier, clean-only claims draw first (clean lots),
-      //    then the others (manure-fed lots first); each group draws once and shares pro rata.
-      //    A group served before others of the month draws first from the lots those cannot use.
-      const planned = plannedByMonth.items;
-      const plannedFrom = plannedByMonth.start[slot(m, pool)]!;
-      const plannedEnd = plannedByMonth.start[slot(m, pool) + 1]!;
-      const waiting = new Waiting(span.startDay, span.endDay);
-      for (let k = plannedFrom; k < plannedEnd; k++)
-        waiting.add(input.planned[planned[k]!]!.day, input.planned[planned[k]!]!.cleanOnly, 1);
-      for (let t = plannedFrom; t < plannedEnd;) {
-        const head = input.planned[planned[t]!]!;
-        let end = t + 1;
-        while (end < plannedEnd && tiers(planned[t]!, planned[end]!) === 0) end++;
-        for (let k = t; k < end; k++)
-          waiting.add(input.planned[planned[k]!]!.day, input.planned[planned[k]!]!.cleanOnly, -1);
-        const wanted = waiting.count > 0 ? waiting.wants : undefined;
-        const lo = shelf.usableFrom(head.day, keep);
-        const hi = shelf.usableTo(head.day);
-        let nClean = 0;
-        let nOther = 0;
-        let needClean = 0;
-        let needOther = 0;
-        for (let k = t; k < end; k++) {
-          const i = planned[k]!;
-          const c = input.planned[i]!;
-          if (c.cleanOnly) {
-            cleanGroup[nClean++] = i;
-            needClean += c.need;
-          } else {
-            otherGroup[nOther++] = i;
-            needOther += c.need;
-          }
-        }
-        const need = needClean + needOther;
-        const all = shelf.available(lo, hi, false);
-        const clean = needClean > 0 ? shelf.available(lo, hi, true) : 0;
-        // Clean-only claims can have at most the clean stock; everyone shares when short.
-        const shareClean = needClean > 0 ? Math.min(1, clean / needClean, all / need) : 1;
-        const shareAll = Math.min(1, all / need);
-        // The clean-only group first, then the others.
-        for (let g = 0; g < 2; g++) {
-          const group = g === 0 ? cleanGroup : otherGroup;
-          const n = g === 0 ? nClean : nOther;
-          if (n === 0) continue;
-          const groupNeed = g === 0 ? needClean : needOther;
-          const share = g === 0 ? shareClean : shareAll;
-          const mode = g === 0 ? "clean-only" : "manure-first";
-          if (n > scratchSize) grow(n);
-          for (let k = 0; k < n; k++) weights[k] = input.planned[group[k]!]!.need;
-          drawShared(
-            shelf,
-            keep,
-            head.day,
-            groupNeed * share,
-            mode,
-            group,
-            0,
-            n,
-            weights,
-            shares,
-            result.plannedDraws,
-            wanted,
-          );
-          for (let k = 0; k < n; k++) {
-            const i = group[k]!;
-            const c = input.planned[i]!;
-            const got = shares[k]!;
-            result.plannedGot[i] = got;
-            if (c.cleanOnly && got < c.need - AMOUNT_EPSILON)
-              result.manureRefused[i] = Math.min(c.need - got, all - clean);
-            demand += c.need;
-            allocated += got;
-          }
-        }
-        t = end;
-      }
-
+      servePlanned(walk, totals, slot(m, pool), span, shelf, keep);
+      const { demand, allocated, adjusted } = totals;
       const agedOut = shelf.ageOut(span.endDay, pool, result.agedOut);
       const closing = shelf.onHand(span.endDay);
       const gap = demand - allocated;
@@ -745,6 +612,229 @@ export function runLedger(input: LedgerInput): LedgerResult {
     }
   }
   return result;
+}
+
+/** What one month and pool of the walk shares (see runLedger). */
+interface Walk {
+  input: LedgerInput;
+  result: LedgerResult;
+  byId: () => Map<string, { shelf: Shelf; index: number; pool: Pool }>;
+  adjustLot: (adj: LedgerAdjustment) => number;
+  loggedByMonth: { items: Int32Array; start: Int32Array };
+  loggedDay: Int32Array;
+  loggedNeed: Float64Array;
+  loggedNames: Uint8Array;
+  plannedByMonth: { items: Int32Array; start: Int32Array };
+  tiers: (a: number, b: number) => number;
+  cleanGroup: Int32Array;
+  otherGroup: Int32Array;
+  scratch: Scratch;
+}
+
+/** Running totals of the month and pool being walked, added to in the walk's order. */
+interface MonthTotals {
+  demand: number;
+  allocated: number;
+  adjusted: number;
+}
+
+/** Scratch for one feeding group at a time: amounts named, weights and shares. */
+interface Scratch {
+  size: number;
+  named: Float64Array;
+  weights: Float64Array;
+  shares: Float64Array;
+}
+
+function newScratch(size: number): Scratch {
+  return {
+    size,
+    named: new Float64Array(size),
+    weights: new Float64Array(size),
+    shares: new Float64Array(size),
+  };
+}
+
+function growScratch(scratch: Scratch, n: number): void {
+  Object.assign(scratch, newScratch(Math.max(n, scratch.size * 2)));
+}
+
+// The month's two steps are functions of their own (not one long loop body), so the optimiser
+// compiles each apart and quickly; plain loops, no closures (a total a closure writes to is boxed
+// on every add).
+
+/**
+ * 1. What was done: a month's logged applications of one pool (slot `at`), in date order, with
+ * the hand adjustments dated before each. Returns how many adjustments it applied.
+ */
+function replayLogged(
+  w: Walk,
+  totals: MonthTotals,
+  at: number,
+  pool: Pool,
+  shelf: Shelf,
+  keep: number,
+  adjustments: readonly LedgerAdjustment[],
+): number {
+  const { input, result, loggedByMonth, loggedDay, loggedNeed, loggedNames, adjustLot, scratch } =
+    w;
+  let nextAdjustment = 0;
+  // Those that name no lot and fall on the same day draw together (oldest first) and share the
+  // result in proportion.
+  const logged = loggedByMonth.items;
+  const loggedEnd = loggedByMonth.start[at + 1]!;
+  for (let t = loggedByMonth.start[at]!; t < loggedEnd;) {
+    const firstDay = loggedDay[logged[t]!]!;
+    while (nextAdjustment < adjustments.length && adjustments[nextAdjustment]!.day < firstDay)
+      totals.adjusted += adjustLot(adjustments[nextAdjustment++]!);
+    let end = t + 1;
+    if (loggedNames[logged[t]!] === 0)
+      while (
+        end < loggedEnd &&
+        loggedDay[logged[end]!] === firstDay &&
+        loggedNames[logged[end]!] === 0
+      )
+        end++;
+    const n = end - t;
+    if (n > scratch.size) growScratch(scratch, n);
+    const { named, weights, shares } = scratch;
+    let rest = 0;
+    for (let k = 0; k < n; k++) {
+      const i = logged[t + k]!;
+      const need = loggedNeed[i]!;
+      let got = 0;
+      if (loggedNames[i] === 1) {
+        const out = result.loggedDraws?.[i];
+        for (const d of input.logged[i]!.draws) {
+          const at = w.byId().get(d.lotId);
+          const lot = at && at.pool === pool ? at.index : -1;
+          const take = lot >= 0 ? Math.min(shelf.remaining[lot]!, Math.max(0, d.amount)) : 0;
+          if (lot >= 0 && take > 0) {
+            shelf.remaining[lot]! -= take;
+            out?.push({ lotId: shelf.lots[lot]!.id, amount: take });
+          }
+          got += take;
+          if (take < d.amount - AMOUNT_EPSILON)
+            result.overdrawn.push({ loggedIndex: i, lotId: d.lotId, amount: d.amount - take });
+        }
+      }
+      named[k] = got;
+      weights[k] = Math.max(0, need - got);
+      rest += Math.max(0, need - got);
+      totals.demand += need;
+    }
+    drawShared(
+      shelf,
+      keep,
+      firstDay,
+      rest,
+      "manure-first",
+      logged,
+      t,
+      n,
+      weights,
+      shares,
+      result.loggedDraws,
+    );
+    for (let k = 0; k < n; k++) {
+      result.loggedGot[logged[t + k]!] = named[k]! + shares[k]!;
+      totals.allocated += named[k]! + shares[k]!;
+    }
+    t = end;
+  }
+
+  return nextAdjustment;
+}
+
+/**
+ * 2. What is planned: a month's planned claims of one pool (slot `at`), tier by tier. Within a
+ * tier, clean-only claims draw first (clean lots), then the others (manure-fed lots first); each
+ * group draws once and shares pro rata. A group served before others of the month draws first
+ * from the lots those cannot use.
+ */
+function servePlanned(
+  w: Walk,
+  totals: MonthTotals,
+  at: number,
+  span: LedgerSpan,
+  shelf: Shelf,
+  keep: number,
+): void {
+  const { input, result, plannedByMonth, tiers, cleanGroup, otherGroup, scratch } = w;
+  const planned = plannedByMonth.items;
+  const plannedFrom = plannedByMonth.start[at]!;
+  const plannedEnd = plannedByMonth.start[at + 1]!;
+  const waiting = new Waiting(span.startDay, span.endDay);
+  for (let k = plannedFrom; k < plannedEnd; k++)
+    waiting.add(input.planned[planned[k]!]!.day, input.planned[planned[k]!]!.cleanOnly, 1);
+  for (let t = plannedFrom; t < plannedEnd;) {
+    const head = input.planned[planned[t]!]!;
+    let end = t + 1;
+    while (end < plannedEnd && tiers(planned[t]!, planned[end]!) === 0) end++;
+    for (let k = t; k < end; k++)
+      waiting.add(input.planned[planned[k]!]!.day, input.planned[planned[k]!]!.cleanOnly, -1);
+    const wanted = waiting.count > 0 ? waiting.wants : undefined;
+    const lo = shelf.usableFrom(head.day, keep);
+    const hi = shelf.usableTo(head.day);
+    let nClean = 0;
+    let nOther = 0;
+    let needClean = 0;
+    let needOther = 0;
+    for (let k = t; k < end; k++) {
+      const i = planned[k]!;
+      const c = input.planned[i]!;
+      if (c.cleanOnly) {
+        cleanGroup[nClean++] = i;
+        needClean += c.need;
+      } else {
+        otherGroup[nOther++] = i;
+        needOther += c.need;
+      }
+    }
+    const need = needClean + needOther;
+    const all = shelf.available(lo, hi, false);
+    const clean = needClean > 0 ? shelf.available(lo, hi, true) : 0;
+    // Clean-only claims can have at most the clean stock; everyone shares when short.
+    const shareClean = needClean > 0 ? Math.min(1, clean / needClean, all / need) : 1;
+    const shareAll = Math.min(1, all / need);
+    // The clean-only group first, then the others.
+    for (let g = 0; g < 2; g++) {
+      const group = g === 0 ? cleanGroup : otherGroup;
+      const n = g === 0 ? nClean : nOther;
+      if (n === 0) continue;
+      const groupNeed = g === 0 ? needClean : needOther;
+      const share = g === 0 ? shareClean : shareAll;
+      const mode = g === 0 ? "clean-only" : "manure-first";
+      if (n > scratch.size) growScratch(scratch, n);
+      const { weights, shares } = scratch;
+      for (let k = 0; k < n; k++) weights[k] = input.planned[group[k]!]!.need;
+      drawShared(
+        shelf,
+        keep,
+        head.day,
+        groupNeed * share,
+        mode,
+        group,
+        0,
+        n,
+        weights,
+        shares,
+        result.plannedDraws,
+        wanted,
+      );
+      for (let k = 0; k < n; k++) {
+        const i = group[k]!;
+        const c = input.planned[i]!;
+        const got = shares[k]!;
+        result.plannedGot[i] = got;
+        if (c.cleanOnly && got < c.need - AMOUNT_EPSILON)
+          result.manureRefused[i] = Math.min(c.need - got, all - clean);
+        totals.demand += c.need;
+        totals.allocated += got;
+      }
+    }
+    t = end;
+  }
 }
 
 export const POOL_OF: Record<Material, Pool> = {
