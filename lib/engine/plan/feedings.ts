@@ -7,6 +7,27 @@ import { feedingId, type LoggedClaim, type PlannedClaim } from "@/lib/engine/pla
 import type { GardenInputs } from "@/lib/engine/plan/inputs";
 import type { ExplainValue, Explanation, PlannedFeeding } from "@/lib/engine/plan/results";
 
+/** Why a feeding inside a pre-harvest interval got what it did: clean lots only. */
+function cleanLotsExplanation(
+  c: PlannedClaim,
+  got: number,
+  refused: number,
+  shared: { quantity: ExplainValue; parts: Explanation[] },
+  refs: PlantingRefs,
+): Explanation {
+  const unit = c.pool === "castings" ? "kg" : "L";
+  return {
+    kind: "pre-harvest-clean-lots",
+    inputs: {
+      planting: refs.of(c.plantingId),
+      need: shared.quantity,
+      fromCleanLots: { unit, value: got },
+      manureStockRefused: { unit, value: refused },
+    },
+    parts: shared.parts,
+  };
+}
+
 /** One reference object per planting, shared by every explanation that names it. */
 export class PlantingRefs {
   private readonly refs = new Map<string, { ref: "planting"; id: string }>();
@@ -46,7 +67,7 @@ export function planFeedings(
   // JSON is the same. The plan is read-only to its callers.
   const cleanParts = new Map<
     Explanation,
-    { need: number; quantity: ExplainValue; parts: Explanation[] }
+    { need: number; quantity: ExplainValue; parts: Explanation[]; whole?: Explanation }
   >();
   const feedings: PlannedFeeding[] = [];
   const feedingDays: number[] = []; // day number of each feeding, for the sort below
@@ -86,18 +107,12 @@ export function planFeedings(
       coveragePct: c.need > 0 ? (100 * got) / c.need : 100,
       status: blocked ? "blocked" : "planned",
       draws: ledger.plannedDraws?.[i] ?? [],
-      explanation: shared
-        ? {
-            kind: "pre-harvest-clean-lots",
-            inputs: {
-              planting: refs.of(c.plantingId),
-              need: shared.quantity,
-              fromCleanLots: { unit: c.pool === "castings" ? "kg" : "L", value: got },
-              manureStockRefused: { unit: c.pool === "castings" ? "kg" : "L", value: refused },
-            },
-            parts: shared.parts,
-          }
-        : c.explanation,
+      explanation: !shared
+        ? c.explanation
+        : got === c.need && refused === 0
+          ? // Served in full from clean lots, as most are: the same words for every such date.
+            (shared.whole ??= cleanLotsExplanation(c, got, refused, shared, refs))
+          : cleanLotsExplanation(c, got, refused, shared, refs),
     });
   }
   const bedOf = new Map(inputs.plantings.map((p) => [p.id, p.bedId]));
