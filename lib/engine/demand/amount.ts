@@ -16,6 +16,9 @@ export interface RuleAmount {
   warnings: string[];
 }
 
+const MATERIALS: readonly string[] = ["castings", "leachate", "tea"];
+const METHODS: readonly string[] = ["top-dress", "side-dress", "soil-mix", "drench"];
+
 export function ruleAmount(
   rule: FeedingRule,
   planting: PlantingInput,
@@ -24,10 +27,10 @@ export function ruleAmount(
   field: string,
 ): RuleAmount {
   const r = `${field}.rule`;
-  if (!["castings", "leachate", "tea"].includes(rule.material)) {
+  if (!MATERIALS.includes(rule.material)) {
     throw new EngineInputError(`${r}.material`, `must be castings, leachate or tea`);
   }
-  if (!["top-dress", "side-dress", "soil-mix", "drench"].includes(rule.method)) {
+  if (!METHODS.includes(rule.method)) {
     throw new EngineInputError(`${r}.method`, `must be top-dress, side-dress, soil-mix or drench`);
   }
   const per = requireNonNegative(

@@ -24,6 +24,7 @@ export type {
 } from "@/lib/engine/demand/types";
 
 export const DEFAULT_PRIORITY = 3;
+const FEEDER_CLASSES: readonly string[] = ["heavy", "medium", "light"];
 
 interface Season {
   from: number; // month * 100 + day
@@ -106,7 +107,8 @@ export interface RuleDates {
   feederClass: PlantingInput["feederClass"];
   explanation: DemandResult["occurrences"][number]["explanation"];
   warnings: DemandResult["warnings"];
-  fed: IsoDate[];
+  /** Read-only: may be the recurrence cache's own frozen list. */
+  fed: readonly IsoDate[];
   blocked: DemandResult["blocked"];
 }
 
@@ -133,7 +135,7 @@ export function expandRuleDates(
     2,
   );
   const priority = requireFinite(planting.priority ?? DEFAULT_PRIORITY, `${field}.priority`);
-  if (!["heavy", "medium", "light"].includes(planting.feederClass)) {
+  if (!FEEDER_CLASSES.includes(planting.feederClass)) {
     throw new EngineInputError(`${field}.feederClass`, `must be heavy, medium or light`);
   }
   const rule = planting.rule ?? defaultRuleFor(planting.feederClass);
@@ -167,17 +169,24 @@ export function expandRuleDates(
   const phiReason = phiStart
     ? `pre-harvest interval: a source bin is fed manure, so nothing within ${preHarvestDays(planting)} days before harvest on ${planting.harvestDate ?? planting.endDate} (7 CFR 205.203(c)(1))`
     : "";
-  for (const date of dates) {
+  // Every date is fed until one is not: only then is a list of its own made (the expansion is
+  // the recurrence cache's, shared and frozen).
+  let fed: IsoDate[] | undefined;
+  for (let d = 0; d < dates.length; d++) {
+    const date = dates[d]!;
     if (!bed.indoor && !inSeason(date, season)) {
+      fed ??= dates.slice(0, d);
       result.blocked.push({
         plantingId: planting.id,
         date,
         reason: `outside the growing season (${season.text}); the bed is outdoors`,
       });
     } else if (phiStart && date >= phiStart) {
+      fed ??= dates.slice(0, d);
       result.blocked.push({ plantingId: planting.id, date, reason: phiReason });
-    } else result.fed.push(date);
+    } else fed?.push(date);
   }
+  result.fed = fed ?? dates;
   return result;
 }
 
