@@ -52,10 +52,23 @@ export function computePlan(inputs: GardenInputs, options: PlanOptions = {}): Ga
   const planSpans = ctx.spans.slice(ctx.firstPlanMonth);
   const refs = new PlantingRefs();
   const rows = monthRows(inputs, ctx, demand, ledger, planSpans);
-  const { feedings, days, blockedByPlanting } = planFeedings(inputs, ctx, demand, ledger, refs);
+  const { feedings, days, plantingOf, blockedByPlanting } = planFeedings(
+    inputs,
+    ctx,
+    demand,
+    ledger,
+    refs,
+  );
   preHarvestWarnings(blockedByPlanting, refs, warnings);
   agedOutWarnings(ledger, ctx, warnings);
-  const { coverage, beds: bedDemand } = coverageAndBeds(inputs, planSpans, feedings, days, refs);
+  const { coverage, beds: bedDemand } = coverageAndBeds(
+    inputs,
+    planSpans,
+    feedings,
+    days,
+    plantingOf,
+    refs,
+  );
   const bins = buildBins(supply.bins, supply.lots, inputs, ctx, warnings);
   const first = firstShortfall(feedings);
   const castingsRows = rows.filter((r) => r.pool === "castings");

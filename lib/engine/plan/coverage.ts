@@ -6,23 +6,28 @@ import type { GardenInputs } from "@/lib/engine/plan/inputs";
 import type { BedDemand, PlannedFeeding, PlantingCoverage } from "@/lib/engine/plan/results";
 import type { MonthSpan } from "@/lib/engine/core/dates";
 
+const MATERIAL_COUNT = 3;
+
+/** castings 0, leachate 1, tea 2: a coverage slot's material and a bed's sum column. */
+function materialIndex(material: Material): number {
+  return material === "castings" ? 0 : material === "leachate" ? 1 : 2;
+}
+
 export function coverageAndBeds(
   inputs: GardenInputs,
   planSpans: readonly MonthSpan[],
   feedings: readonly PlannedFeeding[],
   days: Int32Array,
+  plantingOf: Int32Array,
   refs: PlantingRefs,
 ): { coverage: PlantingCoverage[]; beds: BedDemand[] } {
   // Coverage per planting and month; demand per bed and month. The feedings are sorted by day, so a
   // month index walks forward with them; slots are numbered (planting, month, material) and
   // (bed, month) instead of string keys, sums are kept in typed arrays, and each row object is
   // made once at the end. Coverage keeps the order each slot was first seen.
-  const MATERIALS: Material[] = ["castings", "leachate", "tea"];
   const monthCount = planSpans.length;
-  const plantingIndex = new Map(inputs.plantings.map((p, i) => [p.id, i]));
-  const covOfSlot = new Int32Array(inputs.plantings.length * monthCount * MATERIALS.length).fill(
-    -1,
-  );
+  const covOfSlot = new Int32Array(inputs.plantings.length * monthCount * MATERIAL_COUNT).fill(-1);
+  const bedOfPlanting = new Int32Array(inputs.plantings.length).fill(-1);
   const covFirst: number[] = []; // index in feedings of each coverage row's first feeding
   const covMonth: number[] = [];
   const covNeed = new Float64Array(feedings.length);
@@ -35,9 +40,9 @@ export function coverageAndBeds(
     const f = feedings[k]!;
     const day = days[k]!;
     while (day >= planSpans[mi]!.endDay) mi++;
-    const slotKey =
-      (plantingIndex.get(f.plantingId)! * monthCount + mi) * MATERIALS.length +
-      MATERIALS.indexOf(f.material);
+    const p = plantingOf[k]!;
+    const material = materialIndex(f.material);
+    const slotKey = (p * monthCount + mi) * MATERIAL_COUNT + material;
     let c = covOfSlot[slotKey]!;
     if (c < 0) {
       c = covFirst.length;
@@ -47,16 +52,21 @@ export function coverageAndBeds(
     }
     covNeed[c]! += f.need;
     covGot[c]! += f.allocated;
-    let b = bedIndex.get(f.bedId);
-    if (b === undefined) {
-      b = bedSums.length;
-      bedIndex.set(f.bedId, b);
-      bedSums.push(new Float64Array(monthCount * BED_FIELDS).fill(NaN));
+    // The bed's slot, looked up by id once per planting (beds in the order first seen).
+    let b = bedOfPlanting[p]!;
+    if (b < 0) {
+      let known = bedIndex.get(f.bedId);
+      if (known === undefined) {
+        known = bedSums.length;
+        bedIndex.set(f.bedId, known);
+        bedSums.push(new Float64Array(monthCount * BED_FIELDS).fill(NaN));
+      }
+      b = bedOfPlanting[p] = known;
     }
     const sums = bedSums[b]!;
     const at = mi * BED_FIELDS;
     if (Number.isNaN(sums[at]!)) sums.fill(0, at, at + BED_FIELDS);
-    sums[at + MATERIALS.indexOf(f.material)]! += f.amount;
+    sums[at + material]! += f.amount;
     sums[at + 3]! += f.need;
     sums[at + 4]! += f.allocated;
   }

@@ -35,6 +35,9 @@ export interface PlannedClaim extends LedgerClaim {
   /** As expanded: kg castings, L undiluted leachate, L tea. */
   amount: number;
   explanation: Explanation;
+  /** Index of the planting in inputs.plantings, and of the rule among all rules expanded. */
+  plantingIndex: number;
+  ruleIndex: number;
 }
 
 /**
@@ -144,7 +147,9 @@ export function buildDemand(
   const density = ctx.castingsDensityKgPerL;
 
   // Every rule expands into its own feedings.
+  let ruleIndex = -1;
   for (const { p, i, rule: ruleInput, k, idOf } of eachRule(inputs.plantings)) {
+    ruleIndex++;
     const field = `plantings[${i}]`;
     const bed = beds.get(p.bedId);
     if (!bed) throw new EngineInputError(`${field}.bedId`, `no bed with id "${p.bedId}"`);
@@ -247,6 +252,8 @@ export function buildDemand(
         priority: r.priority,
         feederClass: r.feederClass,
         cleanOnly: phi !== null && date >= phi,
+        plantingIndex: i,
+        ruleIndex,
       });
     }
   }

@@ -7,12 +7,21 @@ import { feedingId, type LoggedClaim, type PlannedClaim } from "@/lib/engine/pla
 import type { GardenInputs } from "@/lib/engine/plan/inputs";
 import type { ExplainValue, Explanation, PlannedFeeding } from "@/lib/engine/plan/results";
 
+/** What a rule's feedings inside a pre-harvest interval share in their explanations. */
+interface CleanParts {
+  need: number;
+  quantity: ExplainValue;
+  parts: Explanation[];
+  /** The explanation of a feeding served in full (the same for every such date). */
+  whole?: Explanation;
+}
+
 /** Why a feeding inside a pre-harvest interval got what it did: clean lots only. */
 function cleanLotsExplanation(
   c: PlannedClaim,
   got: number,
   refused: number,
-  shared: { quantity: ExplainValue; parts: Explanation[] },
+  shared: CleanParts,
   refs: PlantingRefs,
 ): Explanation {
   const unit = c.pool === "castings" ? "kg" : "L";
@@ -43,6 +52,8 @@ export interface PlanFeedings {
   feedings: PlannedFeeding[];
   /** Day number of each feeding. */
   days: Int32Array;
+  /** Index in inputs.plantings of each feeding's planting. */
+  plantingOf: Int32Array;
   /** Per planting: the dates a pre-harvest interval kept manure-fed stock from, and how much. */
   blockedByPlanting: Map<string, { dates: string[]; kg: number }>;
 }
@@ -65,12 +76,10 @@ export function planFeedings(
   // Explanations share the parts that are the same for many rows (a planting's reference; a
   // rule's need and its own explanation): thousands of feedings need not carry copies, and the
   // JSON is the same. The plan is read-only to its callers.
-  const cleanParts = new Map<
-    Explanation,
-    { need: number; quantity: ExplainValue; parts: Explanation[]; whole?: Explanation }
-  >();
+  const cleanParts: (CleanParts | undefined)[] = []; // by rule
   const feedings: PlannedFeeding[] = [];
   const feedingDays: number[] = []; // day number of each feeding, for the sort below
+  const feedingPlanting: number[] = []; // index of each feeding's planting
   const blockedByPlanting = new Map<string, { dates: string[]; kg: number }>();
   for (let i = 0; i < planned.length; i++) {
     const c = planned[i]!;
@@ -85,14 +94,15 @@ export function planFeedings(
       blockedByPlanting.set(c.plantingId, b);
     }
     feedingDays.push(c.day);
-    let shared = c.cleanOnly ? cleanParts.get(c.explanation) : undefined;
+    feedingPlanting.push(c.plantingIndex);
+    let shared = c.cleanOnly ? cleanParts[c.ruleIndex] : undefined;
     if (c.cleanOnly && shared?.need !== c.need) {
       shared = {
         need: c.need,
         quantity: { unit: c.pool === "castings" ? "kg" : "L", value: c.need },
         parts: [c.explanation],
       };
-      cleanParts.set(c.explanation, shared);
+      cleanParts[c.ruleIndex] = shared;
     }
     feedings.push({
       id: c.id,
@@ -115,17 +125,19 @@ export function planFeedings(
           : cleanLotsExplanation(c, got, refused, shared, refs),
     });
   }
-  const bedOf = new Map(inputs.plantings.map((p) => [p.id, p.bedId]));
+  const plantingIndexOf = new Map(inputs.plantings.map((p, i) => [p.id, i]));
   for (let i = 0; i < logged.length; i++) {
     const c = logged[i]!;
     if (c.day < planStart || c.day > planEnd) continue;
     const a = inputs.logs.applications[c.index]!;
     const got = ledger.loggedGot[i]!;
     feedingDays.push(c.day);
+    const p = plantingIndexOf.get(a.plantingId)!;
+    feedingPlanting.push(p);
     feedings.push({
       id: a.plannedFeedingId ?? feedingId(a.plantingId, a.material, a.date),
       plantingId: a.plantingId,
-      bedId: bedOf.get(a.plantingId)!,
+      bedId: inputs.plantings[p]!.bedId,
       date: a.date,
       material: a.material,
       method: a.method,
@@ -165,12 +177,14 @@ export function planFeedings(
   // mixed array here made the optimised plan fall back to slow code again and again).
   const unsorted = feedings.slice();
   const days = new Int32Array(order.length);
+  const plantingOf = new Int32Array(order.length);
   for (let k = 0; k < order.length; k++) {
     feedings[k] = unsorted[order[k]!]!;
     days[k] = feedingDays[order[k]!]!;
+    plantingOf[k] = feedingPlanting[order[k]!]!;
   }
 
-  return { feedings, days, blockedByPlanting };
+  return { feedings, days, plantingOf, blockedByPlanting };
 }
 
 /** Indices of `feedings` by day then id, or null when two ids of one day are equal. */
