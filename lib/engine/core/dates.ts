@@ -51,9 +51,10 @@ function quickDayNumber(date: string): number | undefined {
   const m = digitAt(date, 5) * 10 + digitAt(date, 6);
   const d = digitAt(date, 8) * 10 + digitAt(date, 9);
   // NaN (a non-digit) fails every comparison below.
-  if (!(y >= MIN_YEAR && y <= MAX_YEAR && m >= 1 && m <= 12 && d >= 1 && d <= daysInMonth(y, m)))
-    return undefined;
-  return daysFromCivil(y, m, d);
+  if (!(y >= MIN_YEAR && y <= MAX_YEAR && m >= 1 && m <= 12 && d >= 1)) return undefined;
+  const at = (y - MIN_YEAR) * 12 + (m - 1);
+  if (d > MONTH_LENGTH[at]!) return undefined;
+  return MONTH_START[at]! + d - 1;
 }
 
 const isLeap = (y: number) => (y % 4 === 0 && y % 100 !== 0) || y % 400 === 0;
@@ -61,6 +62,11 @@ const MONTH_DAYS = [31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31];
 function daysInMonth(y: number, m: number): number {
   return m === 2 && isLeap(y) ? 29 : MONTH_DAYS[m - 1]!;
 }
+
+// Day number of the 1st and length of every month from MIN_YEAR to MAX_YEAR, built once from
+// daysFromCivil below: reading a date is then two table lookups.
+const MONTH_START = new Int32Array((MAX_YEAR - MIN_YEAR + 1) * 12);
+const MONTH_LENGTH = new Uint8Array(MONTH_START.length);
 
 // Days from civil and back (H. Hinnant, "chrono-Compatible Low-Level Date Algorithms"):
 // proleptic Gregorian calendar, eras of 400 years counted from 0000-03-01.
@@ -72,6 +78,12 @@ function daysFromCivil(y: number, m: number, d: number): number {
   const doe = yoe * 365 + Math.floor(yoe / 4) - Math.floor(yoe / 100) + doy;
   return era * 146097 + doe - 719468;
 }
+
+for (let y = MIN_YEAR; y <= MAX_YEAR; y++)
+  for (let m = 1; m <= 12; m++) {
+    MONTH_START[(y - MIN_YEAR) * 12 + m - 1] = daysFromCivil(y, m, 1);
+    MONTH_LENGTH[(y - MIN_YEAR) * 12 + m - 1] = daysInMonth(y, m);
+  }
 
 function parseDayNumber(date: unknown, field: string): number {
   if (typeof date !== "string") {
