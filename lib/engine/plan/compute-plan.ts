@@ -282,11 +282,12 @@ function agedOutWarnings(ledger: LedgerResult, ctx: PlanContext, warnings: PlanW
   }
 }
 
-/** First shortfall per pool in the plan's months. */
+/** First shortfall per pool in the plan's months (the feedings are in date order). */
 function firstShortfall(feedings: readonly PlannedFeeding[]): Record<Pool, string | null> {
   const EPS = AMOUNT_EPSILON;
   const first: Record<Pool, string | null> = { castings: null, leachate: null };
   for (let k = 0; k < feedings.length; k++) {
+    if (first.castings !== null && first.leachate !== null) break; // later dates cannot be earlier
     const f = feedings[k]!;
     if (f.need - f.allocated <= Math.max(EPS, f.need * 1e-9)) continue;
     const pool: Pool = f.material === "leachate" ? "leachate" : "castings";
