@@ -275,7 +275,7 @@ function drawShared(
   n: number,
   weights: Float64Array,
   out: Float64Array,
-  records: LedgerResult["plannedDraws"],
+  records: LedgerResult["plannedDraws"] | undefined,
   wanted?: Wanted,
 ): void {
   let total = 0;
@@ -286,21 +286,22 @@ function drawShared(
   }
   const lo = shelf.usableFrom(day, keep);
   const hi = shelf.usableTo(day);
-  let recorded = 0;
-  if (records !== undefined)
-    for (let k = 0; k < n; k++) if (records[group[from + k]!] !== undefined) recorded++;
-  // A group of one takes the whole draw (w / w is exactly 1): its list takes the records as drawn.
-  const drawn: { lotId: string; amount: number }[] | undefined =
-    recorded === 0 ? undefined : n === 1 ? records![group[from]!]! : [];
+  // `records` is given only for groups whose draws are kept (on or after recordDrawsFrom); a
+  // claim's list is made when something is drawn for it, at its size.
+  const drawn: { lotId: string; amount: number }[] | undefined = records ? [] : undefined;
   const got = shelf.draw(lo, hi, amount, mode, drawn, wanted);
   for (let k = 0; k < n; k++) out[k] = (got * weights[k]!) / total;
-  if (drawn && n > 1)
-    for (let k = 0; k < n; k++) {
-      const list = records![group[from + k]!];
-      if (!list) continue;
-      const part = weights[k]! / total;
-      for (const d of drawn) list.push({ lotId: d.lotId, amount: d.amount * part });
-    }
+  if (!drawn || drawn.length === 0) return;
+  // A group of one takes the whole draw (w / w is exactly 1): its list is the records as drawn
+  // (after any a log named itself).
+  for (let k = 0; k < n; k++) {
+    const i = group[from + k]!;
+    const part = weights[k]! / total;
+    const share = n === 1 ? drawn : drawn.map((d) => ({ lotId: d.lotId, amount: d.amount * part }));
+    const list = records![i];
+    if (list) list.push(...share);
+    else records![i] = share;
+  }
 }
 
 /**
@@ -339,15 +340,13 @@ class Waiting {
   };
 }
 
-/** An empty draw list for each claim on or after `from`, undefined before it (no lists when none is). */
+/** A slot for each claim's draw list, all empty until a draw is kept (none when no claim is on or after `from`). */
 function drawLists(
   claims: readonly { day: number }[],
   from: number,
 ): ({ lotId: string; amount: number }[] | undefined)[] | undefined {
   if (!claims.some((c) => c.day >= from)) return undefined;
-  const lists = new Array<{ lotId: string; amount: number }[] | undefined>(claims.length);
-  for (let i = 0; i < claims.length; i++) lists[i] = claims[i]!.day >= from ? [] : undefined;
-  return lists;
+  return new Array<{ lotId: string; amount: number }[] | undefined>(claims.length).fill(undefined);
 }
 
 /**
@@ -544,6 +543,7 @@ export function runLedger(input: LedgerInput): LedgerResult {
   const walk: Walk = {
     input,
     result,
+    recordFrom: from ?? Infinity,
     byId,
     adjustLot,
     loggedByMonth,
@@ -618,6 +618,8 @@ export function runLedger(input: LedgerInput): LedgerResult {
 interface Walk {
   input: LedgerInput;
   result: LedgerResult;
+  /** Draws of claims on or after this day are kept (recordDrawsFrom; Infinity: none). */
+  recordFrom: number;
   byId: () => Map<string, { shelf: Shelf; index: number; pool: Pool }>;
   adjustLot: (adj: LedgerAdjustment) => number;
   loggedByMonth: { items: Int32Array; start: Int32Array };
@@ -704,14 +706,15 @@ function replayLogged(
       const need = loggedNeed[i]!;
       let got = 0;
       if (loggedNames[i] === 1) {
-        const out = result.loggedDraws?.[i];
+        const keeps = result.loggedDraws !== undefined && loggedDay[i]! >= w.recordFrom;
         for (const d of input.logged[i]!.draws) {
           const at = w.byId().get(d.lotId);
           const lot = at && at.pool === pool ? at.index : -1;
           const take = lot >= 0 ? Math.min(shelf.remaining[lot]!, Math.max(0, d.amount)) : 0;
           if (lot >= 0 && take > 0) {
             shelf.remaining[lot]! -= take;
-            out?.push({ lotId: shelf.lots[lot]!.id, amount: take });
+            if (keeps)
+              (result.loggedDraws![i] ??= []).push({ lotId: shelf.lots[lot]!.id, amount: take });
           }
           got += take;
           if (take < d.amount - AMOUNT_EPSILON)
@@ -734,7 +737,7 @@ function replayLogged(
       n,
       weights,
       shares,
-      result.loggedDraws,
+      firstDay >= w.recordFrom ? result.loggedDraws : undefined,
     );
     for (let k = 0; k < n; k++) {
       result.loggedGot[logged[t + k]!] = named[k]! + shares[k]!;
@@ -819,7 +822,7 @@ function servePlanned(
         n,
         weights,
         shares,
-        result.plannedDraws,
+        head.day >= w.recordFrom ? result.plannedDraws : undefined,
         wanted,
       );
       for (let k = 0; k < n; k++) {

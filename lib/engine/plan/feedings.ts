@@ -7,6 +7,9 @@ import { feedingId, type LoggedClaim, type PlannedClaim } from "@/lib/engine/pla
 import type { GardenInputs } from "@/lib/engine/plan/inputs";
 import type { ExplainValue, Explanation, PlannedFeeding } from "@/lib/engine/plan/results";
 
+/** The draws of a feeding that drew nothing: one shared, frozen empty list (the plan is read-only). */
+const NO_DRAWS: PlannedFeeding["draws"] = Object.freeze([]) as unknown as PlannedFeeding["draws"];
+
 /** What a rule's feedings inside a pre-harvest interval share in their explanations. */
 interface CleanParts {
   need: number;
@@ -116,7 +119,7 @@ export function planFeedings(
       allocated: got,
       coveragePct: c.need > 0 ? (100 * got) / c.need : 100,
       status: blocked ? "blocked" : "planned",
-      draws: ledger.plannedDraws?.[i] ?? [],
+      draws: ledger.plannedDraws?.[i] ?? NO_DRAWS,
       explanation: !shared
         ? c.explanation
         : got === c.need && refused === 0
@@ -146,7 +149,7 @@ export function planFeedings(
       allocated: got,
       coveragePct: c.need > 0 ? (100 * got) / c.need : 100,
       status: "logged",
-      draws: ledger.loggedDraws?.[i] ?? [],
+      draws: ledger.loggedDraws?.[i] ?? NO_DRAWS,
       explanation: {
         kind: "application-logged",
         inputs: {

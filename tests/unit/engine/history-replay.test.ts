@@ -69,3 +69,39 @@ describe("history replay", () => {
     expect(june(plan).opening).toBe(0);
   });
 });
+
+describe("draws of a logged application in the plan's months", () => {
+  it("lists the named lot first, then what the rest took oldest first: new 1 kg, old 1 kg", () => {
+    // Lots: old 5 kg (1 May), new 1 kg (10 May). On 10 June a log names 2 kg from "new": it gets
+    // the 1 kg there, and the missing 1 kg is drawn oldest first, from "old". asOf 20 June, so
+    // the log is in the plan's first month and shows as a logged feeding with its draws.
+    const g = garden({
+      settings: { ...garden().settings, shelfLifeDays: 365 },
+      plantings: [planting({ id: "p", bedId: "bed", startDate: "2026-04-01" })],
+      stockLots: [
+        lot({ id: "old", madeOn: "2026-05-01", amount: 5 }),
+        lot({ id: "new", madeOn: "2026-05-10", amount: 1 }),
+      ],
+      logs: {
+        ...garden().logs,
+        applications: [
+          application({
+            id: "a",
+            plantingId: "p",
+            date: "2026-06-10",
+            amount: 2,
+            draws: [{ lotId: "new", amount: 2 }],
+          }),
+        ],
+      },
+      asOf: "2026-06-20",
+    });
+    const plan = computePlan(g, { months: 1, suggestions: false });
+    const f = plan.feedings.find((x) => x.status === "logged" && x.date === "2026-06-10")!;
+    expect(f.draws).toEqual([
+      { lotId: "new", amount: 1 },
+      { lotId: "old", amount: 1 },
+    ]);
+    expect(f.allocated).toBeCloseTo(2, 12);
+  });
+});
