@@ -3,7 +3,12 @@
 // so the optimiser compiles (and, should it need to, recompiles) it apart from the others.
 import { AMOUNT_EPSILON, type LedgerResult } from "@/lib/engine/balance/ledger";
 import type { PlanContext } from "@/lib/engine/plan/context";
-import { feedingId, type LoggedClaim, type PlannedClaim } from "@/lib/engine/plan/demand";
+import {
+  feedingId,
+  feedingIdPrefix,
+  type LoggedClaim,
+  type PlannedClaim,
+} from "@/lib/engine/plan/demand";
 import type { GardenInputs } from "@/lib/engine/plan/inputs";
 import type { ExplainValue, Explanation, PlannedFeeding } from "@/lib/engine/plan/results";
 
@@ -83,6 +88,8 @@ export function planFeedings(
   const feedings: PlannedFeeding[] = [];
   const feedingDays: number[] = []; // day number of each feeding, for the sort below
   const feedingPlanting: number[] = []; // index of each feeding's planting
+  const feedingRule: number[] = []; // rule of a planned feeding whose id is its rule's prefix + date; -1 otherwise
+  const rulePrefix: string[] = []; // by rule
   const blockedByPlanting = new Map<string, { dates: string[]; kg: number }>();
   for (let i = 0; i < planned.length; i++) {
     const c = planned[i]!;
@@ -98,6 +105,8 @@ export function planFeedings(
     }
     feedingDays.push(c.day);
     feedingPlanting.push(c.plantingIndex);
+    const prefix = (rulePrefix[c.ruleIndex] ??= feedingIdPrefix(c.plantingId, c.material));
+    feedingRule.push(c.id.length === prefix.length + c.date.length ? c.ruleIndex : -1);
     let shared = c.cleanOnly ? cleanParts[c.ruleIndex] : undefined;
     if (c.cleanOnly && shared?.need !== c.need) {
       shared = {
@@ -137,6 +146,7 @@ export function planFeedings(
     feedingDays.push(c.day);
     const p = plantingIndexOf.get(a.plantingId)!;
     feedingPlanting.push(p);
+    feedingRule.push(-1);
     feedings.push({
       id: a.plannedFeedingId ?? feedingId(a.plantingId, a.material, a.date),
       plantingId: a.plantingId,
@@ -170,7 +180,8 @@ export function planFeedings(
     const db = feedingDays[b]!;
     return da < db ? -1 : da > db ? 1 : feedings[a]!.id < feedings[b]!.id ? -1 : 1;
   };
-  let order = sortByDayThenId(feedingDays, feedings, ctx.planStartDay, ctx.planEndDay);
+  const idRank = idRanks(feedingRule, rulePrefix);
+  let order = sortByDayThenId(feedingDays, feedings, idRank, ctx.planStartDay, ctx.planEndDay);
   if (!order) {
     const byComparison = feedings.map((_, i) => i);
     byComparison.sort(byDateThenId);
@@ -190,10 +201,43 @@ export function planFeedings(
   return { feedings, days, plantingOf, blockedByPlanting };
 }
 
+/**
+ * A rank per feeding that orders same-day ids without comparing them: most ids are their rule's
+ * prefix (planting:material:) plus the date, so on one day they order as their prefixes do, and
+ * the prefixes (a few hundred) are sorted once instead of thousands of ids. Exact only when no
+ * prefix starts another (a planting id with colons could); then null, and ids are compared.
+ * Feedings whose id is not of that form get -1 and are compared by id.
+ */
+function idRanks(feedingRule: readonly number[], rulePrefix: readonly string[]): Int32Array | null {
+  const rules: number[] = [];
+  for (let r = 0; r < rulePrefix.length; r++) if (rulePrefix[r] !== undefined) rules.push(r);
+  rules.sort((a, b) =>
+    rulePrefix[a]! < rulePrefix[b]! ? -1 : rulePrefix[a]! > rulePrefix[b]! ? 1 : 0,
+  );
+  const rankOfRule = new Int32Array(rulePrefix.length).fill(-1);
+  let rank = 0;
+  for (let k = 0; k < rules.length; k++) {
+    const here = rulePrefix[rules[k]!]!;
+    const next = k + 1 < rules.length ? rulePrefix[rules[k + 1]!]! : undefined;
+    // Sorted, so a prefix that starts any other starts the next different one. Rules with the
+    // same prefix (two of one material on a planting) share a rank; their ids are compared.
+    if (next !== undefined && next !== here && next.startsWith(here)) return null;
+    rankOfRule[rules[k]!] = rank;
+    if (next !== here) rank++;
+  }
+  const ranks = new Int32Array(feedingRule.length);
+  for (let i = 0; i < feedingRule.length; i++) {
+    const r = feedingRule[i]!;
+    ranks[i] = r >= 0 ? rankOfRule[r]! : -1;
+  }
+  return ranks;
+}
+
 /** Indices of `feedings` by day then id, or null when two ids of one day are equal. */
 function sortByDayThenId(
   days: readonly number[],
   feedings: readonly { id: string }[],
+  idRank: Int32Array | null,
   firstDay: number,
   lastDay: number,
 ): Int32Array | null {
@@ -211,6 +255,12 @@ function sortByDayThenId(
   for (let i = 0; i < days.length; i++) order[starts[days[i]! - firstDay]!++] = i;
   let equal = false;
   const byId = (a: number, b: number) => {
+    // Both ranked: the ranks order them as their ids would (see idRanks).
+    if (idRank !== null) {
+      const ra = idRank[a]!;
+      const rb = idRank[b]!;
+      if (ra >= 0 && rb >= 0 && ra !== rb) return ra < rb ? -1 : 1;
+    }
     const ia = feedings[a]!.id;
     const ib = feedings[b]!.id;
     if (ia === ib) equal = true;
