@@ -176,9 +176,15 @@ export interface DateRange {
 }
 
 /** Checks a range and returns its day numbers; `to` before `from` is an error. */
+function quickOrNamed(date: unknown, field: string, key: string): number {
+  const day = typeof date === "string" ? quickDayNumber(date) : undefined;
+  return day ?? parseDayNumber(date, field + key);
+}
+
 export function rangeDays(range: DateRange, field = "range"): { from: number; to: number } {
-  const from = toDayNumber(range.from, `${field}.from`);
-  const to = toDayNumber(range.to, `${field}.to`);
+  // The field names are only built for a date that fails (plans ask this once per rule).
+  const from = quickOrNamed(range.from, field, ".from");
+  const to = quickOrNamed(range.to, field, ".to");
   if (to < from) {
     throw new EngineInputError(`${field}.to`, `must not be before ${field}.from (${range.from})`);
   }

@@ -164,10 +164,16 @@ function howText({ basis, count, per, unit }: HowWords): string {
 /** An explanation whose `text` is built on first read (an enumerable getter, so JSON keeps it). */
 function lazyText(build: () => string, inputs?: Explanation["inputs"]): Explanation {
   let text: string | undefined;
-  const explanation = {
+  if (inputs === undefined)
+    return {
+      get text() {
+        return (text ??= build());
+      },
+    };
+  return {
     get text() {
       return (text ??= build());
     },
+    inputs,
   };
-  return inputs === undefined ? explanation : Object.assign(explanation, { inputs });
 }

@@ -6,7 +6,13 @@ import type {
   GardenSeason,
   PlantingInput,
 } from "@/lib/engine/demand/types";
-import { fromDayNumber, parseMonthDay, rangeDays, toDayNumber } from "@/lib/engine/core/dates";
+import {
+  checkedDayNumber,
+  fromDayNumber,
+  parseMonthDay,
+  rangeDays,
+  toDayNumber,
+} from "@/lib/engine/core/dates";
 import { dflt } from "@/lib/engine/core/defaults";
 import { EngineInputError, requireFinite, requirePositive } from "@/lib/engine/core/errors";
 import { defaultRuleFor, type FeedingRule } from "@/lib/engine/demand/feeding-rules";
@@ -122,8 +128,11 @@ export function expandRuleDates(
     throw new EngineInputError(`${field}.id`, "must be a non-empty id");
   const season = parseSeason(options.season);
   const range = rangeDays(options.range, "range");
-  const start = toDayNumber(planting.startDate, `${field}.startDate`);
-  const end = toDayNumber(planting.endDate, `${field}.endDate`);
+  // Field names are only built for a date that fails (this runs once per rule of every planting).
+  const start =
+    checkedDayNumber(planting.startDate) ?? toDayNumber(planting.startDate, `${field}.startDate`);
+  const end =
+    checkedDayNumber(planting.endDate) ?? toDayNumber(planting.endDate, `${field}.endDate`);
   if (end < start)
     throw new EngineInputError(
       `${field}.endDate`,

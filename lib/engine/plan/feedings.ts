@@ -86,9 +86,13 @@ export function planFeedings(
   // JSON is the same. The plan is read-only to its callers.
   const cleanParts: (CleanParts | undefined)[] = []; // by rule
   const feedings: PlannedFeeding[] = [];
-  const feedingDays: number[] = []; // day number of each feeding, for the sort below
-  const feedingPlanting: number[] = []; // index of each feeding's planting
-  const feedingRule: number[] = []; // rule of a planned feeding whose id is its rule's prefix + date; -1 otherwise
+  // Per feeding, sized for every claim (at most that many feedings): its day number, its
+  // planting's index, and the rule of a planned feeding whose id is its rule's prefix + date
+  // (-1 otherwise), for the sort below.
+  const most = planned.length + logged.length;
+  const feedingDays = new Int32Array(most);
+  const feedingPlanting = new Int32Array(most);
+  const feedingRule = new Int32Array(most);
   const rulePrefix: string[] = []; // by rule
   const blockedByPlanting = new Map<string, { dates: string[]; kg: number }>();
   for (let i = 0; i < planned.length; i++) {
@@ -103,10 +107,10 @@ export function planFeedings(
       b.kg += refused;
       blockedByPlanting.set(c.plantingId, b);
     }
-    feedingDays.push(c.day);
-    feedingPlanting.push(c.plantingIndex);
+    feedingDays[feedings.length] = c.day;
+    feedingPlanting[feedings.length] = c.plantingIndex;
     const prefix = (rulePrefix[c.ruleIndex] ??= feedingIdPrefix(c.plantingId, c.material));
-    feedingRule.push(c.id.length === prefix.length + c.date.length ? c.ruleIndex : -1);
+    feedingRule[feedings.length] = c.id.length === prefix.length + c.date.length ? c.ruleIndex : -1;
     let shared = c.cleanOnly ? cleanParts[c.ruleIndex] : undefined;
     if (c.cleanOnly && shared?.need !== c.need) {
       shared = {
@@ -143,10 +147,10 @@ export function planFeedings(
     if (c.day < planStart || c.day > planEnd) continue;
     const a = inputs.logs.applications[c.index]!;
     const got = ledger.loggedGot[i]!;
-    feedingDays.push(c.day);
     const p = plantingIndexOf.get(a.plantingId)!;
-    feedingPlanting.push(p);
-    feedingRule.push(-1);
+    feedingDays[feedings.length] = c.day;
+    feedingPlanting[feedings.length] = p;
+    feedingRule[feedings.length] = -1;
     feedings.push({
       id: a.plannedFeedingId ?? feedingId(a.plantingId, a.material, a.date),
       plantingId: a.plantingId,
@@ -180,8 +184,15 @@ export function planFeedings(
     const db = feedingDays[b]!;
     return da < db ? -1 : da > db ? 1 : feedings[a]!.id < feedings[b]!.id ? -1 : 1;
   };
-  const idRank = idRanks(feedingRule, rulePrefix);
-  let order = sortByDayThenId(feedingDays, feedings, idRank, ctx.planStartDay, ctx.planEndDay);
+  const n = feedings.length;
+  const idRank = idRanks(feedingRule.subarray(0, n), rulePrefix);
+  let order = sortByDayThenId(
+    feedingDays.subarray(0, n),
+    feedings,
+    idRank,
+    ctx.planStartDay,
+    ctx.planEndDay,
+  );
   if (!order) {
     const byComparison = feedings.map((_, i) => i);
     byComparison.sort(byDateThenId);
@@ -189,7 +200,7 @@ export function planFeedings(
   }
   // Reordered in place through typed arrays, so every run sees the same kinds of arrays (a
   // mixed array here made the optimised plan fall back to slow code again and again).
-  const unsorted = feedings.slice();
+  const unsorted = feedings.slice(); // (pointers only)
   const days = new Int32Array(order.length);
   const plantingOf = new Int32Array(order.length);
   for (let k = 0; k < order.length; k++) {
@@ -208,7 +219,7 @@ export function planFeedings(
  * prefix starts another (a planting id with colons could); then null, and ids are compared.
  * Feedings whose id is not of that form get -1 and are compared by id.
  */
-function idRanks(feedingRule: readonly number[], rulePrefix: readonly string[]): Int32Array | null {
+function idRanks(feedingRule: Int32Array, rulePrefix: readonly string[]): Int32Array | null {
   const rules: number[] = [];
   for (let r = 0; r < rulePrefix.length; r++) if (rulePrefix[r] !== undefined) rules.push(r);
   rules.sort((a, b) =>
@@ -235,7 +246,7 @@ function idRanks(feedingRule: readonly number[], rulePrefix: readonly string[]):
 
 /** Indices of `feedings` by day then id, or null when two ids of one day are equal. */
 function sortByDayThenId(
-  days: readonly number[],
+  days: Int32Array,
   feedings: readonly { id: string }[],
   idRank: Int32Array | null,
   firstDay: number,
