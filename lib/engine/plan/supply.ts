@@ -39,7 +39,7 @@ export interface BinSupplyInfo {
 }
 
 export const harvestLotId = (binId: string, date: string) => `${binId}:harvest-tray:${date}`;
-export const collectLotId = (binId: string, date: string) => `${binId}:collect:${date}`;
+export const collectLotIdPrefix = (binId: string) => `${binId}:collect:`;
 
 export function trayVolumeL(bin: BinInput, field: string): number {
   return trayInsideVolumeL(
@@ -266,12 +266,13 @@ export function buildSupply(
       lastDrain + 1,
     );
     if (rate.litresPerDay > 0) {
+      const idPrefix = collectLotIdPrefix(bin.id); // a lot a day: the prefix is made once
       for (let day = start; day <= Math.min(ctx.planEndDay, retired); day++) {
         if (dormant.has(monthOfDay(day))) continue;
         const date = fromDayNumber(day);
         lots.push({
           lot: {
-            id: collectLotId(bin.id, date),
+            id: idPrefix + date,
             pool: "leachate",
             madeDay: day,
             amount: rate.litresPerDay,
