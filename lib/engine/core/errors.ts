@@ -14,29 +14,37 @@ export class EngineInputError extends Error {
 }
 
 /** A finite number, or an EngineInputError naming the field. */
-export function requireFinite(value: unknown, field: string): number {
+// `suffix` is joined to `field` only when the check fails: callers that check thousands of
+// values pass a base ("plantings[3]") and a suffix (".plantCount") instead of building each name.
+
+export function requireFinite(value: unknown, field: string, suffix = ""): number {
   if (typeof value !== "number" || !Number.isFinite(value)) {
-    throw new EngineInputError(field, `must be a finite number (got ${String(value)})`);
+    throw new EngineInputError(field + suffix, `must be a finite number (got ${String(value)})`);
   }
   return value;
 }
 
 /** A finite number > 0 and ≤ max (when given). */
-export function requirePositive(value: unknown, field: string, max?: number): number {
-  const n = requireFinite(value, field);
-  if (n <= 0) throw new EngineInputError(field, `must be greater than 0 (got ${n})`);
+export function requirePositive(value: unknown, field: string, max?: number, suffix = ""): number {
+  const n = requireFinite(value, field, suffix);
+  if (n <= 0) throw new EngineInputError(field + suffix, `must be greater than 0 (got ${n})`);
   if (max !== undefined && n > max) {
-    throw new EngineInputError(field, `must be at most ${max} (got ${n})`);
+    throw new EngineInputError(field + suffix, `must be at most ${max} (got ${n})`);
   }
   return n;
 }
 
 /** A finite number ≥ 0 and ≤ max (when given). */
-export function requireNonNegative(value: unknown, field: string, max?: number): number {
-  const n = requireFinite(value, field);
-  if (n < 0) throw new EngineInputError(field, `must not be negative (got ${n})`);
+export function requireNonNegative(
+  value: unknown,
+  field: string,
+  max?: number,
+  suffix = "",
+): number {
+  const n = requireFinite(value, field, suffix);
+  if (n < 0) throw new EngineInputError(field + suffix, `must not be negative (got ${n})`);
   if (max !== undefined && n > max) {
-    throw new EngineInputError(field, `must be at most ${max} (got ${n})`);
+    throw new EngineInputError(field + suffix, `must be at most ${max} (got ${n})`);
   }
   return n;
 }

@@ -19,56 +19,67 @@ export interface RuleAmount {
 const MATERIALS: readonly string[] = ["castings", "leachate", "tea"];
 const METHODS: readonly string[] = ["top-dress", "side-dress", "soil-mix", "drench"];
 
+/** The explanation of an amount nobody asked to explain (ruleAmount with `explain` false). */
+const NOT_EXPLAINED: Explanation = Object.freeze({ text: "" });
+const NO_WARNINGS: string[] = Object.freeze([]) as unknown as string[];
+
+/**
+ * `explain` false skips the words (a plan builds its own explanations of amounts); field names
+ * are built only for an input that fails, since a plan asks this for every rule of every planting.
+ */
 export function ruleAmount(
   rule: FeedingRule,
   planting: PlantingInput,
   bed: BedInput,
   density: number,
   field: string,
+  explain = true,
 ): RuleAmount {
-  const r = `${field}.rule`;
   if (!MATERIALS.includes(rule.material)) {
-    throw new EngineInputError(`${r}.material`, `must be castings, leachate or tea`);
+    throw new EngineInputError(`${field}.rule.material`, `must be castings, leachate or tea`);
   }
   if (!METHODS.includes(rule.method)) {
-    throw new EngineInputError(`${r}.method`, `must be top-dress, side-dress, soil-mix or drench`);
+    throw new EngineInputError(
+      `${field}.rule.method`,
+      `must be top-dress, side-dress, soil-mix or drench`,
+    );
   }
   const per = requireNonNegative(
     rule.amount,
-    `${r}.amount`,
+    field,
     rule.basis === "percent-of-mix" ? 100 : 1000,
+    ".rule.amount",
   );
   const unit =
     rule.amountUnit ??
     (rule.material === "castings" && rule.basis !== "percent-of-mix" ? "L" : "L");
   if (unit !== "L" && unit !== "kg")
-    throw new EngineInputError(`${r}.amountUnit`, `must be "L" or "kg"`);
+    throw new EngineInputError(`${field}.rule.amountUnit`, `must be "L" or "kg"`);
   if (unit === "kg" && rule.material !== "castings") {
     throw new EngineInputError(
-      `${r}.amountUnit`,
+      `${field}.rule.amountUnit`,
       "only castings can be measured in kg; liquids are litres",
     );
   }
-  const warnings: string[] = [];
+  let warnings: string[] | undefined;
   let base: number;
-  // The words are built only when read: a plan computes thousands of amounts and shows few texts.
   // What the amount is made of, in words only when the text is read (a plan expands thousands of
   // rules and reads none of these texts): data here, words in howText.
   let how: HowWords;
   switch (rule.basis) {
     case "per-plant": {
-      const n = requirePositive(planting.plantCount, `${field}.plantCount`, 100_000);
+      const n = requirePositive(planting.plantCount, field, 100_000, ".plantCount");
       base = per * n;
       how = { basis: "per-plant", count: n, per, unit };
       break;
     }
     case "per-area": {
       const area = planting.areaM2 ?? bed.areaM2;
-      const a = requirePositive(area, `${field}.areaM2`, 10_000);
+      const a = requirePositive(area, field, 10_000, ".areaM2");
       base = per * a;
       how = { basis: "per-area", count: a, per, unit };
       if (rule.material === "castings" && unit === "L" && per > 12.7 + 1e-9) {
-        warnings.push(`top-dressing ${fmt(per, 1)} mm deep is more than ½ in (12.7 mm)`);
+        (warnings ??= []).push(`top-dressing ${fmt(per, 1)} mm deep is more than ½ in (12.7 mm)`);
       }
       break;
     }
@@ -76,17 +87,21 @@ export function ruleAmount(
     case "percent-of-mix": {
       const v = requirePositive(
         planting.containerVolumeL ?? bed.containerVolumeL,
-        `${field}.containerVolumeL`,
+        field,
         2000,
+        ".containerVolumeL",
       );
       if (rule.basis === "percent-of-mix") {
         if (rule.material !== "castings") {
-          throw new EngineInputError(`${r}.basis`, "percent-of-mix applies to castings only");
+          throw new EngineInputError(
+            `${field}.rule.basis`,
+            "percent-of-mix applies to castings only",
+          );
         }
         base = (per / 100) * v;
         how = { basis: "percent-of-mix", count: v, per, unit };
         if (per > dflt("pottingMixWarnAbovePercent")) {
-          warnings.push(
+          (warnings ??= []).push(
             `${fmt(per, 1)} % castings is above the 20 % by volume Atiyeh et al. (2000) recommend`,
           );
         }
@@ -97,11 +112,13 @@ export function ruleAmount(
       break;
     }
     default:
-      throw new EngineInputError(`${r}.basis`, `unknown basis "${String(rule.basis)}"`);
+      throw new EngineInputError(`${field}.rule.basis`, `unknown basis "${String(rule.basis)}"`);
   }
 
   if (rule.material === "castings") {
     const kg = unit === "kg" ? base : base * density;
+    if (!explain)
+      return { amount: kg, explanation: NOT_EXPLAINED, warnings: warnings ?? NO_WARNINGS };
     return {
       amount: kg,
       explanation: lazyText(
@@ -111,16 +128,19 @@ export function ruleAmount(
             : `${howText(how)} × ${fmt(density, 2)} kg/L = ${fmt(kg, 3)} kg castings`,
         { amountPer: per, bulkDensityKgPerL: density },
       ),
-      warnings,
+      warnings: warnings ?? [],
     };
   }
   if (rule.material === "leachate") {
     const parts = requireNonNegative(
       rule.dilutionWaterParts ?? dflt("leachateDilutionWaterParts"),
-      `${r}.dilutionWaterParts`,
+      field,
       1000,
+      ".rule.dilutionWaterParts",
     );
     const undiluted = base / (1 + parts);
+    if (!explain)
+      return { amount: undiluted, explanation: NOT_EXPLAINED, warnings: warnings ?? NO_WARNINGS };
     return {
       amount: undiluted,
       explanation: lazyText(
@@ -130,13 +150,15 @@ export function ruleAmount(
             : `${howText(how)} = ${fmt(undiluted, 3)} L leachate, undiluted`,
         { solutionL: base, waterParts: parts },
       ),
-      warnings,
+      warnings: warnings ?? [],
     };
   }
+  if (!explain)
+    return { amount: base, explanation: NOT_EXPLAINED, warnings: warnings ?? NO_WARNINGS };
   return {
     amount: base,
     explanation: lazyText(() => `${howText(how)} = ${fmt(base, 3)} L tea`),
-    warnings,
+    warnings: warnings ?? [],
   };
 }
 

@@ -38,6 +38,15 @@ interface Season {
   text: string;
 }
 
+/** A plan passes the same range for every planting: read it once. */
+function rangeOf(range: DemandOptions["range"]): { from: number; to: number } {
+  if (!lastRange || lastRange.from !== range.from || lastRange.to !== range.to)
+    lastRange = { from: range.from, to: range.to, days: rangeDays(range, "range") };
+  return lastRange.days;
+}
+
+let lastRange: { from: string; to: string; days: { from: number; to: number } } | undefined;
+
 /** Checks frost dates; the last spring frost must come before the first fall frost. */
 export function parseSeason(season: GardenSeason, field = "season"): Season {
   // A plan passes the same season for every planting: check it once.
@@ -127,7 +136,7 @@ export function expandRuleDates(
   if (typeof planting.id !== "string" || planting.id === "")
     throw new EngineInputError(`${field}.id`, "must be a non-empty id");
   const season = parseSeason(options.season);
-  const range = rangeDays(options.range, "range");
+  const range = rangeOf(options.range);
   // Field names are only built for a date that fails (this runs once per rule of every planting).
   const start =
     checkedDayNumber(planting.startDate) ?? toDayNumber(planting.startDate, `${field}.startDate`);
@@ -143,12 +152,19 @@ export function expandRuleDates(
     "bulkDensityKgPerL",
     2,
   );
-  const priority = requireFinite(planting.priority ?? DEFAULT_PRIORITY, `${field}.priority`);
+  const priority = requireFinite(planting.priority ?? DEFAULT_PRIORITY, field, ".priority");
   if (!FEEDER_CLASSES.includes(planting.feederClass)) {
     throw new EngineInputError(`${field}.feederClass`, `must be heavy, medium or light`);
   }
   const rule = planting.rule ?? defaultRuleFor(planting.feederClass);
-  const { amount, explanation, warnings } = ruleAmount(rule, planting, bed, density, field);
+  const { amount, explanation, warnings } = ruleAmount(
+    rule,
+    planting,
+    bed,
+    density,
+    field,
+    options.explain !== false,
+  );
   const result: RuleDates = {
     plantingId: planting.id,
     bedId: planting.bedId,
@@ -158,11 +174,14 @@ export function expandRuleDates(
     priority,
     feederClass: planting.feederClass,
     explanation,
-    warnings: warnings.map((text) => ({
-      plantingId: planting.id,
-      field: `${field}.rule.amount`,
-      text,
-    })),
+    warnings:
+      warnings.length === 0
+        ? []
+        : warnings.map((text) => ({
+            plantingId: planting.id,
+            field: `${field}.rule.amount`,
+            text,
+          })),
     fed: [],
     blocked: [],
   };

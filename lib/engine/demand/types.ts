@@ -49,6 +49,8 @@ export interface DemandOptions {
   /** Some source bin's feedstock includes manure: apply the pre-harvest interval. */
   manureFeedstock?: boolean;
   bulkDensityKgPerL?: number;
+  /** false: skip the words of each amount's explanation (the plan writes its own). */
+  explain?: boolean;
 }
 
 export interface DemandWarning {

@@ -78,18 +78,29 @@ interface RuleOfPlanting {
 const sameId = (id: string) => id;
 
 function eachRule(plantings: readonly PlantingInput[]): RuleOfPlanting[] {
-  return plantings.flatMap((p, i): RuleOfPlanting[] => {
+  const out: RuleOfPlanting[] = [];
+  for (let i = 0; i < plantings.length; i++) {
+    const p = plantings[i]!;
     // One rule's dates never repeat (expandRecurrence), so its ids are unique as they are.
-    if (p.rules.length <= 1)
-      return [{ p, i, rule: p.rules[0] ?? null, k: p.rules.length === 0 ? null : 0, idOf: sameId }];
+    if (p.rules.length <= 1) {
+      out.push({
+        p,
+        i,
+        rule: p.rules[0] ?? null,
+        k: p.rules.length === 0 ? null : 0,
+        idOf: sameId,
+      });
+      continue;
+    }
     const seen = new Map<string, number>();
     const idOf = (id: string) => {
       const n = (seen.get(id) ?? 0) + 1;
       seen.set(id, n);
       return n === 1 ? id : `${id}:${n}`;
     };
-    return p.rules.map((rule, k) => ({ p, i, rule, k, idOf }));
-  });
+    for (let k = 0; k < p.rules.length; k++) out.push({ p, i, rule: p.rules[k]!, k, idOf });
+  }
+  return out;
 }
 
 /** expandRuleDates for rule k of a planting: its errors name `plantings[i].rules[k].…`. */
@@ -146,6 +157,7 @@ export function buildDemand(
   const plantings = new Map<string, { p: DemandPlanting; rules: FeedingRuleInput[] }>();
   const density = ctx.castingsDensityKgPerL;
 
+  const expandOptions = { range, season, bulkDensityKgPerL: density, explain: false };
   // Every rule expands into its own feedings.
   let ruleIndex = -1;
   for (const { p, i, rule: ruleInput, k, idOf } of eachRule(inputs.plantings)) {
@@ -191,7 +203,7 @@ export function buildDemand(
       areaM2: bed.areaM2 ?? undefined,
       containerVolumeL: bed.containerVolumeL ?? undefined,
     };
-    const r = expandRule(dp, db, { range, season, bulkDensityKgPerL: density }, field, k);
+    const r = expandRule(dp, db, expandOptions, field, k);
     for (const w of r.warnings)
       warnings.push({
         kind: "mix-above-limit",
