@@ -121,6 +121,7 @@ export function buildSupply(
   const bins: BinSupplyInfo[] = [];
   inputs.bins.forEach((bin, b) => {
     const field = `bins[${b}]`;
+    const binRef = { ref: "bin", id: bin.id } as const; // shared by the bin's explanations
     const retired =
       bin.retiredOn === null ? Infinity : toDayNumber(bin.retiredOn, `${field}.retiredOn`);
     const input = binForecastInput(bin, inputs, field);
@@ -145,7 +146,7 @@ export function buildSupply(
         explanation: {
           kind: "harvest-logged",
           inputs: {
-            bin: { ref: "bin", id: bin.id },
+            bin: binRef,
             castings: { unit: "kg", value: h.castingsKg },
           },
         },
@@ -164,7 +165,7 @@ export function buildSupply(
       const explanation: Explanation = {
         kind: "harvest-due-not-logged",
         inputs: {
-          bin: { ref: "bin", id: bin.id },
+          bin: binRef,
           due: { date },
           countedOn: { date: fromDayNumber(madeDay) },
           castings: { unit: "kg", value: forecast.perHarvestKg },
@@ -190,7 +191,7 @@ export function buildSupply(
     const castingsExplanation: Explanation = {
       kind: "castings-forecast",
       inputs: {
-        bin: { ref: "bin", id: bin.id },
+        bin: binRef,
         trayVolume: { unit: "L", value: input.trayInsideVolumeL },
         fillFraction: { unit: "ratio", value: bin.fillFraction ?? dflt("fillFraction") },
         bulkDensity: {
@@ -234,14 +235,14 @@ export function buildSupply(
         source: "drain-logged",
         explanation: {
           kind: "drain-logged",
-          inputs: { bin: { ref: "bin", id: bin.id }, liquid: { unit: "L", value: d.litres } },
+          inputs: { bin: binRef, liquid: { unit: "L", value: d.litres } },
         },
       });
     }
     const rate = leachateRate(
       {
         binId: bin.id,
-        collections: drains.map((d) => ({ date: d.date, litres: d.litres })),
+        collections: drains, // each has its date and litres
         estimateLPerWeek: bin.leachateEstimateLPerWeek ?? undefined,
         asOf: inputs.asOf,
       },
@@ -250,7 +251,7 @@ export function buildSupply(
     const rateExplanation: Explanation = {
       kind: "leachate-rate",
       inputs: {
-        bin: { ref: "bin", id: bin.id },
+        bin: binRef,
         rate: { unit: "L/day", value: rate.litresPerDay },
         from: { text: rate.source },
         drainsUsed: { unit: "count", value: rate.collectionsUsed },
