@@ -212,7 +212,8 @@ function preHarvestWarnings(
   refs: PlantingRefs,
   warnings: PlanWarning[],
 ): void {
-  for (const [plantingId, b] of blockedByPlanting) {
+  // forEach, not for…of: no [key, value] pair per entry.
+  blockedByPlanting.forEach((b, plantingId) => {
     warnings.push({
       kind: "pre-harvest-block",
       plantingId,
@@ -224,14 +225,16 @@ function preHarvestWarnings(
           first: { date: b.dates[0]! },
           feedings: { unit: "count", value: b.dates.length },
           manureStockRefused: { unit: "kg", value: b.kg },
-          rule: {
-            text: "7 CFR 205.203(c)(1): 120 days before harvest if the edible part touches soil, 90 otherwise",
-          },
+          rule: PRE_HARVEST_RULE,
         },
       },
     });
-  }
+  });
 }
+
+const PRE_HARVEST_RULE = {
+  text: "7 CFR 205.203(c)(1): 120 days before harvest if the edible part touches soil, 90 otherwise",
+} as const;
 
 /** Aged out: castings lot by lot; leachate summed per bin and month (a lot a day). */
 function agedOutWarnings(ledger: LedgerResult, ctx: PlanContext, warnings: PlanWarning[]): void {

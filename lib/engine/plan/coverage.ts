@@ -97,7 +97,7 @@ export function coverageAndBeds(
   }
   // Months of a bed in month order (NaN marks a month with no feeding of the bed).
   const bedDemand: BedDemand[] = [];
-  for (const [bedId, b] of bedIndex) {
+  bedIndex.forEach((b, bedId) => {
     const sums = bedSums[b]!;
     const months: BedDemand["months"] = [];
     for (let m = 0; m < monthCount; m++) {
@@ -113,7 +113,7 @@ export function coverageAndBeds(
       });
     }
     bedDemand.push({ bedId, months });
-  }
+  });
 
   return { coverage, beds: bedDemand };
 }

@@ -1,4 +1,5 @@
 import {
+  checkedDayNumber,
   fromDayNumber,
   monthOfDay,
   monthSet,
@@ -45,8 +46,12 @@ export interface LeachateRate {
 function checkCollections(list: readonly LeachateCollection[] | undefined, field: string) {
   return (list ?? [])
     .map((c, i) => ({
-      day: toDayNumber(c.date, `${field}[${i}].date`),
-      litres: requireNonNegative(c.litres, `${field}[${i}].litres`, 1000),
+      // Names built only for a value that fails: a bin can have years of weekly drains.
+      day: checkedDayNumber(c.date) ?? toDayNumber(c.date, `${field}[${i}].date`),
+      litres:
+        typeof c.litres === "number" && c.litres >= 0 && c.litres <= 1000
+          ? c.litres
+          : requireNonNegative(c.litres, `${field}[${i}].litres`, 1000),
       date: c.date,
     }))
     .sort((a, b) => a.day - b.day);
