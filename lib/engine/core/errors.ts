@@ -13,10 +13,10 @@ export class EngineInputError extends Error {
   }
 }
 
-/** A finite number, or an EngineInputError naming the field. */
-// `suffix` is joined to `field` only when the check fails: callers that check thousands of
-// values pass a base ("plantings[3]") and a suffix (".plantCount") instead of building each name.
+// `suffix` is joined to `field` only when a check fails: callers that check thousands of values
+// pass a base ("plantings[3]") and a suffix (".plantCount") instead of building each name.
 
+/** A finite number, or an EngineInputError naming the field. */
 export function requireFinite(value: unknown, field: string, suffix = ""): number {
   if (typeof value !== "number" || !Number.isFinite(value)) {
     throw new EngineInputError(field + suffix, `must be a finite number (got ${String(value)})`);
