@@ -708,8 +708,8 @@ function replayLogged(
       if (loggedNames[i] === 1) {
         const keeps = result.loggedDraws !== undefined && loggedDay[i]! >= w.recordFrom;
         for (const d of input.logged[i]!.draws) {
-          const at = w.byId().get(d.lotId);
-          const lot = at && at.pool === pool ? at.index : -1;
+          const found = w.byId().get(d.lotId);
+          const lot = found && found.pool === pool ? found.index : -1;
           const take = lot >= 0 ? Math.min(shelf.remaining[lot]!, Math.max(0, d.amount)) : 0;
           if (lot >= 0 && take > 0) {
             shelf.remaining[lot]! -= take;
